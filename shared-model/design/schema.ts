@@ -1,0 +1,179 @@
+/**
+ * The WattLedger design document, version 1: one JSON document per converter design.
+ * The zod schema here is the single source of truth; the JSON Schema in assets/ is generated from it
+ * (`npm run schema`). Units follow design/parts.ts: SI suffixes on keys, temperatures in °C.
+ */
+import { z } from 'zod';
+import {
+  capacitorSchema,
+  controllerSchema,
+  diodeSchema,
+  inductorSchema,
+  mosfetSchema,
+  nonNegative,
+  positive,
+  resistorSchema,
+  temperatureC,
+} from './parts.ts';
+
+export const DESIGN_FORMAT = 'wattledger.design';
+export const DESIGN_VERSION = 1;
+
+export const specificationSchema = z.object({
+  vinMinV: positive(),
+  vinNomV: positive(),
+  vinMaxV: positive(),
+  voutV: positive(),
+  ratedLoadA: positive(),
+  switchingFrequencyHz: positive(),
+  ambientC: temperatureC(),
+  /** Largest duty cycle the controller can command (0 < maxDuty < 1). */
+  maxDuty: positive(),
+  /** Optional targets the results are checked against. */
+  targets: z
+    .object({
+      efficiencyAtRated: positive().optional(),
+      outputRippleV: positive().optional(),
+      /** Inductor ripple as a fraction of the rated inductor current (peak to peak). */
+      inductorRippleRatio: positive().optional(),
+    })
+    .optional(),
+});
+
+export const topologySchema = z.object({
+  kind: z.enum(['buck', 'boost']),
+  rectifier: z.enum(['diode', 'synchronous']),
+  /** Synchronous designs only: forced PWM keeps CCM with negative current; diode emulation enters DCM. */
+  lightLoad: z.enum(['forced-pwm', 'diode-emulation']),
+  /** Dead time after the rectifier FET turns off, before the control switch turns on. */
+  deadTimeBeforeOnS: nonNegative(),
+  /** Dead time after the control switch turns off, before the rectifier FET turns on. */
+  deadTimeAfterOffS: nonNegative(),
+  /** Where the current-sense resistor sits, if present. */
+  senseLocation: z.enum(['none', 'input', 'switch', 'inductor', 'output']),
+});
+
+const capacitorSlot = z.object({ part: capacitorSchema, count: z.number().int().min(1).max(100) });
+
+export const partsSchema = z.object({
+  /** The control switch: high side in a buck, low side in a boost. */
+  switch: mosfetSchema,
+  /** A diode (rectifier "diode") or a MOSFET (rectifier "synchronous"). */
+  rectifier: z.discriminatedUnion('kind', [diodeSchema, mosfetSchema]),
+  inductor: inductorSchema,
+  inputCapacitor: capacitorSlot,
+  outputCapacitor: capacitorSlot,
+  senseResistor: resistorSchema.optional(),
+  controller: controllerSchema,
+});
+
+export const ROLES = [
+  'switch',
+  'rectifier',
+  'inductor',
+  'inputCapacitor',
+  'outputCapacitor',
+  'senseResistor',
+  'controller',
+] as const;
+export type Role = (typeof ROLES)[number];
+
+export const surfaceMaterialSchema = z.enum(['metal', 'glass', 'plastic']);
+
+export const thermalPathSchema = z.discriminatedUnion('kind', [
+  /** Junction (or hot spot) to ambient through the board: Tj = Ta + P · thetaJa. */
+  z.object({
+    kind: z.literal('direct'),
+    thetaJaKPerW: positive(),
+    /** Optional junction-to-top characterisation parameter (JESD51): case top = Tj − psiJt · P. */
+    psiJtKPerW: nonNegative().optional(),
+  }),
+  /** Hot-spot rise stated by the maker at a dissipation: theta = riseK / atW. */
+  z.object({ kind: z.literal('rise'), riseK: positive(), atW: positive() }),
+  /** Through the part's thetaJc and an interface thetaCs to a heatsink shared by its parts. */
+  z.object({ kind: z.literal('heatsink'), heatsinkId: z.string().min(1), thetaCsKPerW: nonNegative() }),
+]);
+
+export const heatsinkSchema = z.object({
+  id: z.string().min(1).max(80),
+  name: z.string().min(1).max(120),
+  thetaSaKPerW: positive(),
+  surface: surfaceMaterialSchema,
+});
+
+export const touchSchema = z.object({
+  /** Can a person touch this part's surface (case top, or its heatsink) in normal use? */
+  touchable: z.boolean(),
+  surface: surfaceMaterialSchema,
+});
+
+export const contactSchema = z.enum(['brief', 'held', 'surface-1min', 'surface-10min', 'surface-8h']);
+
+export const touchLimitRowSchema = z.object({
+  id: z.string().min(1),
+  standard: z.string().min(1),
+  clause: z.string(),
+  material: surfaceMaterialSchema,
+  contact: contactSchema,
+  limitC: temperatureC(),
+  /** True where the value was recalled rather than confirmed against the printed standard. */
+  recalled: z.boolean(),
+  note: z.string(),
+});
+
+export const thermalSchema = z.object({
+  heatsinks: z.array(heatsinkSchema).max(20),
+  paths: z.object({
+    switch: thermalPathSchema,
+    rectifier: thermalPathSchema,
+    inductor: thermalPathSchema,
+    inputCapacitor: thermalPathSchema,
+    outputCapacitor: thermalPathSchema,
+    senseResistor: thermalPathSchema.optional(),
+    controller: thermalPathSchema,
+  }),
+  touch: z.partialRecord(z.enum(ROLES), touchSchema),
+  /** The contact a person may make with touchable surfaces; the strictest fitting row is used. */
+  contact: contactSchema,
+  /** Replacement rows for the shipped touch-limit table (empty: the shipped table is used). */
+  customTouchLimits: z.array(touchLimitRowSchema).max(100),
+});
+
+export const marginsSchema = z.object({
+  /** Every part must stay this many kelvin below its temperature limit. */
+  temperatureMarginK: nonNegative(),
+  /** Fraction of the capacitor ripple-current rating that may be used (0..1]. */
+  rippleCurrentDerating: positive(),
+  /** Fraction of the derated resistor power rating that may be used (0..1]. */
+  resistorPowerDerating: positive(),
+  /** Fraction of a switch or diode voltage rating that may be used (0..1]. */
+  voltageDerating: positive(),
+  /** Required electrolytic life in hours at the design's ambient. */
+  requiredLifeHours: positive().optional(),
+});
+
+export const designSchema = z.object({
+  format: z.literal(DESIGN_FORMAT),
+  version: z.literal(DESIGN_VERSION),
+  name: z.string().min(1).max(120),
+  revision: z.string().max(40),
+  author: z.string().max(120),
+  notes: z.string().max(10000),
+  spec: specificationSchema,
+  topology: topologySchema,
+  parts: partsSchema,
+  thermal: thermalSchema,
+  margins: marginsSchema,
+});
+
+export type Specification = z.infer<typeof specificationSchema>;
+export type Topology = z.infer<typeof topologySchema>;
+export type Parts = z.infer<typeof partsSchema>;
+export type ThermalPath = z.infer<typeof thermalPathSchema>;
+export type Heatsink = z.infer<typeof heatsinkSchema>;
+export type SurfaceMaterial = z.infer<typeof surfaceMaterialSchema>;
+export type Contact = z.infer<typeof contactSchema>;
+export type TouchLimitRow = z.infer<typeof touchLimitRowSchema>;
+export type Thermal = z.infer<typeof thermalSchema>;
+export type Margins = z.infer<typeof marginsSchema>;
+export type Design = z.infer<typeof designSchema>;

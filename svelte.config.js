@@ -1,0 +1,2 @@
+// Svelte 5 compiles TypeScript in <script lang="ts"> natively; no preprocessor is needed.
+export default {};
