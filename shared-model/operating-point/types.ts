@@ -56,12 +56,44 @@ export interface ConductionParameters {
   diodeRdOhm: number;
   inductorDcrOhm: number;
   senseOhm: number;
+  /** Total ESR of the output capacitor bank (all parallel parts); default: the design's ESR / count. */
+  outputCapacitorEsrOhm?: number;
+}
+
+/** Part temperatures the conduction parameters are evaluated at, °C (see conductionParameters). */
+export interface PartTemps {
+  switchC: number;
+  rectifierC: number;
+  inductorC: number;
+  senseC: number;
+}
+
+/** Options of solveOperatingPoint: the seam where the loss ledger makes duty and power self-consistent. */
+export interface SolveOptions {
+  /**
+   * Total loss (W) of the power stage at a trial operating point. When given, the duty cycle is solved so
+   * that Vin · inputA = Pout + lossOf(op) instead of by volt-second balance.
+   */
+  lossOf?: (op: OperatingPoint) => number;
+  /**
+   * Optional: losses paid by the source outside the inductor path (charge pulses of output capacitance and
+   * reverse recovery, gate drive from Vin, controller quiescent current). They add to inputA but do not
+   * move the duty cycle; lossOf must then leave them out. Called once on the final point.
+   */
+  sourceLossOf?: (op: OperatingPoint) => number;
 }
 
 export interface OperatingPoint {
   conditions: Conditions;
   periodS: Seconds;
+  /** Output voltage reached: the specified Vout when regulated, else the highest the limits allow. */
   voutV: Volts;
+  /** The specified output voltage (design spec.voutV). */
+  targetVoutV: Volts;
+  /** False when the duty limit or the conversion-ratio limit keeps Vout from its target (see warnings). */
+  regulated: boolean;
+  /** How the duty cycle was found: volt-second balance with drops, or the power balance with lossOf. */
+  dutyMethod: 'volt-second' | 'power-balance';
   outputPowerW: number;
   /** Control-switch duty cycle (on time / period). */
   dutyCycle: Fraction;
@@ -72,6 +104,7 @@ export interface OperatingPoint {
   mode: ConductionMode;
   inductanceH: number;
   inductor: CurrentStats & { rippleA: Amps; valleyA: Amps };
+  /** Time origin: the control switch turns on at t = 0; segments follow on, rectifier, idle (DCM). */
   waveforms: {
     inductor: Waveform;
     switch: Waveform;
@@ -80,7 +113,7 @@ export interface OperatingPoint {
     outputCapacitor: Waveform;
     /** Current in the sense resistor (all zeros when there is none). */
     sense: Waveform;
-    /** Average current drawn from the source (DC, after the input capacitor). */
+    /** Average current drawn from the source (DC, after the input capacitor), incl. sourceLossOf / Vin. */
     inputA: Amps;
   };
   stats: {
@@ -93,6 +126,10 @@ export interface OperatingPoint {
   edges: { turnOn: SwitchingEdge; turnOff: SwitchingEdge };
   /** Voltage stress on each semiconductor when it blocks (switch drain-source, rectifier reverse). */
   stress: { switchV: Volts; rectifierV: Volts };
+  /**
+   * Output-voltage ripple, peak to peak: capacitive (charge method), ESR (ESR · current swing) and the
+   * exact peak to peak of their sum in time (not a sum of magnitudes, not root-sum-square). ESL ignored.
+   */
   outputRipple: { capacitiveV: Volts; esrV: Volts; totalV: Volts };
   /** Boost only: right-half-plane zero and current-mode output pole. */
   smallSignal?: { rhpZeroHz: Hertz; outputPoleHz: Hertz };

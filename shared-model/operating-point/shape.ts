@@ -1,0 +1,129 @@
+/**
+ * The inductor-current shape for a given duty cycle D (and output voltage), CCM or DCM.
+ *
+ * CCM: mean IL from charge balance (buck IL = Io, boost IL = Io/D'); the off interval, whose voltage
+ *   is known, sets the ripple: ΔI = (Eoff + Roff·IL) · D'·T / L; valley/peak = IL ∓ ΔI/2.
+ * DCM (when the rectifier blocks reverse current and the CCM valley would be < 0): for a given D the
+ *   off slope and the output charge balance fix Ipk and D2:
+ *     Ipk·L = (Eoff + Roff·Ipk/2) · D2·T   and   buck: Io = Ipk·(D + D2)/2,  boost: Io = Ipk·D2/2,
+ *   a quadratic in Ipk with one positive root. At the boundary (D + D2 = 1) both shapes coincide.
+ * residualV = D·vL,on + D2·vL,off (volt-second balance; zero at the solution without lossOf), with the
+ *   drops taken at each interval's mean current (exact mean of a straight line).
+ * Terms E/R: see circuit.ts. Source: Erickson & Maksimović 2nd ed. ch. 2 and 5 (CCM ripple, DCM charge
+ * balance) [memory for chapters]; METHODS.md §1–2.
+ */
+import { inductanceAt, type Circuit } from './circuit.ts';
+
+export interface Shape {
+  dcm: boolean;
+  d: number;
+  d2: number;
+  idle: number;
+  /** Mean inductor current, A. */
+  il: number;
+  ipk: number;
+  /** Valley current (0 in DCM). */
+  iv: number;
+  /** Peak-to-peak inductor ripple (Ipk in DCM). */
+  ripple: number;
+  inductanceH: number;
+  /** Mean current the power stage draws through its input path (before sourceLossOf), A. */
+  iin: number;
+  /** Vin after an input sense resistor's drop. */
+  vin1: number;
+  vo: number;
+  residualV: number;
+}
+
+export function newShape(): Shape {
+  return { dcm: false, d: 0, d2: 0, idle: 0, il: 0, ipk: 0, iv: 0, ripple: 0, inductanceH: 0, iin: 0, vin1: 0, vo: 0, residualV: 0 };
+}
+
+/** Fills `s` with the shape at duty d and output voltage vo; returns s. */
+export function shapeAt(c: Circuit, d: number, vo: number, s: Shape): Shape {
+  const T = c.periodS;
+  const io = c.loadA;
+  const esr = c.esrOhm;
+  const rIn = c.rInputSenseOhm;
+  const vo1 = vo + c.rOutputSenseOhm * io;
+  const dp = Math.max(1 - d, 1e-12);
+  const roff = c.rOffOhm + esr;
+  const ron = c.boost ? c.rOnOhm : c.rOnOhm + esr;
+  s.d = d;
+  s.vo = vo;
+
+  // CCM attempt.
+  let il = c.boost ? io / dp : io;
+  let iin = c.boost ? il : d * il;
+  let vin1 = c.vinV - rIn * iin;
+  let eon = c.boost ? vin1 : vin1 - vo1 + esr * io;
+  let eoff = c.boost ? vo1 + c.vf0V - vin1 - esr * io : vo1 + c.vf0V - esr * io;
+  let L = inductanceAt(c, il);
+  const vOff = eoff + roff * il;
+  const ripple = (vOff * dp * T) / L;
+  const iv = il - ripple / 2;
+  if (!(c.blocksReverse && iv < 0)) {
+    s.dcm = false;
+    s.d2 = 1 - d;
+    s.idle = 0;
+    s.il = il;
+    s.ripple = ripple;
+    s.iv = iv;
+    s.ipk = il + ripple / 2;
+    s.inductanceH = L;
+    s.iin = iin;
+    s.vin1 = vin1;
+    s.residualV = d * (eon - ron * il) - dp * vOff;
+    return s;
+  }
+
+  // DCM.
+  let ipk: number;
+  let d2: number;
+  if (!c.boost) {
+    const a = eoff;
+    const b = roff / 2;
+    L = inductanceAt(c, io);
+    const qa = L + b * d * T;
+    const qb = T * (a * d - 2 * b * io);
+    const qc = 2 * a * io * T;
+    const root = Math.sqrt(Math.max(qb * qb + 4 * qa * qc, 0));
+    ipk = qb > 0 ? (2 * qc) / (qb + root) : (root - qb) / (2 * qa);
+    d2 = ipk > 0 ? Math.min(Math.max((2 * io) / ipk - d, 0), dp) : 0;
+    il = io;
+    iin = (d * ipk) / 2;
+    vin1 = c.vinV - rIn * iin;
+    eon = vin1 - vo1 + esr * io;
+  } else {
+    const a0 = vo1 + c.vf0V - esr * io - c.vinV + rIn * io;
+    const b = roff / 2 + (rIn * d) / 2;
+    ipk = 0;
+    d2 = 0;
+    for (let k = 0; k < 50; k++) {
+      const p = 2 * b * io * T;
+      const root = Math.sqrt(Math.max(p * p + 8 * L * a0 * io * T, 0));
+      ipk = (p + root) / (2 * L);
+      d2 = ipk > 0 ? Math.min((2 * io) / ipk, dp) : 0;
+      il = (ipk * (d + d2)) / 2;
+      const next = inductanceAt(c, il);
+      if (Math.abs(next - L) <= 1e-13 * L) break;
+      L = next;
+    }
+    iin = il;
+    vin1 = c.vinV - rIn * iin;
+    eon = vin1;
+    eoff = vo1 + c.vf0V - vin1 - esr * io;
+  }
+  s.dcm = true;
+  s.d2 = d2;
+  s.idle = Math.max(1 - d - d2, 0);
+  s.il = il;
+  s.ipk = ipk;
+  s.iv = 0;
+  s.ripple = ipk;
+  s.inductanceH = L;
+  s.iin = iin;
+  s.vin1 = vin1;
+  s.residualV = d * (eon - (ron * ipk) / 2) - d2 * (eoff + (roff * ipk) / 2);
+  return s;
+}

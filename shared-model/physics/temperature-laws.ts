@@ -1,0 +1,83 @@
+/**
+ * Temperature laws: how the resistive and forward-drop parameters of the parts move with temperature.
+ *
+ * Formulas (T in °C unless stated):
+ * - MOSFET RDS(on), linear:    R(T) = R25 · (1 + α · (T − 25))
+ *                   power law: R(T) = R25 · ((T + 273.15) / 298.15)^k          (kelvin ratio)
+ *                   two-point: α = (ratio − 1)/(Thot − 25) or k = ln(ratio)/ln((Thot + 273.15)/298.15),
+ *                              fitted so the law passes through R(Thot) = ratio · R25.
+ * - Copper (IEC 60028):        R(T) = R20 · (1 + 0.00393 · (T − 20))
+ * - Diode threshold:           VF0(T) = VF0(25 °C) + dVF0/dT · (T − 25)
+ * - Reverse leakage:           IR(T) = IR(T0) · 2^((T − T0)/ΔTdouble)
+ * - Resistor, capacitor ESR:   R(T) = R25 · (1 + tc · (T − 25))
+ * Assumptions: part parameters without a stated reference temperature are taken at 25 °C; the linear
+ * laws are clamped at 0 so a resistance or forward drop never turns negative far outside their range.
+ * Sources: METHODS.md §5 (RDS(on) laws, common practice; physics in Sze & Ng, Baliga [memory]), §8 (IEC
+ * 60028 copper, α20 0.00393/K [memory for α]), §6 (VF0 drift and leakage doubling, common practice).
+ */
+import type { Capacitor, Diode, Mosfet, Resistor } from '../design/parts.ts';
+
+const KELVIN_OFFSET = 273.15;
+const REFERENCE_C = 25;
+/** IEC 60028 temperature coefficient of annealed copper at 20 °C, 1/K. */
+export const COPPER_ALPHA20_PER_K = 0.00393;
+
+function linearClamped(value25: number, coPerK: number, tC: number, referenceC = REFERENCE_C): number {
+  const v = value25 * (1 + coPerK * (tC - referenceC));
+  return v > 0 ? v : 0;
+}
+
+function powerLaw(value25: number, exponent: number, tC: number): number {
+  const ratio = (tC + KELVIN_OFFSET) / (REFERENCE_C + KELVIN_OFFSET);
+  return ratio > 0 ? value25 * Math.pow(ratio, exponent) : 0;
+}
+
+/** RDS(on) of a MOSFET at junction temperature tC, Ω. */
+export function rdsOnAt(mosfet: Mosfet, tC: number): number {
+  const r25 = mosfet.rdsOn25Ohm;
+  const law = mosfet.rdsTemperatureLaw;
+  switch (law.law) {
+    case 'linear':
+      return linearClamped(r25, law.alphaPerK, tC);
+    case 'power':
+      return powerLaw(r25, law.exponent, tC);
+    case 'two-point': {
+      if (law.shape === 'linear') {
+        const span = law.hotC - REFERENCE_C;
+        const alpha = span !== 0 ? (law.hotRatio - 1) / span : 0;
+        return linearClamped(r25, alpha, tC);
+      }
+      const logT = Math.log((law.hotC + KELVIN_OFFSET) / (REFERENCE_C + KELVIN_OFFSET));
+      const k = logT !== 0 && Number.isFinite(logT) ? Math.log(law.hotRatio) / logT : 0;
+      return powerLaw(r25, k, tC);
+    }
+  }
+}
+
+/** Copper winding resistance at tC from its value at 20 °C (IEC 60028), Ω. */
+export function copperResistanceAt(r20Ohm: number, tC: number): number {
+  return linearClamped(r20Ohm, COPPER_ALPHA20_PER_K, tC, 20);
+}
+
+/** Diode threshold voltage VF0 at junction temperature tC (VF0 stated at 25 °C), V. */
+export function diodeVf0At(diode: Diode, tC: number): number {
+  const v = diode.vf0V + diode.vfTempCoVPerK * (tC - REFERENCE_C);
+  return v > 0 ? v : 0;
+}
+
+/** Diode reverse leakage at tC: doubles every `leakageDoublingK` kelvin from its reference point, A. */
+export function leakageAt(diode: Diode, tC: number): number {
+  // Exponent capped so the result stays finite (2^1000 ≈ 1e301) for any input the schema admits.
+  const doublings = Math.min((tC - diode.leakageAtC) / diode.leakageDoublingK, 1000);
+  return diode.leakageA * Math.pow(2, doublings);
+}
+
+/** Resistor value at tC (value stated at 25 °C), Ω. */
+export function resistorAt(resistor: Resistor, tC: number): number {
+  return linearClamped(resistor.resistanceOhm, resistor.tempCoPerK, tC);
+}
+
+/** ESR of one capacitor at tC (ESR stated at 25 °C and fs), Ω. */
+export function esrAt(capacitor: Capacitor, tC: number): number {
+  return linearClamped(capacitor.esrOhm, capacitor.esrTempCoPerK, tC);
+}
