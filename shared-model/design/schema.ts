@@ -4,38 +4,29 @@
  * (`npm run schema`). Units follow design/parts.ts: SI suffixes on keys, temperatures in °C.
  */
 import { z } from 'zod';
-import {
-  capacitorSchema,
-  controllerSchema,
-  diodeSchema,
-  inductorSchema,
-  mosfetSchema,
-  nonNegative,
-  positive,
-  resistorSchema,
-  temperatureC,
-} from './parts.ts';
+import { capacitorSchema, controllerSchema, diodeSchema, inductorSchema, mosfetSchema, resistorSchema } from './parts.ts';
+import { LIMITS as L, fractionUpToOne, nonNegative, openFraction, positive, temperatureC } from './numbers.ts';
 
 export const DESIGN_FORMAT = 'wattledger.design';
 export const DESIGN_VERSION = 1;
 
 export const specificationSchema = z.object({
-  vinMinV: positive(),
-  vinNomV: positive(),
-  vinMaxV: positive(),
-  voutV: positive(),
-  ratedLoadA: positive(),
-  switchingFrequencyHz: positive(),
-  ambientC: temperatureC(),
+  vinMinV: positive(L.voltageV),
+  vinNomV: positive(L.voltageV),
+  vinMaxV: positive(L.voltageV),
+  voutV: positive(L.voltageV),
+  ratedLoadA: positive(L.loadA),
+  switchingFrequencyHz: z.number().gte(L.frequencyMinHz).lte(L.frequencyMaxHz),
+  ambientC: temperatureC(L.ambientMinC, L.ambientMaxC),
   /** Largest duty cycle the controller can command (0 < maxDuty < 1). */
-  maxDuty: positive(),
+  maxDuty: openFraction(),
   /** Optional targets the results are checked against. */
   targets: z
     .object({
-      efficiencyAtRated: positive().optional(),
-      outputRippleV: positive().optional(),
+      efficiencyAtRated: openFraction().optional(),
+      outputRippleV: positive(L.voltageV).optional(),
       /** Inductor ripple as a fraction of the rated inductor current (peak to peak). */
-      inductorRippleRatio: positive().optional(),
+      inductorRippleRatio: positive(4).optional(),
     })
     .optional(),
 });
@@ -46,9 +37,9 @@ export const topologySchema = z.object({
   /** Synchronous designs only: forced PWM keeps CCM with negative current; diode emulation enters DCM. */
   lightLoad: z.enum(['forced-pwm', 'diode-emulation']),
   /** Dead time after the rectifier FET turns off, before the control switch turns on. */
-  deadTimeBeforeOnS: nonNegative(),
+  deadTimeBeforeOnS: nonNegative(L.deadTimeS),
   /** Dead time after the control switch turns off, before the rectifier FET turns on. */
-  deadTimeAfterOffS: nonNegative(),
+  deadTimeAfterOffS: nonNegative(L.deadTimeS),
   /** Where the current-sense resistor sits, if present. */
   senseLocation: z.enum(['none', 'input', 'switch', 'inductor', 'output']),
 });
@@ -84,20 +75,24 @@ export const thermalPathSchema = z.discriminatedUnion('kind', [
   /** Junction (or hot spot) to ambient through the board: Tj = Ta + P · thetaJa. */
   z.object({
     kind: z.literal('direct'),
-    thetaJaKPerW: positive(),
+    thetaJaKPerW: positive(L.thetaKPerW),
     /** Optional junction-to-top characterisation parameter (JESD51): case top = Tj − psiJt · P. */
-    psiJtKPerW: nonNegative().optional(),
+    psiJtKPerW: nonNegative(L.thetaKPerW).optional(),
   }),
   /** Hot-spot rise stated by the maker at a dissipation: theta = riseK / atW. */
-  z.object({ kind: z.literal('rise'), riseK: positive(), atW: positive() }),
+  z.object({ kind: z.literal('rise'), riseK: positive(1000), atW: positive(L.powerW) }),
   /** Through the part's thetaJc and an interface thetaCs to a heatsink shared by its parts. */
-  z.object({ kind: z.literal('heatsink'), heatsinkId: z.string().min(1), thetaCsKPerW: nonNegative() }),
+  z.object({
+    kind: z.literal('heatsink'),
+    heatsinkId: z.string().min(1).max(80),
+    thetaCsKPerW: nonNegative(L.thetaKPerW),
+  }),
 ]);
 
 export const heatsinkSchema = z.object({
   id: z.string().min(1).max(80),
   name: z.string().min(1).max(120),
-  thetaSaKPerW: positive(),
+  thetaSaKPerW: positive(L.thetaKPerW),
   surface: surfaceMaterialSchema,
 });
 
@@ -115,7 +110,7 @@ export const touchLimitRowSchema = z.object({
   clause: z.string(),
   material: surfaceMaterialSchema,
   contact: contactSchema,
-  limitC: temperatureC(),
+  limitC: z.number().gt(L.touchLimitMinC).lte(L.touchLimitMaxC),
   /** True where the value was recalled rather than confirmed against the printed standard. */
   recalled: z.boolean(),
   note: z.string(),
@@ -141,15 +136,15 @@ export const thermalSchema = z.object({
 
 export const marginsSchema = z.object({
   /** Every part must stay this many kelvin below its temperature limit. */
-  temperatureMarginK: nonNegative(),
+  temperatureMarginK: nonNegative(200),
   /** Fraction of the capacitor ripple-current rating that may be used (0..1]. */
-  rippleCurrentDerating: positive(),
+  rippleCurrentDerating: fractionUpToOne(),
   /** Fraction of the derated resistor power rating that may be used (0..1]. */
-  resistorPowerDerating: positive(),
+  resistorPowerDerating: fractionUpToOne(),
   /** Fraction of a switch or diode voltage rating that may be used (0..1]. */
-  voltageDerating: positive(),
+  voltageDerating: fractionUpToOne(),
   /** Required electrolytic life in hours at the design's ambient. */
-  requiredLifeHours: positive().optional(),
+  requiredLifeHours: positive(L.hours).optional(),
 });
 
 export const designSchema = z.object({

@@ -1,0 +1,83 @@
+/**
+ * Problems and notices of the design document, and the plain sentences they carry.
+ * A Problem stops a design from being used: it names the field (dotted path), the value found, the
+ * allowed range and says all three in one sentence. A notice is advice on a usable design.
+ */
+import { formatEngineering } from '../units/engineering.ts';
+import { UNITS } from '../units/engineering-units.ts';
+import { unitOfPath } from './key-units.ts';
+
+export interface Problem {
+  /** Dotted path of the field, e.g. "spec.vinMaxV" or "thermal.heatsinks[1].id"; "" is the whole document. */
+  path: string;
+  /** The value found there (undefined when missing). */
+  value: unknown;
+  /** The allowed values, e.g. "0 V < vinMaxV ≤ 10 kV", "one of "buck", "boost"". */
+  allowed: string;
+  /** One plain sentence naming the field, the value and the allowed range. */
+  message: string;
+  /** Where in the text a JSON syntax error is (1-based), for problems found while reading a file. */
+  line?: number;
+  column?: number;
+}
+
+/** Advice on a valid design (an ignored key, an unused heatsink, a migrated file). */
+export interface DesignNotice {
+  path: string;
+  value: unknown;
+  message: string;
+}
+
+/** ["thermal", "heatsinks", 0, "id"] → "thermal.heatsinks[0].id". */
+export function pathToString(path: readonly PropertyKey[]): string {
+  let out = '';
+  for (const key of path) {
+    if (typeof key === 'number') out += `[${key}]`;
+    else out += out === '' ? String(key) : `.${String(key)}`;
+  }
+  return out;
+}
+
+/** Reads the value at a path of keys, or undefined. */
+export function valueAt(doc: unknown, path: readonly PropertyKey[]): unknown {
+  let here: unknown = doc;
+  for (const key of path) {
+    if (here === null || typeof here !== 'object') return undefined;
+    here = (here as Record<PropertyKey, unknown>)[key];
+  }
+  return here;
+}
+
+/** A value as words for a message: "-5 V", "4.7e-6 H (4.7 µH)", "the text "12"", "missing". */
+export function describeValue(value: unknown, unit = ''): string {
+  if (value === undefined) return 'missing';
+  if (value === null) return 'null';
+  if (typeof value === 'number') {
+    if (Number.isNaN(value)) return 'NaN (not a number)';
+    if (!Number.isFinite(value)) return `${value > 0 ? '' : '-'}Infinity (not a finite number)`;
+    const plain = unit === '' ? String(value) : `${value} ${unit}`;
+    const pretty = UNITS[unit]?.prefixes && unit !== '' ? formatEngineering(value, unit, 6) : plain;
+    return pretty === plain ? plain : `${plain} (${pretty})`;
+  }
+  if (typeof value === 'string') {
+    const shown = value.length > 40 ? `${value.slice(0, 40)}…` : value;
+    return `the text "${shown}"`;
+  }
+  if (typeof value === 'boolean') return String(value);
+  if (Array.isArray(value)) return `a list of ${value.length} item${value.length === 1 ? '' : 's'}`;
+  if (typeof value === 'object') return 'an object';
+  return `a ${typeof value}`;
+}
+
+const label = (path: string): string => (path === '' ? 'The design document' : path);
+
+/** A problem whose message is "<path> is <value>; allowed: <allowed>." unless a sentence is given. */
+export function problem(path: string, value: unknown, allowed: string, sentence?: string): Problem {
+  const message = sentence ?? `${label(path)} is ${describeValue(value, unitOfPath(path))}; allowed: ${allowed}.`;
+  return { path, value, allowed, message };
+}
+
+/** Formats a number in the unit of a path for allowed ranges and sentences ("10.8 V", "25 °C"). */
+export function inUnit(value: number, path: string): string {
+  return formatEngineering(value, unitOfPath(path), 6);
+}

@@ -1,0 +1,112 @@
+/**
+ * Cross-field rules of the part records.
+ *   MOSFET gate charge: the plateau lies above the threshold (Vth < Vplateau) and below the drive voltage,
+ *   else the gate-charge method has no gate current to switch with (Ig = (Vdrv − Vpl)/R, METHODS.md §4);
+ *   Qgs + Qgd ≤ Qg and Qgs2 ≤ Qgs (Qgs2 is the part of Qgs after the threshold); one of Qgs2 or Qgs is
+ *   needed to estimate the current-rise time [common practice: datasheet gate-charge curve].
+ *   A two-point RDS(on) law needs its hot point above 25 °C.
+ *   Inductance falls with current (roll-off ≤ L); the magnetic path length le = Ve/Ae of a real core
+ *   lies between 1 mm and 1 m [common practice].
+ *   A resistor's derating starts before its zero-power temperature.
+ *   A linear regulator cannot raise a voltage: a drive rail made from Vin needs Vdrv < Vin,min.
+ *   Every part's temperature limit lies above the ambient temperature.
+ */
+import type { Problem } from './problems.ts';
+import { inUnit, problem } from './problems.ts';
+import { at, num, str } from './read.ts';
+
+function mosfet(doc: unknown, role: string, out: Problem[]): void {
+  const p = `parts.${role}`;
+  const vth = num(doc, `${p}.vthV`);
+  const plateau = num(doc, `${p}.plateauV`);
+  const drive = num(doc, 'parts.controller.driveV');
+  if (vth !== undefined && plateau !== undefined && plateau <= vth)
+    out.push(problem(`${p}.plateauV`, plateau, `plateauV > ${p}.vthV (${inUnit(vth, 'vthV')})`,
+      `${p}.plateauV (${inUnit(plateau, 'plateauV')}) must be above the threshold ${p}.vthV (${inUnit(vth, 'vthV')}).`));
+  if (plateau !== undefined && drive !== undefined && plateau >= drive)
+    out.push(problem(`${p}.plateauV`, plateau, `plateauV < parts.controller.driveV (${inUnit(drive, 'driveV')})`,
+      `${p}.plateauV (${inUnit(plateau, 'plateauV')}) must be below the drive voltage parts.controller.driveV (${inUnit(drive, 'driveV')}), or the gate never gets past the plateau.`));
+  const qg = num(doc, `${p}.qgC`);
+  const qgd = num(doc, `${p}.qgdC`);
+  const qgs = num(doc, `${p}.qgsC`);
+  const qgs2 = num(doc, `${p}.qgs2C`);
+  if (at(doc, `${p}.kind`) === 'mosfet' && at(doc, `${p}.qgs2C`) === undefined && at(doc, `${p}.qgsC`) === undefined)
+    out.push(problem(`${p}.qgs2C`, undefined, 'qgs2C or qgsC (one of them)',
+      `${p}.qgs2C (gate charge from threshold to plateau) or ${p}.qgsC (whole gate-source charge) is needed; both are missing.`));
+  const gs = qgs ?? qgs2;
+  if (qg !== undefined && qgd !== undefined && gs !== undefined && gs + qgd > qg * (1 + 1e-9)) {
+    const gsKey = qgs !== undefined ? 'qgsC' : 'qgs2C';
+    out.push(problem(`${p}.qgC`, qg, `qgC ≥ ${gsKey} + qgdC (${inUnit(gs + qgd, 'qgC')})`,
+      `${p}.qgC (${inUnit(qg, 'qgC')}) must be at least ${p}.${gsKey} + ${p}.qgdC = ${inUnit(gs + qgd, 'qgC')}; the total gate charge contains both.`));
+  }
+  if (qgs !== undefined && qgs2 !== undefined && qgs2 > qgs)
+    out.push(problem(`${p}.qgs2C`, qgs2, `qgs2C ≤ ${p}.qgsC (${inUnit(qgs, 'qgsC')})`,
+      `${p}.qgs2C (${inUnit(qgs2, 'qgs2C')}) is the part of qgsC after the threshold, so it cannot exceed qgsC (${inUnit(qgs, 'qgsC')}).`));
+  const hot = num(doc, `${p}.rdsTemperatureLaw.hotC`);
+  if (str(doc, `${p}.rdsTemperatureLaw.law`) === 'two-point' && hot !== undefined && hot <= 25)
+    out.push(problem(`${p}.rdsTemperatureLaw.hotC`, hot, 'hotC > 25 °C',
+      `${p}.rdsTemperatureLaw.hotC (${inUnit(hot, 'hotC')}) must be above 25 °C: it is the hot datasheet point compared with RDS(on) at 25 °C.`));
+}
+
+function inductor(doc: unknown, out: Problem[]): void {
+  const p = 'parts.inductor';
+  const l = num(doc, `${p}.inductanceH`);
+  const lr = num(doc, `${p}.rolloff.inductanceH`);
+  if (l !== undefined && lr !== undefined && lr > l)
+    out.push(problem(`${p}.rolloff.inductanceH`, lr, `rolloff.inductanceH ≤ ${p}.inductanceH (${inUnit(l, 'inductanceH')})`,
+      `${p}.rolloff.inductanceH (${inUnit(lr, 'inductanceH')}) must not exceed the zero-current inductance ${inUnit(l, 'inductanceH')}: inductance falls with current.`));
+  const ae = num(doc, `${p}.aeM2`);
+  const ve = num(doc, `${p}.veM3`);
+  if (ae !== undefined && ve !== undefined && ae > 0) {
+    const le = ve / ae;
+    if (le < 1e-3 || le > 1)
+      out.push(problem(`${p}.veM3`, ve, '1 mm ≤ veM3 / aeM2 ≤ 1 m',
+        `${p}.veM3 / ${p}.aeM2 gives a magnetic path length of ${inUnit(le, 'lengthM')}, outside 1 mm … 1 m; check the units of Ae (m²) and Ve (m³).`));
+  }
+}
+
+function resistorAndController(doc: unknown, out: Problem[]): void {
+  const start = num(doc, 'parts.senseResistor.deratingStartC');
+  const zero = num(doc, 'parts.senseResistor.zeroPowerC');
+  if (start !== undefined && zero !== undefined && start >= zero)
+    out.push(problem('parts.senseResistor.deratingStartC', start, `deratingStartC < zeroPowerC (${inUnit(zero, 'zeroPowerC')})`,
+      `parts.senseResistor.deratingStartC (${inUnit(start, 'deratingStartC')}) must be below zeroPowerC (${inUnit(zero, 'zeroPowerC')}).`));
+  const drive = num(doc, 'parts.controller.driveV');
+  const vinMin = num(doc, 'spec.vinMinV');
+  if (at(doc, 'parts.controller.driveFromVinLinear') === true && drive !== undefined && vinMin !== undefined && drive >= vinMin)
+    out.push(problem('parts.controller.driveV', drive, `driveV < spec.vinMinV (${inUnit(vinMin, 'vinMinV')})`,
+      `parts.controller.driveV (${inUnit(drive, 'driveV')}) cannot come from a linear regulator fed by Vin: it must be below spec.vinMinV (${inUnit(vinMin, 'vinMinV')}), or set driveFromVinLinear to false.`));
+}
+
+const LIMIT_KEYS: readonly (readonly [string, string])[] = [
+  ['switch', 'tjMaxC'],
+  ['rectifier', 'tjMaxC'],
+  ['inductor', 'tMaxC'],
+  ['inputCapacitor.part', 'tMaxC'],
+  ['outputCapacitor.part', 'tMaxC'],
+  ['senseResistor', 'zeroPowerC'],
+  ['controller', 'tjMaxC'],
+];
+
+function limitsAboveAmbient(doc: unknown, out: Problem[]): void {
+  const ambient = num(doc, 'spec.ambientC');
+  if (ambient === undefined) return;
+  for (const [role, key] of LIMIT_KEYS) {
+    const path = `parts.${role}.${key}`;
+    const limit = num(doc, path);
+    if (limit !== undefined && limit <= ambient)
+      out.push(problem(path, limit, `${key} > spec.ambientC (${inUnit(ambient, 'ambientC')})`,
+        `${path} (${inUnit(limit, key)}) must be above the ambient temperature spec.ambientC (${inUnit(ambient, 'ambientC')}).`));
+  }
+}
+
+/** Problems between fields of the part records. */
+export function partRules(doc: unknown): Problem[] {
+  const out: Problem[] = [];
+  mosfet(doc, 'switch', out);
+  if (str(doc, 'parts.rectifier.kind') === 'mosfet') mosfet(doc, 'rectifier', out);
+  inductor(doc, out);
+  resistorAndController(doc, out);
+  limitsAboveAmbient(doc, out);
+  return out;
+}

@@ -1,0 +1,36 @@
+/**
+ * `wattledger evaluate DESIGN.json [--json] [--load A] [--vin V] [--ambient °C]`: the electro-thermal
+ * loss ledger — every watt by part and mechanism, temperatures, heatsinks, burn hazards, rating checks,
+ * warnings. JSON: the engine's Evaluation record unchanged at the top level (efficiency, inputPower,
+ * outputPower, totalLoss, dutyCycle, conductionMode, losses, temperatures, hazards, warnings, converged,
+ * ...) plus command, design, designNotices and cautions (README.md, "evaluate"). A point with no
+ * steady state (thermal runaway) exits 0 with converged false and a warning naming the part.
+ */
+import { evaluate } from '../../../shared-model/index.ts';
+import { CAUTIONS } from '../cautions.ts';
+import type { Command } from '../command.ts';
+import { loadDesign } from '../design-file.ts';
+import { EXIT } from '../io.ts';
+import { CONDITION_FLAGS, conditionOverrides } from './conditions.ts';
+import { renderEvaluation } from './evaluate-view.ts';
+
+export const evaluateCommand: Command = {
+  name: 'evaluate',
+  summary: 'Loss ledger, temperatures and burn hazards at one condition (electro-thermal).',
+  positionals: ['DESIGN.json'],
+  flags: CONDITION_FLAGS,
+  details: [
+    'Losses are in W, temperatures in °C, margins in K. A point with no steady state (thermal runaway)',
+    'is reported with converged: false and a warning naming the part; its numbers describe no steady state.',
+  ],
+  async run(args, io) {
+    const loaded = await loadDesign(args.positionals[0] ?? '', io, 'wattledger evaluate');
+    if (!loaded.ok) return EXIT.invalidDesign;
+    const result = evaluate(loaded.design, conditionOverrides(args));
+    if (args.switches.has('json')) {
+      const record = { command: 'evaluate', design: loaded.design.name, ...result, designNotices: loaded.notices, cautions: CAUTIONS };
+      io.out(JSON.stringify(record, null, 2));
+    } else io.out(renderEvaluation(loaded.design, result, loaded.notices));
+    return EXIT.ok;
+  },
+};

@@ -1,0 +1,108 @@
+/**
+ * Output of `wattledger sweep`: the JSON record (points with load, efficiency, totalLoss, temperatures by
+ * part; landmarks with load and value or null with a reason), the CSV table, and the plain-text view.
+ */
+import type { Design, FiguresOfMerit, Landmark, Landmarks, LoadSweep } from '../../../shared-model/index.ts';
+import { formatEngineering as fmt } from '../../../shared-model/index.ts';
+import { CAUTION_LINE, CAUTIONS } from '../cautions.ts';
+import { renderTable, section } from '../table.ts';
+
+export function sweepJson(design: Design, sweep: LoadSweep, landmarks: Landmarks, figures: FiguresOfMerit): unknown {
+  const c = sweep.columns;
+  return {
+    command: 'sweep',
+    design: design.name,
+    conditions: { vinV: sweep.vinV, ambientC: sweep.ambientC, switchingFrequencyHz: sweep.switchingFrequencyHz },
+    ratedLoadA: sweep.ratedLoadA,
+    spacing: sweep.spacing,
+    units: { load: 'A', efficiency: 'ratio', totalLoss: 'W', temperatures: '°C', margins: 'K', losses: 'W' },
+    points: sweep.points.map((p) => ({
+      load: p.loadA,
+      efficiency: p.efficiency,
+      totalLoss: p.totalLoss,
+      inputPower: p.inputPower,
+      outputPower: p.outputPower,
+      dutyCycle: p.dutyCycle,
+      mode: p.mode,
+      converged: p.converged,
+      temperatures: Object.fromEntries(c.temperatures.map((t, j) => [t.part, p.temperaturesC[j]])),
+      marginsK: Object.fromEntries(c.temperatures.map((t, j) => [t.part, p.marginsK[j]])),
+      losses: c.losses.map((l, j) => ({ part: l.part, mechanism: l.mechanism, watts: p.losses[j] })),
+      warnings: [...new Set(p.warnings.map((w) => w.code))],
+    })),
+    landmarks,
+    figuresOfMerit: figures,
+    cautions: CAUTIONS,
+  };
+}
+
+const csvCell = (s: string): string => (/[",\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s);
+
+/** One row per point; column names carry their units. */
+export function sweepCsv(sweep: LoadSweep): string {
+  const c = sweep.columns;
+  const head = [
+    'load_A', 'efficiency', 'total_loss_W', 'input_W', 'output_W', 'duty_cycle', 'mode', 'converged',
+    ...c.temperatures.map((t) => `T_${t.part}_C`),
+    ...c.losses.map((l) => `loss_${l.part}_${l.mechanism.replace(/ /g, '_')}_W`),
+    'warnings',
+  ];
+  const rows = sweep.points.map((p) =>
+    [
+      p.loadA, p.efficiency, p.totalLoss, p.inputPower, p.outputPower, p.dutyCycle, p.mode, p.converged,
+      ...p.temperaturesC, ...p.losses, [...new Set(p.warnings.map((w) => w.code))].join(' '),
+    ].map((v) => csvCell(String(v))).join(','),
+  );
+  return [head.join(','), ...rows].join('\n');
+}
+
+function landmarkLine(name: string, l: Landmark, value: (v: number) => string): string[] {
+  if (l.load === null) return [name, '—', '—', l.reason ?? ''];
+  return [name, fmt(l.load, 'A', 4), l.value === null ? '—' : value(l.value), l.note ?? ''];
+}
+
+export function renderSweep(design: Design, sweep: LoadSweep, m: Landmarks, figures: FiguresOfMerit): string {
+  const pct = (v: number) => fmt(v, '%', 4);
+  const tc = m.thermalCeiling;
+  const landmarkRows = [
+    landmarkLine('Peak efficiency', m.peak, pct),
+    landmarkLine('Light-load knee', m.knee, pct),
+    landmarkLine('CCM/DCM boundary', m.modeBoundary, pct),
+    landmarkLine(`Thermal ceiling${tc.part ? ` (${tc.part}, ${tc.limitKind})` : ''}`, tc, (v) => fmt(v, '°C', 4)),
+    landmarkLine(`Regulation limit${m.regulationLimit.cause ? ` (${m.regulationLimit.cause})` : ''}`, m.regulationLimit, (v) => `duty ${fmt(v, '', 3)}`),
+  ];
+  const marks = renderTable([{ title: 'Landmark' }, { title: 'Load', align: 'right' }, { title: 'Value', align: 'right' }, { title: 'Note' }], landmarkRows);
+  const fom = renderTable(
+    [{ title: 'Load' }, { title: 'Efficiency', align: 'right' }],
+    [
+      ...figures.points.map((p) => [`${fmt(p.fractionOfRated, '%', 3)} (${fmt(p.loadA, 'A', 3)})`, pct(p.efficiency)]),
+      ['Average of 25/50/75/100 %', pct(figures.averageEfficiency)],
+    ],
+  );
+  const step = Math.max(1, Math.ceil(sweep.points.length / 20));
+  const shown = sweep.points.filter((_, i) => i % step === 0 || i === sweep.points.length - 1);
+  const hottest = (j: number[]) => j.reduce((best, t, i) => (t > j[best] ? i : best), 0);
+  const rows = shown.map((p) => {
+    const h = hottest(p.temperaturesC);
+    const col = sweep.columns.temperatures[h];
+    return [
+      fmt(p.loadA, 'A', 4), pct(p.efficiency), fmt(p.totalLoss, 'W', 3), p.mode,
+      col ? `${col.part} ${fmt(p.temperaturesC[h], '°C', 4)}` : '—',
+      fmt(Math.min(...p.marginsK), 'K', 3),
+      [...new Set(p.warnings.filter((w) => w.severity !== 'info').map((w) => w.code))].join(' '),
+    ];
+  });
+  const table = renderTable(
+    [{ title: 'Load', align: 'right' }, { title: 'Efficiency', align: 'right' }, { title: 'Loss', align: 'right' }, { title: 'Mode' }, { title: 'Hottest part' }, { title: 'Least margin', align: 'right' }, { title: 'Warnings' }],
+    rows,
+  );
+  return [
+    `${design.name}: load sweep at Vin ${fmt(sweep.vinV, 'V', 4)}, fs ${fmt(sweep.switchingFrequencyHz, 'Hz', 4)}, ambient ${fmt(sweep.ambientC, '°C', 4)}`,
+    `${sweep.points.length} points, ${fmt(sweep.points[0]?.loadA ?? 0, 'A', 3)} … ${fmt(sweep.points.at(-1)?.loadA ?? 0, 'A', 3)}, ${sweep.spacing} spacing; every point electro-thermal.`,
+    '',
+    section('Landmarks', `${marks}\n${m.knee.definition}`),
+    section('Figures of merit', `${fom}\n${figures.source}`),
+    section(`Points (every ${step}${step === 1 ? 'st' : 'th'}; --csv or --json for all)`, table),
+    CAUTION_LINE,
+  ].join('\n');
+}
