@@ -1,0 +1,157 @@
+/**
+ * What each DesktopApi call does in main. Everything the operating system provides (dialogs, printing,
+ * the files on disk) comes in through `HandlerDeps`, so these handlers are unit-tested with fakes and
+ * real temporary folders. The handlers trust their arguments' shapes (register.ts has validated them)
+ * but not their meaning: a path the user never picked is refused.
+ */
+import nodePath from 'node:path';
+import type { DocumentState, ExportRequest, OpenedFile, PdfRequest, SaveOutcome, SaveRequest } from '../../shared-model/index.ts';
+import { saveAtomically, type SaveFs } from '../files/atomic-save.ts';
+import { readTextFile, type ReadFs } from '../files/read-text.ts';
+import type { GrantedPaths } from '../files/granted-paths.ts';
+import type { RecentFiles } from '../files/recent-files.ts';
+import type { RecoveryStore } from '../files/recovery.ts';
+import { INVOKE_CHANNELS, SEND_CHANNELS } from './channels.ts';
+import { INVOKE_PAYLOADS, SEND_PAYLOADS } from './payloads.ts';
+import type { Route } from './register.ts';
+
+export interface FileFilter {
+  name: string;
+  extensions: string[];
+}
+
+export const DESIGN_FILTERS: FileFilter[] = [{ name: 'WattLedger design', extensions: ['json'] }];
+
+export interface HandlerDeps<S> {
+  chooseFileToOpen(sender: S, filters: FileFilter[]): Promise<string | null>;
+  chooseSavePath(sender: S, suggestedName: string, filters: FileFilter[]): Promise<string | null>;
+  showError(sender: S, message: string): Promise<void>;
+  /** Renders the sender's page to PDF bytes. */
+  printPage(sender: S, request: PdfRequest): Promise<Uint8Array>;
+  grants: GrantedPaths;
+  recent: Pick<RecentFiles, 'list' | 'add' | 'remove' | 'has'>;
+  recovery: Pick<RecoveryStore, 'write' | 'read' | 'clear'>;
+  /** Called after every design save attempt (title, close-after-save, menu). */
+  designSaved(sender: S, outcome: SaveOutcome): void;
+  documentStateChanged(sender: S, state: DocumentState): void;
+  /** The recent list changed (rebuild the menu). */
+  recentChanged(list: string[]): void;
+  saveFs?: SaveFs;
+  readFs?: ReadFs;
+}
+
+const UNSAVED_NOTE = 'Your changes are still open and unsaved.';
+
+function withExtension(name: string, extension: string): string {
+  return nodePath.extname(name).toLowerCase() === `.${extension.toLowerCase()}` ? name : `${name}.${extension}`;
+}
+
+export function createHandlers<S>(deps: HandlerDeps<S>) {
+  const saveFs = deps.saveFs ? { fs: deps.saveFs } : {};
+
+  async function remember(path: string): Promise<void> {
+    deps.grants.grant(path);
+    deps.recentChanged(await deps.recent.add(path));
+  }
+
+  async function open(path: string): Promise<OpenedFile | { error: string }> {
+    const read = await readTextFile(path, deps.readFs);
+    if (!read.ok) return { error: read.message };
+    await remember(path);
+    return { path: read.path, name: read.name, text: read.text };
+  }
+
+  async function saveDesign(sender: S, request: SaveRequest): Promise<SaveOutcome> {
+    let target = request.path;
+    if (target !== null && !deps.grants.has(target)) {
+      return { ok: false, cancelled: false, message: `Refused to save to "${nodePath.basename(target)}": WattLedger only writes files you opened or chose in this session. Use Save As.` };
+    }
+    target ??= await deps.chooseSavePath(sender, withExtension(request.suggestedName, 'json'), DESIGN_FILTERS);
+    if (target === null) return { ok: false, cancelled: true, message: 'Save cancelled.' };
+    const result = await saveAtomically(target, request.text, { backup: true, ...saveFs });
+    if (!result.ok) return { ok: false, cancelled: false, message: `${result.message} ${UNSAVED_NOTE}` };
+    await remember(target);
+    await deps.recovery.clear().catch(() => undefined);
+    return { ok: true, path: target, name: nodePath.basename(target) };
+  }
+
+  async function saveChosen(sender: S, suggestedName: string, filters: FileFilter[], data: string | Uint8Array): Promise<SaveOutcome> {
+    const target = await deps.chooseSavePath(sender, suggestedName, filters);
+    if (target === null) return { ok: false, cancelled: true, message: 'Export cancelled.' };
+    const result = await saveAtomically(target, data, { backup: false, ...saveFs });
+    return result.ok ? { ok: true, path: target, name: nodePath.basename(target) } : { ok: false, cancelled: false, message: result.message };
+  }
+
+  const invoke = {
+    /** A file that cannot be read is reported in a native error box (the contract returns null). */
+    async openDesign(sender: S): Promise<OpenedFile | null> {
+      const path = await deps.chooseFileToOpen(sender, DESIGN_FILTERS);
+      if (path === null) return null;
+      const opened = await open(path);
+      if ('error' in opened) {
+        await deps.showError(sender, opened.error);
+        return null;
+      }
+      return opened;
+    },
+    async openRecent(_sender: S, path: string): Promise<OpenedFile | { error: string }> {
+      if (!(await deps.recent.has(path))) return { error: `"${nodePath.basename(path)}" is not in the recent files list.` };
+      const opened = await open(path);
+      if ('error' in opened) deps.recentChanged(await deps.recent.remove(path));
+      return opened;
+    },
+    async listRecent(): Promise<string[]> {
+      const list = await deps.recent.list();
+      for (const path of list) deps.grants.grant(path);
+      return list;
+    },
+    async saveDesign(sender: S, request: SaveRequest): Promise<SaveOutcome> {
+      const outcome = await saveDesign(sender, request);
+      deps.designSaved(sender, outcome);
+      return outcome;
+    },
+    async exportFile(sender: S, request: ExportRequest): Promise<SaveOutcome> {
+      const data = request.encoding === 'base64' ? new Uint8Array(Buffer.from(request.content, 'base64')) : request.content;
+      const name = withExtension(request.suggestedName, request.extensions[0] ?? 'txt');
+      return saveChosen(sender, name, [{ name: request.filterName, extensions: request.extensions }], data);
+    },
+    async printToPdf(sender: S, request: PdfRequest): Promise<SaveOutcome> {
+      const target = await deps.chooseSavePath(sender, withExtension(request.suggestedName, 'pdf'), [{ name: 'PDF document', extensions: ['pdf'] }]);
+      if (target === null) return { ok: false, cancelled: true, message: 'Print to PDF cancelled.' };
+      let pdf: Uint8Array;
+      try {
+        pdf = await deps.printPage(sender, request);
+      } catch (error) {
+        return { ok: false, cancelled: false, message: `Could not print the report to PDF: ${error instanceof Error ? error.message : String(error)}.` };
+      }
+      const result = await saveAtomically(target, pdf, { backup: false, ...saveFs });
+      return result.ok ? { ok: true, path: target, name: nodePath.basename(target) } : { ok: false, cancelled: false, message: result.message };
+    },
+    async writeRecovery(_sender: S, text: string): Promise<void> {
+      const result = await deps.recovery.write(text);
+      if (!result.ok) throw new Error(result.message);
+    },
+    readRecovery: (): Promise<{ text: string; savedAt: string } | null> => deps.recovery.read(),
+    clearRecovery: (): Promise<void> => deps.recovery.clear(),
+  };
+
+  const send = {
+    setDocumentState(sender: S, state: DocumentState): void {
+      deps.documentStateChanged(sender, state);
+    },
+  };
+
+  /** Routes for register.ts: every DesktopApi method, its channel, its schema, its handler. */
+  function routes(): { invoke: Route<S>[]; send: Route<S>[] } {
+    const invokeRoutes = (Object.keys(INVOKE_CHANNELS) as (keyof typeof INVOKE_CHANNELS)[]).map((method) => ({
+      method,
+      channel: INVOKE_CHANNELS[method],
+      schema: INVOKE_PAYLOADS[method],
+      run: (sender: S, args: never[]) => (invoke[method] as (sender: S, ...rest: never[]) => unknown)(sender, ...args),
+    }));
+    const sendRoutes = [{ method: 'setDocumentState', channel: SEND_CHANNELS.setDocumentState, schema: SEND_PAYLOADS.setDocumentState, run: (sender: S, args: never[]) => send.setDocumentState(sender, args[0] as DocumentState) }];
+    return { invoke: invokeRoutes, send: sendRoutes };
+  }
+
+  return { invoke, send, routes, open };
+}

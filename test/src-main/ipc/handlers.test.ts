@@ -1,0 +1,153 @@
+import nodeFs from 'node:fs/promises';
+import os from 'node:os';
+import nodePath from 'node:path';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import type { SaveOutcome } from '../../../shared-model/index.ts';
+import { GrantedPaths } from '../../../src-main/files/granted-paths.ts';
+import { RecentFiles } from '../../../src-main/files/recent-files.ts';
+import { RecoveryStore } from '../../../src-main/files/recovery.ts';
+import { INVOKE_CHANNELS } from '../../../src-main/ipc/channels.ts';
+import { createHandlers, type HandlerDeps } from '../../../src-main/ipc/handlers.ts';
+import { journalingFs } from '../files/failing-fs.ts';
+
+let folder: string;
+let deps: HandlerDeps<string> & { saved: SaveOutcome[]; errors: string[] };
+let nextSavePath: string | null;
+let nextOpenPath: string | null;
+
+beforeEach(async () => {
+  folder = await nodeFs.mkdtemp(nodePath.join(os.tmpdir(), 'wattledger-ipc-'));
+  nextSavePath = null;
+  nextOpenPath = null;
+  const userData = nodePath.join(folder, 'user-data');
+  const saved: SaveOutcome[] = [];
+  const errors: string[] = [];
+  deps = {
+    saved,
+    errors,
+    chooseFileToOpen: vi.fn(async () => nextOpenPath),
+    chooseSavePath: vi.fn(async () => nextSavePath),
+    showError: async (_sender, message) => void errors.push(message),
+    printPage: vi.fn(async () => new TextEncoder().encode('%PDF-1.7 fake')),
+    grants: new GrantedPaths('linux'),
+    recent: new RecentFiles(userData, { platform: 'linux' }),
+    recovery: new RecoveryStore(userData),
+    designSaved: (_sender, outcome) => void saved.push(outcome),
+    documentStateChanged: vi.fn(),
+    recentChanged: vi.fn(),
+  };
+});
+afterEach(async () => {
+  await nodeFs.rm(folder, { recursive: true, force: true });
+});
+
+const design = (name: string): string => JSON.stringify({ format: 'wattledger.design', version: 1, name });
+
+describe('saveDesign', () => {
+  it('refuses to write a path the user never picked (a compromised renderer cannot choose files)', async () => {
+    const victim = nodePath.join(folder, 'victim.txt');
+    const outcome = await createHandlers(deps).invoke.saveDesign('w', { path: victim, suggestedName: 'x.json', text: 'pwned' });
+    expect(outcome).toMatchObject({ ok: false, cancelled: false });
+    if (!outcome.ok) expect(outcome.message).toMatch(/only writes files you opened or chose in this session/);
+    await expect(nodeFs.access(victim)).rejects.toThrow();
+  });
+
+  it('asks for a path when there is none, saves, remembers it and clears the recovery snapshot', async () => {
+    nextSavePath = nodePath.join(folder, 'buck.json');
+    const handlers = createHandlers(deps);
+    await handlers.invoke.writeRecovery('w', design('draft'));
+    const outcome = await handlers.invoke.saveDesign('w', { path: null, suggestedName: 'buck', text: design('first') });
+    expect(deps.chooseSavePath).toHaveBeenCalledWith('w', 'buck.json', [{ name: 'WattLedger design', extensions: ['json'] }]);
+    expect(outcome).toEqual({ ok: true, path: nextSavePath, name: 'buck.json' });
+    expect(deps.saved).toEqual([outcome]);
+    expect(await nodeFs.readFile(nextSavePath, 'utf8')).toBe(design('first'));
+    expect(await handlers.invoke.listRecent()).toEqual([nextSavePath]);
+    expect(await handlers.invoke.readRecovery()).toBeNull();
+    // Saving again to the same path needs no dialog now, and keeps a .bak.
+    const again = await handlers.invoke.saveDesign('w', { path: nextSavePath, suggestedName: 'buck.json', text: design('second') });
+    expect(again.ok).toBe(true);
+    expect(await nodeFs.readFile(`${nextSavePath}.bak`, 'utf8')).toBe(design('first'));
+  });
+
+  it('reports a cancelled dialog as cancelled, without writing', async () => {
+    const outcome = await createHandlers(deps).invoke.saveDesign('w', { path: null, suggestedName: 'buck.json', text: '{}' });
+    expect(outcome).toEqual({ ok: false, cancelled: true, message: 'Save cancelled.' });
+    expect(deps.saved).toEqual([outcome]);
+  });
+
+  it('keeps the file and says the changes are still unsaved when the disk refuses the rename', async () => {
+    const path = nodePath.join(folder, 'buck.json');
+    await nodeFs.writeFile(path, design('on disk'));
+    deps.grants.grant(path);
+    deps.saveFs = journalingFs({ refuseRenameTo: path });
+    const outcome = await createHandlers(deps).invoke.saveDesign('w', { path, suggestedName: 'buck.json', text: design('edited') });
+    expect(outcome.ok).toBe(false);
+    if (!outcome.ok) expect(outcome.message).toBe('Could not save "buck.json": the operating system did not allow it (EPERM). The previous version on disk is unchanged. Your changes are still open and unsaved.');
+    expect(await nodeFs.readFile(path, 'utf8')).toBe(design('on disk'));
+  });
+});
+
+describe('opening', () => {
+  it('opens the picked file and grants it for later saves', async () => {
+    nextOpenPath = nodePath.join(folder, 'boost.json');
+    await nodeFs.writeFile(nextOpenPath, design('boost'));
+    const handlers = createHandlers(deps);
+    expect(await handlers.invoke.openDesign('w')).toEqual({ path: nextOpenPath, name: 'boost.json', text: design('boost') });
+    expect(deps.grants.has(nextOpenPath)).toBe(true);
+    expect(await handlers.invoke.openRecent('w', nextOpenPath)).toMatchObject({ name: 'boost.json' });
+  });
+
+  it('shows a clear error and returns nothing when the picked file cannot be read', async () => {
+    nextOpenPath = nodePath.join(folder, 'missing.json');
+    expect(await createHandlers(deps).invoke.openDesign('w')).toBeNull();
+    expect(deps.errors).toEqual(['Could not open "missing.json": the file or its folder does not exist (ENOENT).']);
+  });
+
+  it('opens a recent file only if it is in the list, and drops it from the list when it is gone', async () => {
+    const handlers = createHandlers(deps);
+    expect(await handlers.invoke.openRecent('w', '/etc/passwd')).toEqual({ error: '"passwd" is not in the recent files list.' });
+    const path = nodePath.join(folder, 'old.json');
+    await deps.recent.add(path);
+    expect(await handlers.invoke.openRecent('w', path)).toEqual({ error: 'Could not open "old.json": the file or its folder does not exist (ENOENT).' });
+    expect(await deps.recent.has(path)).toBe(false);
+  });
+});
+
+describe('export and print', () => {
+  it('writes exported base64 content byte for byte', async () => {
+    nextSavePath = nodePath.join(folder, 'chart.png');
+    const bytes = Uint8Array.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]); // PNG signature, ISO/IEC 15948 §5.2
+    const outcome = await createHandlers(deps).invoke.exportFile('w', { suggestedName: 'chart', content: Buffer.from(bytes).toString('base64'), encoding: 'base64', filterName: 'PNG image', extensions: ['png'] });
+    expect(outcome).toEqual({ ok: true, path: nextSavePath, name: 'chart.png' });
+    expect(deps.chooseSavePath).toHaveBeenCalledWith('w', 'chart.png', [{ name: 'PNG image', extensions: ['png'] }]);
+    expect(new Uint8Array(await nodeFs.readFile(nextSavePath))).toEqual(bytes);
+  });
+
+  it('prints the window to PDF with the requested page size and saves it atomically', async () => {
+    nextSavePath = nodePath.join(folder, 'review.pdf');
+    const outcome = await createHandlers(deps).invoke.printToPdf('w', { suggestedName: 'review', pageSize: 'A4' });
+    expect(outcome.ok).toBe(true);
+    expect(deps.printPage).toHaveBeenCalledWith('w', { suggestedName: 'review', pageSize: 'A4' });
+    expect(await nodeFs.readFile(nextSavePath, 'utf8')).toBe('%PDF-1.7 fake');
+  });
+});
+
+describe('recovery through IPC', () => {
+  it('writes, reads back and clears a snapshot', async () => {
+    const handlers = createHandlers(deps);
+    await handlers.invoke.writeRecovery('w', design('draft'));
+    expect((await handlers.invoke.readRecovery())?.text).toBe(design('draft'));
+    await handlers.invoke.clearRecovery();
+    expect(await handlers.invoke.readRecovery()).toBeNull();
+  });
+});
+
+describe('routes()', () => {
+  it('routes every invoke channel and the document-state message', () => {
+    const { invoke, send } = createHandlers(deps).routes();
+    expect(invoke.map((route) => route.channel).sort()).toEqual(Object.values(INVOKE_CHANNELS).sort());
+    expect(send.map((route) => route.method)).toEqual(['setDocumentState']);
+    send[0]?.run('w', [{ name: 'a.json', dirty: true }] as never[]);
+    expect(deps.documentStateChanged).toHaveBeenCalledWith('w', { name: 'a.json', dirty: true });
+  });
+});
