@@ -1,0 +1,57 @@
+/**
+ * All landmarks of a load sweep at once: peak, knee, CCM/DCM boundary, thermal ceiling, regulation limit.
+ * With the design (and optionally an evaluator) each landmark is placed by searching the engine between
+ * the two sweep points that bracket it; without, by interpolating those points.
+ * Peak and knee use only regulating, converged points.
+ */
+import type { Design } from '../design/schema.ts';
+import { conditionsFor, defaultEvaluator } from '../sweep/evaluator.ts';
+import { ColumnBook } from '../sweep/point-record.ts';
+import type { PointEvaluator, LoadSweep, SweepPoint } from '../sweep/types.ts';
+import { DEFAULT_KNEE_THRESHOLD_POINTS, findKnee } from './knee.ts';
+import { findModeBoundary } from './mode-boundary.ts';
+import { findPeak } from './peak.ts';
+import { findRegulationLimit, regulationCause } from './regulation-limit.ts';
+import { findThermalCeiling } from './thermal-ceiling.ts';
+import type { Landmarks } from './types.ts';
+
+export interface LandmarkOptions {
+  /** The knee threshold in percentage points below the peak (default 2). */
+  kneeThresholdPoints?: number;
+  /** The swept design: given, landmarks are refined on the engine between sweep points. */
+  design?: Design;
+  evaluator?: PointEvaluator;
+}
+
+/** A function that evaluates the sweep's design at any load, as a point aligned with the sweep's columns. */
+export function loadProbe(design: Design, sweep: LoadSweep, evaluator: PointEvaluator = defaultEvaluator): (load: number) => SweepPoint {
+  const book = ColumnBook.resume(sweep.columns);
+  const fixed = { vinV: sweep.vinV, ambientC: sweep.ambientC, switchingFrequencyHz: sweep.switchingFrequencyHz };
+  const cache = new Map<number, SweepPoint>();
+  return (load) => {
+    let p = cache.get(load);
+    if (!p) {
+      p = book.record(evaluator(design, conditionsFor(design, { ...fixed, loadA: load })));
+      cache.set(load, p);
+    }
+    return p;
+  };
+}
+
+export function findLandmarks(sweep: LoadSweep, options: LandmarkOptions = {}): Landmarks {
+  const probe = options.design ? loadProbe(options.design, sweep, options.evaluator) : undefined;
+  const points = sweep.points;
+  const loads = points.map((p) => p.loadA);
+  const efficiency = points.map((p) => p.efficiency);
+  const usable = points.map((p) => p.converged && regulationCause(p) === null);
+  const efficiencyAt = probe ? (load: number) => probe(load).efficiency : undefined;
+  const peak = findPeak(loads, efficiency, usable, efficiencyAt);
+  const { index: _index, ...peakLandmark } = peak;
+  return {
+    peak: peakLandmark,
+    knee: findKnee(loads, efficiency, peak, options.kneeThresholdPoints ?? DEFAULT_KNEE_THRESHOLD_POINTS, usable, efficiencyAt),
+    modeBoundary: findModeBoundary(points, probe),
+    thermalCeiling: findThermalCeiling(sweep.columns, points, probe),
+    regulationLimit: findRegulationLimit(points, probe),
+  };
+}

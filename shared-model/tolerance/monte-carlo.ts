@@ -1,0 +1,198 @@
+/**
+ * Monte Carlo tolerance analysis with a visible, settable seed.
+ *
+ * Each sample draws, in a fixed order from one MT19937 stream (prng.ts): Vin, ambient, switch RDS(on),
+ * rectifier RDS(on), inductor DCR, inductance, input-capacitor ESR, output-capacitor ESR, switching
+ * frequency — nine draws per sample whatever the design, so a seed always gives the same samples.
+ * Distributions: "uniform" (scale uniform on 1 ± spread; Vin and ambient uniform over their range) or
+ * "normal" (scale normal with the spread at 3 standard deviations, redrawn beyond ±3σ [common practice];
+ * Vin and ambient then normal about the middle of the range, also cut at its ends). Vin and ambient vary
+ * only with `spreadConditions`; otherwise they stay at the chosen conditions.
+ * Result: distribution of efficiency and of each part's temperature (summary, histogram), the fraction of
+ * samples over each part's derated limit, its absolute limit, its touch limit, below the efficiency target,
+ * and not regulating. With every tolerance zero every sample equals the nominal evaluation.
+ */
+import type { Design, Role } from '../design/schema.ts';
+import type { Evaluation, PartTemperature } from '../ledger/types.ts';
+import type { Conditions } from '../operating-point/types.ts';
+import { conditionsFor, defaultEvaluator } from '../sweep/evaluator.ts';
+import type { PointEvaluator, OptionProblem } from '../sweep/types.ts';
+import type { RandomSource } from './prng.ts';
+import { createRandom, isValidSeed } from './prng.ts';
+import type { SampleHistogram, SampleSummary } from './statistics.ts';
+import { sampleHistogram, summarizeSamples } from './statistics.ts';
+import type { ResolvedTolerances, Tolerances, Variation } from './variation.ts';
+import { applyVariation, checkTolerances, resolveTolerances } from './variation.ts';
+
+export type MonteCarloDistribution = 'uniform' | 'normal';
+export const DEFAULT_MONTE_CARLO_SAMPLES = 2000;
+export const MAX_MONTE_CARLO_SAMPLES = 1_000_000;
+export const DEFAULT_MONTE_CARLO_SEED = 1;
+
+export interface MonteCarloOptions {
+  seed: number;
+  samples?: number;
+  distribution?: MonteCarloDistribution;
+  tolerances?: Tolerances;
+  /** Also vary Vin and ambient over their tolerance ranges (default false: held at `conditions`). */
+  spreadConditions?: boolean;
+  loadA?: number;
+  conditions?: Partial<Omit<Conditions, 'loadA'>>;
+  /** Efficiency below which a sample counts as failing (default: the design's target at rated load, if any). */
+  efficiencyTarget?: number;
+  /** Keep every sample's efficiency and temperatures in the result (default false). */
+  keepSamples?: boolean;
+  histogramBins?: number;
+  evaluator?: PointEvaluator;
+}
+
+export interface PartDistribution {
+  part: Role;
+  partName: string;
+  limitC: number;
+  deratedLimitC: number;
+  summary: SampleSummary;
+  histogram: SampleHistogram;
+  /** Fraction of samples over the limit less the design margin, and over the limit itself. */
+  fractionOverDerated: number;
+  fractionOverLimit: number;
+  /** Fraction over the touch limit of its surface (null: the part is not touchable). */
+  fractionOverTouch: number | null;
+}
+
+export interface MonteCarlo {
+  seed: number;
+  samples: number;
+  distribution: MonteCarloDistribution;
+  spreadConditions: boolean;
+  tolerances: ResolvedTolerances;
+  loadA: number;
+  nominal: { efficiency: number; temperatures: { part: Role; celsius: number }[] };
+  efficiency: { summary: SampleSummary; histogram: SampleHistogram };
+  temperatures: PartDistribution[];
+  efficiencyTarget: { target: number; fractionBelow: number } | null;
+  /** Fraction of samples that cannot regulate (duty limit, cannot regulate, thermal runaway). */
+  fractionNotRegulating: number;
+  values?: { efficiency: number[]; temperaturesC: number[][] };
+}
+
+export function checkMonteCarloOptions(options: MonteCarloOptions): OptionProblem[] {
+  const problems = checkTolerances(options.tolerances ?? {});
+  if (!isValidSeed(options.seed)) {
+    problems.push({ path: 'seed', value: options.seed, allowed: 'whole number 0 … 4294967295', message: `seed must be a whole number from 0 to 4294967295 (got ${options.seed}).` });
+  }
+  const n = options.samples ?? DEFAULT_MONTE_CARLO_SAMPLES;
+  if (!Number.isInteger(n) || n < 1 || n > MAX_MONTE_CARLO_SAMPLES) {
+    problems.push({ path: 'samples', value: n, allowed: `whole number 1 … ${MAX_MONTE_CARLO_SAMPLES}`, message: `samples must be a whole number from 1 to ${MAX_MONTE_CARLO_SAMPLES} (got ${n}).` });
+  }
+  const d = options.distribution ?? 'uniform';
+  if (d !== 'uniform' && d !== 'normal') {
+    problems.push({ path: 'distribution', value: d, allowed: '"uniform" or "normal"', message: `distribution must be "uniform" or "normal" (got ${String(d)}).` });
+  }
+  return problems;
+}
+
+/** A draw in [−1, 1]: uniform, or a normal deviate divided by 3 and redrawn beyond ±3σ. */
+function unitDraw(rng: RandomSource, distribution: MonteCarloDistribution): number {
+  if (distribution === 'uniform') return 2 * rng.nextFloat() - 1;
+  for (;;) {
+    const z = rng.nextNormal();
+    if (Math.abs(z) <= 3) return z / 3;
+  }
+}
+
+/** Draws one variation (nine draws, always in the same order). */
+export function drawVariation(rng: RandomSource, t: ResolvedTolerances, distribution: MonteCarloDistribution, base: Conditions, spreadConditions: boolean): Variation {
+  const vinDraw = unitDraw(rng, distribution);
+  const ambientDraw = unitDraw(rng, distribution);
+  return {
+    vinV: spreadConditions ? (t.vinV.min + t.vinV.max) / 2 + (vinDraw * (t.vinV.max - t.vinV.min)) / 2 : base.vinV,
+    ambientC: spreadConditions ? (t.ambientC.min + t.ambientC.max) / 2 + (ambientDraw * (t.ambientC.max - t.ambientC.min)) / 2 : base.ambientC,
+    switchRdsOnScale: 1 + t.rdsOnFraction * unitDraw(rng, distribution),
+    rectifierRdsOnScale: 1 + t.rdsOnFraction * unitDraw(rng, distribution),
+    dcrScale: 1 + t.dcrFraction * unitDraw(rng, distribution),
+    inductanceScale: 1 + t.inductanceFraction * unitDraw(rng, distribution),
+    inputEsrScale: 1 + t.esrFraction * unitDraw(rng, distribution),
+    outputEsrScale: 1 + t.esrFraction * unitDraw(rng, distribution),
+    frequencyScale: 1 + t.frequencyFraction * unitDraw(rng, distribution),
+  };
+}
+
+const NOT_REGULATING = new Set(['duty-limit', 'cannot-regulate', 'thermal-runaway']);
+
+export function monteCarlo(design: Design, options: MonteCarloOptions): MonteCarlo {
+  const problems = checkMonteCarloOptions(options);
+  if (problems.length > 0) throw new RangeError(problems.map((p) => p.message).join(' '));
+  const evaluator = options.evaluator ?? defaultEvaluator;
+  const n = options.samples ?? DEFAULT_MONTE_CARLO_SAMPLES;
+  const distribution = options.distribution ?? 'uniform';
+  const spreadConditions = options.spreadConditions ?? false;
+  const tolerances = resolveTolerances(design, options.tolerances);
+  const base = conditionsFor(design, { ...options.conditions, loadA: options.loadA });
+  const nominalEval = evaluator(design, base);
+  const parts = nominalEval.temperatures.map((t) => t.part);
+  const touchParts = new Map(nominalEval.hazards.map((h, k) => [h.part, k]));
+  const efficiency = new Float64Array(n);
+  const temps = parts.map(() => new Float64Array(n));
+  const overDerated = new Array<number>(parts.length).fill(0);
+  const overLimit = new Array<number>(parts.length).fill(0);
+  const overTouch = new Array<number>(parts.length).fill(0);
+  let notRegulating = 0;
+  const rng = createRandom(options.seed);
+  for (let i = 0; i < n; i++) {
+    const v = drawVariation(rng, tolerances, distribution, base, spreadConditions);
+    const applied = applyVariation(design, base, v);
+    const e: Evaluation = evaluator(applied.design, applied.conditions);
+    efficiency[i] = e.efficiency;
+    for (let k = 0; k < e.warnings.length; k++) {
+      if (NOT_REGULATING.has(e.warnings[k].code)) {
+        notRegulating += 1;
+        break;
+      }
+    }
+    for (let j = 0; j < parts.length; j++) {
+      let t: PartTemperature | undefined = e.temperatures[j];
+      if (t?.part !== parts[j]) {
+        t = undefined;
+        for (const x of e.temperatures) if (x.part === parts[j]) t = x;
+      }
+      if (!t) continue;
+      temps[j][i] = t.celsius;
+      if (t.marginK < 0) overDerated[j] += 1;
+      if (t.celsius > t.limit) overLimit[j] += 1;
+    }
+    for (const h of e.hazards) {
+      const j = parts.indexOf(h.part);
+      if (j >= 0 && h.exceeded) overTouch[j] += 1;
+    }
+  }
+  const bins = options.histogramBins ?? 30;
+  const target = options.efficiencyTarget ?? design.spec.targets?.efficiencyAtRated;
+  let below = 0;
+  if (target !== undefined) for (let i = 0; i < n; i++) if (efficiency[i] < target) below += 1;
+  const result: MonteCarlo = {
+    seed: options.seed,
+    samples: n,
+    distribution,
+    spreadConditions,
+    tolerances,
+    loadA: base.loadA,
+    nominal: { efficiency: nominalEval.efficiency, temperatures: nominalEval.temperatures.map((t) => ({ part: t.part, celsius: t.celsius })) },
+    efficiency: { summary: summarizeSamples(efficiency), histogram: sampleHistogram(efficiency, bins) },
+    temperatures: nominalEval.temperatures.map((t, j) => ({
+      part: t.part,
+      partName: t.partName,
+      limitC: t.limit,
+      deratedLimitC: t.celsius + t.marginK,
+      summary: summarizeSamples(temps[j]),
+      histogram: sampleHistogram(temps[j], bins),
+      fractionOverDerated: overDerated[j] / n,
+      fractionOverLimit: overLimit[j] / n,
+      fractionOverTouch: touchParts.has(t.part) ? overTouch[j] / n : null,
+    })),
+    efficiencyTarget: target === undefined ? null : { target, fractionBelow: below / n },
+    fractionNotRegulating: notRegulating / n,
+  };
+  if (options.keepSamples) result.values = { efficiency: Array.from(efficiency), temperaturesC: temps.map((a) => Array.from(a)) };
+  return result;
+}

@@ -1,0 +1,32 @@
+import { describe, expect, it } from 'vitest';
+import { AVERAGE_EFFICIENCY_FRACTIONS, figuresOfMerit, figuresOfMeritOf, LIGHT_LOAD_FRACTION } from '../../../shared-model/index.ts';
+import { closeTo } from '../../helpers/close-to.ts';
+import { efficiencyOf, syntheticDesign, syntheticEvaluator } from '../landmarks/synthetic.ts';
+
+const curve = { voutV: 12, p0W: 0.2, aV: 0.05, b0Ohm: 0.02 }; // METHODS.md §12 curve
+
+describe('efficiency figures of merit', () => {
+  it('averages the efficiencies at 25/50/75/100 % of rated load and reports the 10 % point', () => {
+    expect([...AVERAGE_EFFICIENCY_FRACTIONS]).toEqual([0.25, 0.5, 0.75, 1]); // US 10 CFR 430 Subpart B, Appendix Z (average active-mode efficiency)
+    expect(LIGHT_LOAD_FRACTION).toBe(0.1); // EU Regulation 2019/1782: efficiency at 10 % load
+    const rated = 4;
+    const f = figuresOfMeritOf((io) => efficiencyOf(curve, io), rated);
+    const byHand = (efficiencyOf(curve, 1) + efficiencyOf(curve, 2) + efficiencyOf(curve, 3) + efficiencyOf(curve, 4)) / 4;
+    closeTo(f.averageEfficiency, byHand, 1e-12); // Appendix Z: arithmetic mean of four load points (METHODS.md §12)
+    closeTo(f.lightLoadEfficiency, 4.8 / (4.8 + 0.2 + 0.02 + 0.02 * 0.16), 1e-12); // EU 2019/1782 10 % point: 0.4 A on METHODS.md §12 curve, by hand
+    expect(f.points.map((p) => p.loadA)).toEqual([1, 2, 3, 4, 0.4]); // 25/50/75/100/10 % of 4 A
+  });
+
+  it('evaluates the design at exactly those loads', () => {
+    const seen: number[] = [];
+    const evaluator = syntheticEvaluator(curve);
+    const f = figuresOfMerit(syntheticDesign(8), {
+      evaluator: (d, c) => {
+        seen.push(c.loadA);
+        return evaluator(d, c);
+      },
+    });
+    expect(seen).toEqual([2, 4, 6, 8, 0.8]); // 25/50/75/100/10 % of 8 A (Appendix Z; EU 2019/1782)
+    closeTo(f.averageEfficiency, [2, 4, 6, 8].reduce((s, i) => s + efficiencyOf(curve, i), 0) / 4, 1e-12); // Appendix Z mean
+  });
+});
