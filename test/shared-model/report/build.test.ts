@@ -1,0 +1,135 @@
+/**
+ * buildReport gathers the engine's records without changing them: each record is compared with an
+ * independent call of the engine's public functions; the hash with Node's crypto (OpenSSL).
+ */
+import { createHash } from 'node:crypto';
+import { describe, expect, it } from 'vitest';
+import {
+  buildReport,
+  compareParts,
+  DEMO_PARTS_LIBRARY,
+  evaluate,
+  figuresOfMerit,
+  findLandmarks,
+  monteCarlo,
+  partsOfKind,
+  sweepLoad,
+  validatePartsLibrary,
+  worstCase,
+} from '../../../shared-model/index.ts';
+import type { ReportModel } from '../../../shared-model/index.ts';
+import { demoDesign, designText } from './demo.ts';
+
+const SLOW = 600_000;
+
+function build(id: string, extra: Partial<Parameters<typeof buildReport>[0]> = {}): ReportModel {
+  const design = demoDesign(id);
+  return buildReport({ design, documentText: designText(design), date: '2026-12-02', appVersion: 'test-version', ...extra });
+}
+
+function finiteEverywhere(value: unknown, path = 'model'): string[] {
+  if (typeof value === 'number') return Number.isFinite(value) ? [] : [path];
+  if (Array.isArray(value)) return value.flatMap((v, i) => finiteEverywhere(v, `${path}[${i}]`));
+  if (value && typeof value === 'object') return Object.entries(value).flatMap(([k, v]) => finiteEverywhere(v, `${path}.${k}`));
+  return [];
+}
+
+describe.each(['synchronous-buck', 'diode-boost'])('buildReport on the %s demo', (id) => {
+  const design = demoDesign(id);
+  const model = build(id);
+  const s = design.spec;
+
+  it('carries the evaluations at rated load for Vin nom, min and max exactly as the engine gives them', () => {
+    expect(model.rated).toEqual(evaluate(design, { vinV: s.vinNomV, loadA: s.ratedLoadA })); // independent engine run
+    expect(model.inputVoltages.map((c) => c.vinV)).toEqual([s.vinMinV, s.vinNomV, s.vinMaxV]);
+    expect(model.inputVoltages[0]!.evaluation).toEqual(evaluate(design, { vinV: s.vinMinV })); // independent engine run
+    expect(model.inputVoltages[2]!.evaluation).toEqual(evaluate(design, { vinV: s.vinMaxV })); // independent engine run
+  }, SLOW);
+
+  it('carries the load sweep, its landmarks and the figures of merit unchanged', () => {
+    const sweep = sweepLoad(design, { conditions: { vinV: s.vinNomV } });
+    expect(model.sweep).toEqual(sweep); // independent engine run
+    expect(model.landmarks).toEqual(findLandmarks(sweep, { design })); // independent engine run
+    expect(model.figures).toEqual(figuresOfMerit(design, { conditions: { vinV: s.vinNomV } })); // independent engine run
+    expect(model.vinFamily.map((f) => f.vinV)).toEqual([s.vinMinV, s.vinNomV, s.vinMaxV]);
+    expect(model.vinFamily[1]!.efficiency).toEqual(sweep.points.map((p) => p.efficiency));
+  }, SLOW);
+
+  it('names the hottest part and the part with the least margin from the rated temperatures', () => {
+    const temps = model.rated.temperatures;
+    expect(model.summary.hottest?.celsius).toBe(Math.max(...temps.map((t) => t.celsius)));
+    expect(model.summary.tightest?.marginK).toBe(Math.min(...temps.map((t) => t.marginK)));
+  });
+
+  it('puts every warning of the rated evaluations into the summary list', () => {
+    for (const c of model.inputVoltages) {
+      for (const w of c.evaluation.warnings) {
+        expect(model.summary.alerts.some((a) => a.code === w.code && a.part === (w.part ?? null)), `${w.code} ${w.part}`).toBe(true);
+      }
+    }
+  });
+
+  it('is plain JSON with only finite numbers', () => {
+    expect(finiteEverywhere(model)).toEqual([]);
+    expect(JSON.parse(JSON.stringify(model))).toEqual(model);
+  });
+
+  it('lists the model of every loss mechanism in the ledger and sweep, with a source and its limits', () => {
+    const ids = model.methods.map((m) => m.id);
+    expect(ids).toContain('operating-point');
+    expect(ids).toContain('thermal-network');
+    expect(ids).toContain(design.topology.rectifier === 'diode' ? 'diode-forward' : 'dead-time');
+    expect(ids).not.toContain(design.topology.rectifier === 'diode' ? 'dead-time' : 'diode-forward');
+    for (const m of model.methods) expect(m.source.length, m.id).toBeGreaterThan(10);
+    const overlap = model.methods.find((m) => m.id === 'overlap');
+    expect(overlap?.limits.join(' ')).toMatch(/common-source inductance/i); // issue 6 §8 example of a known limit
+  });
+});
+
+describe('buildReport title block', () => {
+  it('hashes the document text with SHA-256 and passes date, version and project through', () => {
+    const design = demoDesign('hot-fin-buck');
+    const text = designText(design);
+    const title = buildReport({ design, documentText: text, date: '2031-01-15', appVersion: '9.9.9', project: '  Bench kit  ', sweepPoints: 20, familyPoints: 10 }).title;
+    expect(title.designHash).toBe(createHash('sha256').update(text, 'utf8').digest('hex')); // Node crypto (OpenSSL) reference
+    expect([title.date, title.appVersion, title.project, title.designName, title.revision]).toEqual(['2031-01-15', '9.9.9', 'Bench kit', design.name, design.revision]);
+  }, SLOW);
+});
+
+describe('buildReport on a design with a touch hazard', () => {
+  it('lists the burn hazard as a danger seen at rated load', () => {
+    const model = build('hot-fin-buck', { sweepPoints: 40, familyPoints: 10 });
+    const exceeded = model.rated.hazards.filter((h) => h.exceeded);
+    expect(exceeded.length).toBeGreaterThan(0);
+    for (const h of exceeded) {
+      const alert = model.summary.alerts.find((a) => a.code === 'burn-hazard' && a.part === h.part);
+      expect(alert?.severity).toBe('danger');
+      expect(alert?.seenAt).toContain('rated load, Vin nom');
+    }
+    expect(model.summary.alerts[0]!.severity).toBe('danger'); // dangers first
+  }, SLOW);
+});
+
+describe('buildReport appendices', () => {
+  it('reduces a comparison and the tolerance results without changing their numbers', () => {
+    const design = demoDesign('synchronous-buck');
+    const library = validatePartsLibrary(DEMO_PARTS_LIBRARY);
+    if (!library.ok) throw new Error('library invalid');
+    const fets = partsOfKind(library.library, 'mosfet').slice(0, 2);
+    const outcome = compareParts(design, { role: 'switch', parts: fets, sweep: { points: 20 } });
+    if (!outcome.ok) throw new Error(outcome.problems.map((p) => p.message).join(' '));
+    const wc = worstCase(design, { tolerances: { rdsOnFraction: 0.1, dcrFraction: 0, esrFraction: 0, inductanceFraction: 0, frequencyFraction: 0 } });
+    const mc = monteCarlo(design, { seed: 7, samples: 30, keepSamples: true });
+    const model = build('synchronous-buck', { sweepPoints: 20, familyPoints: 10, comparison: outcome.comparison, worstCase: wc, monteCarlo: mc });
+    const c = model.comparison!;
+    expect(c.alternatives.map((a) => a.partId)).toEqual(fets.map((f) => f.id));
+    expect(c.alternatives.map((a) => a.evaluation)).toEqual(outcome.comparison.alternatives.map((a) => a.evaluation));
+    expect(c.alternatives[1]!.efficiency).toEqual(outcome.comparison.alternatives[1]!.sweep.points.map((p) => p.efficiency));
+    expect(c.crossovers).toEqual(outcome.comparison.crossovers);
+    expect(model.tolerance?.worstCase?.cornerCount).toBe(wc.corners.length);
+    expect(model.tolerance?.worstCase?.worstEfficiency).toEqual(wc.worstEfficiency);
+    expect(model.tolerance?.monteCarlo?.efficiency).toEqual(mc.efficiency);
+    expect(model.tolerance?.monteCarlo).not.toHaveProperty('values');
+    expect(model.methods.map((m) => m.id)).toEqual(expect.arrayContaining(['comparison', 'tolerance']));
+  }, SLOW);
+});
