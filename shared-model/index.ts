@@ -5,6 +5,8 @@
 
 // --- units ---
 export type * from './units/quantities.ts';
+export type { EngineeringParse } from './units/engineering.ts';
+export { formatEngineering, parseEngineering } from './units/engineering.ts';
 
 // --- warnings ---
 export type { Severity, Warning, WarningCode } from './warnings.ts';
@@ -12,14 +14,191 @@ export type { Severity, Warning, WarningCode } from './warnings.ts';
 // --- design document ---
 export * from './design/parts.ts';
 export * from './design/schema.ts';
+export { ABSOLUTE_ZERO_C, LIMITS as DESIGN_LIMITS } from './design/numbers.ts';
+export { unitOfKey, unitOfPath } from './design/key-units.ts';
+export type { DesignNotice, Problem } from './design/problems.ts';
+export { describeValue } from './design/problems.ts';
+export type { DesignValidation } from './design/validate.ts';
+export { crossFieldProblems, validateDesign } from './design/validate.ts';
+export type { MigrationResult } from './design/migrate.ts';
+export { migrateDesign } from './design/migrate.ts';
+export { parseDesignText, serializeDesign, unrepresentable } from './design/document-text.ts';
+export type { JsonSyntaxError } from './design/json-position.ts';
+export { findJsonSyntaxError } from './design/json-position.ts';
+export type { PartsLibrary } from './design/parts-library.ts';
+export {
+  PARTS_LIBRARY_FORMAT,
+  PARTS_LIBRARY_VERSION,
+  partsLibrarySchema,
+  partsOfKind,
+  validatePartsLibrary,
+} from './design/parts-library.ts';
+export { DESIGN_SCHEMA_FILE, designJsonSchema, PARTS_SCHEMA_FILE, partsLibraryJsonSchema } from './design/json-schema.ts';
+export type { DemoDesign } from './design/demos.ts';
+export { DEMO_DESIGNS, DEMO_PARTS_LIBRARY } from './design/demos.ts';
 
 // --- operating point ---
 export type * from './operating-point/types.ts';
+export { solveOperatingPoint } from './operating-point/solve.ts';
+export { conductionParameters, nominalConditions, uniformTemps } from './operating-point/conditions.ts';
+export { isSynchronous } from './operating-point/circuit.ts';
+export { waveformStats, periodOf } from './waveform/stats.ts';
+export { constantWaveform, offsetWaveform, scaleWaveform, segment, waveformOf } from './waveform/build.ts';
+export type { VoltageRipple } from './waveform/voltage-ripple.ts';
+export { capacitorVoltageRipple } from './waveform/voltage-ripple.ts';
+export {
+  COPPER_ALPHA20_PER_K,
+  copperResistanceAt,
+  diodeVf0At,
+  esrAt,
+  leakageAt,
+  rdsOnAt,
+  resistorAt,
+} from './physics/temperature-laws.ts';
 
 // --- ledger ---
 export type * from './ledger/types.ts';
+export type { EvaluateOptions, LedgerEvaluator } from './ledger/evaluate.ts';
+export { DEFAULT_TOLERANCE_K, evaluate, ledgerEvaluator, POWER_BALANCE_RTOL } from './ledger/evaluate.ts';
+export { RUNAWAY_BAND_K } from './thermal/fixed-point.ts';
+export { TOUCH_LIMITS } from './hazards/touch-limits.ts';
+export type { RowFit } from './hazards/touch-check.ts';
+export { hazardCaution, touchLimitFor } from './hazards/touch-check.ts';
+export { electrolyticLifeHours, isatAt, resistorRatingAt } from './hazards/ratings.ts';
 
 // --- sweeps, comparison, tolerance ---
+export type {
+  HazardColumn,
+  LoadSweep,
+  LoadSweepOptions,
+  LossColumn,
+  OptionProblem,
+  PointEvaluator,
+  SweepColumns,
+  SweepPoint,
+  SweepSpacing,
+  TemperatureColumn,
+} from './sweep/types.ts';
+export { axisValues, checkAxis, MAX_AXIS_POINTS } from './sweep/spacing.ts';
+export { lossByMechanism } from './sweep/point-record.ts';
+export {
+  checkLoadSweepOptions,
+  DEFAULT_SWEEP_FROM_FRACTION,
+  DEFAULT_SWEEP_POINTS,
+  DEFAULT_SWEEP_SPACING,
+  DEFAULT_SWEEP_TO_FRACTION,
+  sweepLoad,
+} from './sweep/load-sweep.ts';
+export type { FamilyMember, FamilyOptions, SweepFamilies } from './sweep/families.ts';
+export { DEFAULT_EXTRA_AMBIENT_K, sweepFamilies } from './sweep/families.ts';
+export type { FrequencySide, FrequencySweep, FrequencySweepOptions } from './sweep/frequency-sweep.ts';
+export { checkFrequencySweepOptions, sweepFrequency } from './sweep/frequency-sweep.ts';
+export type { AxisOptions, GridAxis, GridOptions, LoadGrid } from './sweep/grid.ts';
+export { checkGridOptions, sweepGrid } from './sweep/grid.ts';
+export type { FigureOfMeritPoint, FiguresOfMerit } from './sweep/figures-of-merit.ts';
+export {
+  AVERAGE_EFFICIENCY_FRACTIONS,
+  FIGURES_OF_MERIT_SOURCE,
+  figuresOfMerit,
+  figuresOfMeritOf,
+  LIGHT_LOAD_FRACTION,
+} from './sweep/figures-of-merit.ts';
+export type {
+  KneeLandmark,
+  Landmark,
+  Landmarks,
+  PartCeiling,
+  RegulationLandmark,
+  ThermalCeilingLandmark,
+} from './landmarks/types.ts';
+export type { LandmarkOptions } from './landmarks/find-landmarks.ts';
+export { findLandmarks, loadProbe } from './landmarks/find-landmarks.ts';
+export type { PeakResult } from './landmarks/peak.ts';
+export { findPeak } from './landmarks/peak.ts';
+export { DEFAULT_KNEE_THRESHOLD_POINTS, findKnee, kneeDefinition } from './landmarks/knee.ts';
+export { findModeBoundary } from './landmarks/mode-boundary.ts';
+export { findThermalCeiling, hasFixedPoint } from './landmarks/thermal-ceiling.ts';
+export { findRegulationLimit, REGULATION_WARNINGS, regulationCause } from './landmarks/regulation-limit.ts';
+export { findEdge, findMaximum, findRoot, interpolateAt, interpolateCrossing, parabolaVertex } from './landmarks/search.ts';
+export type { Substitution } from './compare/substitute-part.ts';
+export { partInRole, ROLE_KINDS, substitutePart } from './compare/substitute-part.ts';
+export type { Crossover } from './compare/crossover.ts';
+export { findCrossovers, winnersOf } from './compare/crossover.ts';
+export type {
+  CompareAlternative,
+  CompareCrossover,
+  CompareOptions,
+  Comparison,
+  ComparisonOutcome,
+} from './compare/compare-parts.ts';
+export { compareParts } from './compare/compare-parts.ts';
+export type { RoleStress } from './compare/role-fit.ts';
+export { DEFAULT_CURRENT_DERATING, ratingShortfalls, stressOf } from './compare/role-fit.ts';
+export type { RankCriterion, RankedPart, RankOptions, Ranking, RejectedPart } from './compare/rank-parts.ts';
+export { RANK_CRITERIA, rankParts } from './compare/rank-parts.ts';
+export type { RandomSource } from './tolerance/prng.ts';
+export { createRandom, isValidSeed, MT19937_DEFAULT_SEED } from './tolerance/prng.ts';
+export type { SampleHistogram, SampleSummary } from './tolerance/statistics.ts';
+export {
+  fractionWhere,
+  sampleHistogram,
+  sampleMean,
+  sampleQuantile,
+  sampleStandardDeviation,
+  summarizeSamples,
+} from './tolerance/statistics.ts';
+export type { ResolvedTolerances, SpreadKey, ToleranceRange, Tolerances, Variation } from './tolerance/variation.ts';
+export {
+  applyVariation,
+  checkTolerances,
+  DEFAULT_AMBIENT_SPREAD_K,
+  DEFAULT_SPREADS,
+  describeVariation,
+  nominalVariation,
+  resolveTolerances,
+  SPREAD_KEYS,
+} from './tolerance/variation.ts';
+export type { CornerTemperature, ToleranceCorner, WorstCase, WorstCaseOptions } from './tolerance/worst-case.ts';
+export { CORNER_CAUTION, cornerVariations, evaluateCorner, worstCase } from './tolerance/worst-case.ts';
+export type { MonteCarlo, MonteCarloDistribution, MonteCarloOptions, PartDistribution } from './tolerance/monte-carlo.ts';
+export {
+  checkMonteCarloOptions,
+  DEFAULT_MONTE_CARLO_SAMPLES,
+  DEFAULT_MONTE_CARLO_SEED,
+  drawVariation,
+  MAX_MONTE_CARLO_SAMPLES,
+  monteCarlo,
+} from './tolerance/monte-carlo.ts';
+
+// --- design-review report ---
+export type * from './report/types.ts';
+export { REPORT_FORMAT, REPORT_VERSION } from './report/types.ts';
+export type { ReportInput } from './report/build.ts';
+export { buildReport, DEFAULT_FAMILY_POINTS } from './report/build.ts';
+export type { MethodSelection } from './report/methods.ts';
+export { METHOD_CATALOGUE, methodsFor } from './report/methods.ts';
+export { REPORT_CAUTIONS, SHORT_CAUTION } from './report/cautions.ts';
+export { csvField, ledgerCsv, sweepCsv } from './report/csv.ts';
+export { sha256, sha256Hex, utf8Bytes } from './report/sha256.ts';
+export { CHECK_LABELS, CONTACT_LABELS, describePath, ROLE_LABELS, roleLabel } from './report/labels.ts';
+export {
+  balanceDecimals,
+  formatAmps,
+  formatCelsius,
+  formatDuty,
+  formatFixed,
+  formatHertz,
+  formatHours,
+  formatKelvin,
+  formatMarginFraction,
+  formatPercent,
+  formatPlain,
+  formatQuantity,
+  formatSi,
+  formatVolts,
+  formatWatts,
+  formatWattsFixed,
+} from './report/format.ts';
 
 // --- desktop API contract (types only) ---
 export type * from './desktop-api.ts';

@@ -87,7 +87,7 @@ export interface RatingCheck {
   value: number;
   limit: number;
   unit: string;
-  /** Margin as (limit − value) / limit. */
+  /** Margin as (limit − value) / limit; for 'capacitor-life' (value must reach the limit) (value − limit) / limit. Positive: within. */
   marginFraction: number;
   ok: boolean;
   note: string;

@@ -1,0 +1,142 @@
+/**
+ * The ledger's term slots: which mechanisms a design has, on which part and thermal node, with a reused
+ * input record each. The set depends only on the design (topology, rectifier, winding model), never on
+ * the operating conditions, so the terms of a sweep line up point by point; a mechanism that does not
+ * occur at a point (turn-on overlap in DCM, say) stays in the ledger with 0 W.
+ *
+ * `source`: the loss is paid by the source at an unchanged duty cycle, so it goes to the solver's
+ * `sourceLossOf` (added to the source current) rather than to `lossOf` (which moves the duty):
+ *   - controller bias and gate drive (supplied from the input beside the power stage);
+ *   - in a buck, the charge pulses of Coss, junction capacitance, reverse recovery and diode leakage, which
+ *     flow from Vin through the switch, bypassing the inductor;
+ *   - the input capacitor's ESR (the solver holds the input stiff);
+ *   - losses of the ripple: core loss, AC winding loss, and the slope part of every resistive conduction
+ *     loss (R·Σ(t/T)·Δi²/12, split off in the kernel). For a linear circuit these are paid by the curvature
+ *     of the real waveforms at the volt-second duty: a parallel core-loss resistor across L draws
+ *     D·(Vin − Vo)/Rp more input current and dissipates exactly that power with no change of volt-seconds
+ *     (buck, worked by hand), and the time-domain reference reaches the target output at the duty whose
+ *     interval-mean drops balance the volt-seconds (test/shared-model/ledger/time-domain.test.ts).
+ * Everything else — the interval-mean part of conduction losses, overlap, dead time, and in a boost the
+ * charge pulses drawn from the output — takes volt-seconds from the inductor and moves the duty.
+ */
+import type { Design, Role } from '../design/schema.ts';
+import type { LossModel } from '../losses/model.ts';
+import { capacitorEsr, type CapacitorEsrInputs } from '../losses/capacitor-esr.ts';
+import { conduction, type ConductionInputs } from '../losses/conduction.ts';
+import { coreLoss, type CoreLossInputs } from '../losses/core-loss.ts';
+import { deadTime, type DeadTimeInputs } from '../losses/dead-time.ts';
+import { diodeForward, type DiodeForwardInputs } from '../losses/diode-forward.ts';
+import { driverSupply, type DriverSupplyInputs } from '../losses/driver-supply.ts';
+import { gateDrive, type GateDriveInputs } from '../losses/gate-drive.ts';
+import { junctionCapacitance, type JunctionCapacitanceInputs } from '../losses/junction-capacitance.ts';
+import { outputCapacitance, type OutputCapacitanceInputs } from '../losses/output-capacitance.ts';
+import { quiescent, type QuiescentInputs } from '../losses/quiescent.ts';
+import { reverseLeakage, type ReverseLeakageInputs } from '../losses/reverse-leakage.ts';
+import { reverseRecovery, type ReverseRecoveryInputs } from '../losses/reverse-recovery.ts';
+import { senseResistor, type SenseResistorInputs } from '../losses/sense-resistor.ts';
+import { turnOff, type TurnOffInputs } from '../losses/turn-off.ts';
+import { turnOn, type TurnOnInputs } from '../losses/turn-on.ts';
+import { windingAc, type WindingAcInputs } from '../losses/winding-ac.ts';
+import { windingDc, type WindingDcInputs } from '../losses/winding-dc.ts';
+
+export interface Slot<I> {
+  role: Role;
+  model: LossModel<I>;
+  inputs: I;
+  source: boolean;
+  /** The mechanism depends on the part's temperature (RDS(on), Vf0, leakage, DCR, ESR, R). */
+  thermal: boolean;
+  watts: number;
+}
+
+const conductionIn = (): ConductionInputs => ({ irmsA: 0, resistanceOhm: 0, temperatureC: 0 });
+const gateIn = (): GateDriveInputs => ({ qgC: 0, driveV: 0, frequencyHz: 0, gateOhm: 0, pullUpOhm: 0, pullDownOhm: 0 });
+const deadIn = (): DeadTimeInputs => ({ vsdV: 0, firstA: 0, firstS: 0, secondA: 0, secondS: 0, frequencyHz: 0 });
+const recoveryIn = (): ReverseRecoveryInputs => ({ qrrC: 0, voltageV: 0, frequencyHz: 0 });
+const capIn = (): CapacitorEsrInputs => ({ irmsA: 0, esrOhm: 0, count: 1, temperatureC: 0 });
+
+const THERMAL: ReadonlySet<string> = new Set(['conduction', 'forward drop', 'reverse leakage', 'winding DC', 'winding AC', 'ESR', 'sense']);
+
+function slot<I>(role: Role, model: LossModel<I>, inputs: I, source = false): Slot<I> {
+  return { role, model, inputs, source, thermal: THERMAL.has(model.mechanism), watts: 0 };
+}
+
+/** Every slot of a design, named, plus the ordered list the kernel sums. */
+export interface Slots {
+  swConduction: Slot<ConductionInputs>;
+  swTurnOn: Slot<TurnOnInputs>;
+  swTurnOff: Slot<TurnOffInputs>;
+  swCoss: Slot<OutputCapacitanceInputs>;
+  swGate: Slot<GateDriveInputs>;
+  /** Synchronous designs: the switch's own body diode (reverse current in forced PWM). */
+  swDeadTime?: Slot<DeadTimeInputs>;
+  /** Synchronous rectifier body diode, or a PN rectifier diode. */
+  swRecovery?: Slot<ReverseRecoveryInputs>;
+  /** Schottky rectifier junction capacitance, charged through the switch. */
+  swJunction?: Slot<JunctionCapacitanceInputs>;
+  rectConduction?: Slot<ConductionInputs>;
+  rectGate?: Slot<GateDriveInputs>;
+  rectDeadTime?: Slot<DeadTimeInputs>;
+  diodeForward?: Slot<DiodeForwardInputs>;
+  diodeLeakage?: Slot<ReverseLeakageInputs>;
+  windingDc: Slot<WindingDcInputs>;
+  windingAc?: Slot<WindingAcInputs>;
+  core: Slot<CoreLossInputs>;
+  inputEsr: Slot<CapacitorEsrInputs>;
+  outputEsr: Slot<CapacitorEsrInputs>;
+  sense?: Slot<SenseResistorInputs>;
+  quiescent: Slot<QuiescentInputs>;
+  driver: Slot<DriverSupplyInputs>;
+  all: Slot<unknown>[];
+}
+
+export function slotsOf(design: Design, synchronous: boolean): Slots {
+  const buck = design.topology.kind === 'buck';
+  const rect = design.parts.rectifier;
+  const s: Slots = {
+    swConduction: slot('switch', conduction, conductionIn()),
+    swTurnOn: slot('switch', turnOn, {
+      voltageV: 0, currentA: 0, frequencyHz: 0, driveV: 0, plateauV: 0, pullUpOhm: 0, gateOhm: 0, qgs2C: 0, qgdC: 0,
+    }),
+    swTurnOff: slot('switch', turnOff, {
+      voltageV: 0, currentA: 0, frequencyHz: 0, plateauV: 0, pullDownOhm: 0, gateOhm: 0, qgs2C: 0, qgdC: 0,
+    }),
+    swCoss: slot('switch', outputCapacitance, { voltageV: 0, frequencyHz: 0, ctrlEossJ: 0, syncQossC: 0, syncEossJ: 0 }, buck),
+    swGate: slot('switch', gateDrive, gateIn(), true),
+    windingDc: slot('inductor', windingDc, { irmsA: 0, dcrOhm: 0, temperatureC: 0 }),
+    core: slot('inductor', coreLoss, { kiWPerM3: 0, alpha: 1, beta: 2, veM3: 0, fluxPerAmpT: 0, segments: [] }, true),
+    inputEsr: slot('inputCapacitor', capacitorEsr, capIn(), true),
+    outputEsr: slot('outputCapacitor', capacitorEsr, capIn()),
+    quiescent: slot('controller', quiescent, { vinV: 0, quiescentA: 0 }, true),
+    driver: slot('controller', driverSupply, { qgTotalC: 0, supplyV: 0, frequencyHz: 0, insideFetsW: 0 }, true),
+    all: [],
+  };
+  if (synchronous) {
+    s.swDeadTime = slot('switch', deadTime, deadIn());
+    s.swRecovery = slot('switch', reverseRecovery, recoveryIn(), buck);
+    s.rectConduction = slot('rectifier', conduction, conductionIn());
+    s.rectGate = slot('rectifier', gateDrive, gateIn(), true);
+    s.rectDeadTime = slot('rectifier', deadTime, deadIn());
+  } else {
+    if (rect.kind === 'diode' && rect.technology === 'schottky') {
+      s.swJunction = slot('switch', junctionCapacitance, { cjF: 0, voltageV: 0, frequencyHz: 0 }, buck);
+    } else {
+      s.swRecovery = slot('switch', reverseRecovery, recoveryIn(), buck);
+    }
+    s.diodeForward = slot('rectifier', diodeForward, { vf0V: 0, rdOhm: 0, iavgA: 0, irmsA: 0, temperatureC: 0 });
+    s.diodeLeakage = slot('rectifier', reverseLeakage, {
+      leakageA: 0, reverseV: 0, reverseFraction: 0, idleV: 0, idleFraction: 0, temperatureC: 0,
+    }, buck);
+  }
+  if (design.parts.inductor.acWinding.kind !== 'none') {
+    s.windingAc = slot('inductor', windingAc, { acRmsA: 0, dcrOhm: 0, factor: 1, temperatureC: 0 }, true);
+  }
+  if (design.parts.senseResistor) s.sense = slot('senseResistor', senseResistor, { irmsA: 0, resistanceOhm: 0, temperatureC: 0 });
+  const order = [
+    s.swConduction, s.swTurnOn, s.swTurnOff, s.swCoss, s.swDeadTime, s.swRecovery, s.swJunction, s.swGate,
+    s.rectConduction, s.diodeForward, s.rectDeadTime, s.diodeLeakage, s.rectGate,
+    s.windingDc, s.windingAc, s.core, s.inputEsr, s.outputEsr, s.sense, s.quiescent, s.driver,
+  ];
+  for (const x of order) if (x !== undefined) s.all.push(x as Slot<unknown>);
+  return s;
+}
