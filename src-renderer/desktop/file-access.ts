@@ -1,0 +1,52 @@
+/**
+ * What the renderer needs from the operating system, in one interface with two implementations:
+ * the Electron preload API (window.wattledger, contract in shared-model/desktop-api.ts) or, in a plain
+ * browser, a file input, a download and localStorage.
+ */
+import type {
+  DocumentState,
+  ExportRequest,
+  MenuCommand,
+  OpenedFile,
+  SaveOutcome,
+  SaveRequest,
+} from '../../shared-model/index.ts';
+import { createBrowserFileAccess } from './browser-files.ts';
+
+export interface RecoverySnapshot {
+  text: string;
+  /** ISO 8601 time the snapshot was written. */
+  savedAt: string;
+}
+
+export interface FileAccess {
+  readonly kind: 'electron' | 'browser';
+  /** Asks the user for a design file; null when cancelled. */
+  open(): Promise<OpenedFile | null>;
+  /** Saves to request.path (Electron, atomically) or asks / downloads. */
+  save(request: SaveRequest): Promise<SaveOutcome>;
+  exportFile(request: ExportRequest): Promise<SaveOutcome>;
+  readRecovery(): Promise<RecoverySnapshot | null>;
+  writeRecovery(text: string): Promise<void>;
+  clearRecovery(): Promise<void>;
+  setDocumentState(state: DocumentState): void;
+  onMenuCommand(listener: (command: MenuCommand) => void): () => void;
+  onOpenFile(listener: (file: OpenedFile) => void): () => void;
+}
+
+export function createFileAccess(): FileAccess {
+  const api = typeof window === 'undefined' ? undefined : window.wattledger;
+  if (!api) return createBrowserFileAccess();
+  return {
+    kind: 'electron',
+    open: () => api.openDesign(),
+    save: (request) => api.saveDesign(request),
+    exportFile: (request) => api.exportFile(request),
+    readRecovery: () => api.readRecovery(),
+    writeRecovery: (text) => api.writeRecovery(text),
+    clearRecovery: () => api.clearRecovery(),
+    setDocumentState: (state) => api.setDocumentState(state),
+    onMenuCommand: (listener) => api.onMenuCommand(listener),
+    onOpenFile: (listener) => api.onOpenFile(listener),
+  };
+}

@@ -1,0 +1,94 @@
+/** Field descriptions of the design-level sections (specification, topology, margins). */
+import { num, type ChoiceSpec, type FieldSpec } from './field-spec.ts';
+
+export const SPEC_FIELDS: FieldSpec[] = [
+  num('vinMinV', 'Input voltage, lowest', 'V'),
+  num('vinNomV', 'Input voltage, nominal', 'V'),
+  num('vinMaxV', 'Input voltage, highest', 'V'),
+  num('voutV', 'Output voltage', 'V'),
+  num('ratedLoadA', 'Rated load current', 'A'),
+  num('switchingFrequencyHz', 'Switching frequency', 'Hz'),
+  num('ambientC', 'Ambient temperature', '°C'),
+  num('maxDuty', 'Largest duty cycle', '', { help: 'A fraction below 1 ("0.9" or "90 %").' }),
+];
+
+export const TARGET_FIELDS: FieldSpec[] = [
+  num('efficiencyAtRated', 'Efficiency at rated load', '', { optional: true }),
+  num('outputRippleV', 'Output ripple, peak to peak', 'V', { optional: true }),
+  num('inductorRippleRatio', 'Inductor ripple / rated current', '', { optional: true }),
+];
+
+export const KIND_CHOICE: ChoiceSpec = {
+  type: 'choice',
+  key: 'kind',
+  label: 'Converter',
+  options: [
+    { value: 'buck', label: 'Buck (step-down)' },
+    { value: 'boost', label: 'Boost (step-up)' },
+  ],
+};
+
+export const RECTIFIER_CHOICE: ChoiceSpec = {
+  type: 'choice',
+  key: 'rectifier',
+  label: 'Rectifier',
+  options: [
+    { value: 'diode', label: 'Diode' },
+    { value: 'synchronous', label: 'Synchronous MOSFET' },
+  ],
+};
+
+export const LIGHT_LOAD_CHOICE: ChoiceSpec = {
+  type: 'choice',
+  key: 'lightLoad',
+  label: 'At light load',
+  options: [
+    { value: 'forced-pwm', label: 'Keep switching (current may reverse)' },
+    { value: 'diode-emulation', label: 'Stop the rectifier at zero current (DCM)' },
+  ],
+};
+
+export const SENSE_CHOICE: ChoiceSpec = {
+  type: 'choice',
+  key: 'senseLocation',
+  label: 'Current-sense resistor',
+  options: [
+    { value: 'none', label: 'None' },
+    { value: 'input', label: 'In the input line' },
+    { value: 'switch', label: 'In series with the switch' },
+    { value: 'inductor', label: 'In series with the inductor' },
+    { value: 'output', label: 'In the output line' },
+  ],
+};
+
+export const DEAD_TIME_FIELDS: FieldSpec[] = [
+  num('deadTimeBeforeOnS', 'Dead time before switch turn-on', 's'),
+  num('deadTimeAfterOffS', 'Dead time after switch turn-off', 's'),
+];
+
+export const MARGIN_FIELDS: FieldSpec[] = [
+  num('temperatureMarginK', 'Keep below each temperature limit by', 'K'),
+  num('rippleCurrentDerating', 'Usable share of capacitor ripple rating', ''),
+  num('resistorPowerDerating', 'Usable share of resistor power rating', ''),
+  num('voltageDerating', 'Usable share of voltage ratings', ''),
+  num('requiredLifeHours', 'Required capacitor life', 'h', { optional: true }),
+];
+
+export const SURFACE_OPTIONS = [
+  { value: 'metal', label: 'bare metal' },
+  { value: 'glass', label: 'glass or ceramic' },
+  { value: 'plastic', label: 'plastic' },
+] as const;
+
+export const CONTACT_CHOICE: ChoiceSpec = {
+  type: 'choice',
+  key: 'contact',
+  label: 'How a person may touch it',
+  options: [
+    { value: 'brief', label: 'brief touch (about 1 s)' },
+    { value: 'held', label: 'held for a few seconds' },
+    { value: 'surface-1min', label: 'contact up to 1 minute' },
+    { value: 'surface-10min', label: 'contact up to 10 minutes' },
+    { value: 'surface-8h', label: 'contact up to 8 hours' },
+  ],
+};

@@ -1,0 +1,14 @@
+/** The design document as an edit target: every set is one undo step (keystrokes merge per field). */
+import type { DocumentStore } from '../state/document.svelte.ts';
+import { getAt } from '../state/paths.ts';
+import type { EditTarget } from './edit-target.ts';
+
+export function designTarget(doc: DocumentStore): EditTarget {
+  return {
+    idPrefix: 'design',
+    get: (path) => getAt(doc.design, path),
+    set: (path, value, label) => doc.edit(path, value, label),
+    seal: () => doc.seal(),
+    problems: (path) => doc.problemsAt(path).map((p) => p.message),
+  };
+}

@@ -1,0 +1,20 @@
+/**
+ * What a field component edits: the design document (through the undo history) or a part being
+ * edited in the library. Paths are absolute within the target.
+ */
+import type { Path } from '../state/paths.ts';
+
+export interface EditTarget {
+  /** Prefix that keeps element ids unique when two targets are on screen. */
+  readonly idPrefix: string;
+  get(path: Path): unknown;
+  set(path: Path, value: unknown, label: string): void;
+  /** The user left a field: the next keystroke starts a new undo step. */
+  seal(): void;
+  /** Validation sentences for exactly this field. */
+  problems(path: Path): string[];
+}
+
+export function fieldId(target: EditTarget, path: Path): string {
+  return `${target.idPrefix}-${path.join('-')}`.replace(/[^A-Za-z0-9_-]/g, '_');
+}

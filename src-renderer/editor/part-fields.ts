@@ -1,0 +1,214 @@
+/**
+ * The editable fields of each part kind (keys from shared-model/design/parts.ts). Used by the design
+ * editor and by the part library editor. Labels use trade terms; units are SI symbols.
+ */
+import type { PartKind } from '../../shared-model/index.ts';
+import { num, type FieldSpec, type UnionSpec } from './field-spec.ts';
+
+const identity: FieldSpec[] = [
+  { type: 'text', key: 'name', label: 'Name' },
+  { type: 'text', key: 'id', label: 'Identifier' },
+  { type: 'boolean', key: 'invented', label: 'Invented example (describes no real part)', optional: true },
+];
+
+const notes: FieldSpec = { type: 'text', key: 'notes', label: 'Notes', optional: true, multiline: true };
+
+const rdsLaw: UnionSpec = {
+  type: 'union',
+  key: 'rdsTemperatureLaw',
+  label: 'RDS(on) temperature law',
+  tag: 'law',
+  variants: [
+    { value: 'linear', label: 'Linear coefficient', fields: [num('alphaPerK', 'Coefficient α', '/K')], defaults: () => ({ alphaPerK: 0.005 }) },
+    { value: 'power', label: 'Power law in kelvin', fields: [num('exponent', 'Exponent k', '')], defaults: () => ({ exponent: 2 }) },
+    {
+      value: 'two-point',
+      label: 'Two datasheet points',
+      fields: [
+        { type: 'choice', key: 'shape', label: 'Fitted as', options: [{ value: 'linear', label: 'linear' }, { value: 'power', label: 'power law' }] },
+        num('hotC', 'Hot point temperature', '°C'),
+        num('hotRatio', 'RDS(on) ratio at hot point', ''),
+      ],
+      defaults: () => ({ shape: 'linear', hotC: 125, hotRatio: 1.5 }),
+    },
+  ],
+};
+
+const outputCapacitance: UnionSpec = {
+  type: 'union',
+  key: 'outputCapacitance',
+  label: 'Output capacitance',
+  tag: 'kind',
+  variants: [
+    { value: 'capacitance', label: 'Coss at a voltage', fields: [num('cossF', 'Coss', 'F'), num('atV', 'Measured at', 'V')], defaults: () => ({ cossF: 300e-12, atV: 12 }) },
+    {
+      value: 'charge-energy',
+      label: 'Qoss and Eoss at a voltage',
+      fields: [num('qossC', 'Qoss', 'C'), num('eossJ', 'Eoss', 'J'), num('atV', 'Measured at', 'V')],
+      defaults: () => ({ qossC: 5e-9, eossJ: 20e-9, atV: 12 }),
+    },
+  ],
+};
+
+const mosfet: FieldSpec[] = [
+  num('vdsRatingV', 'VDS rating', 'V'),
+  num('idRatingA', 'ID rating', 'A'),
+  num('rdsOn25Ohm', 'RDS(on) at 25 °C', 'Ω'),
+  rdsLaw,
+  num('qgC', 'Total gate charge Qg', 'C'),
+  num('qgs2C', 'Qgs2 (after threshold)', 'C', { optional: true }),
+  num('qgsC', 'Qgs (used when Qgs2 is blank)', 'C', { optional: true }),
+  num('qgdC', 'Gate-drain charge Qgd', 'C'),
+  num('vthV', 'Threshold voltage', 'V'),
+  num('plateauV', 'Plateau voltage', 'V'),
+  num('rgInternalOhm', 'Internal gate resistance', 'Ω'),
+  outputCapacitance,
+  num('bodyDiodeVsdV', 'Body diode VSD', 'V'),
+  num('bodyDiodeQrrC', 'Body diode Qrr', 'C'),
+  num('tjMaxC', 'Tj max', '°C'),
+  num('thetaJcKPerW', 'θJC', 'K/W'),
+];
+
+const diode: FieldSpec[] = [
+  { type: 'choice', key: 'technology', label: 'Technology', options: [{ value: 'schottky', label: 'Schottky' }, { value: 'pn', label: 'PN junction' }] },
+  num('vf0V', 'Forward voltage VF0', 'V'),
+  num('rdOhm', 'Slope resistance Rd', 'Ω'),
+  num('vfTempCoVPerK', 'VF0 temperature coefficient', 'V/K'),
+  num('qrrC', 'Reverse-recovery charge Qrr', 'C'),
+  num('cjF', 'Junction capacitance Cj', 'F'),
+  num('leakageA', 'Reverse leakage', 'A'),
+  num('leakageAtC', 'Leakage measured at', '°C'),
+  num('leakageDoublingK', 'Leakage doubles every', 'K'),
+  num('vrRatingV', 'VR rating', 'V'),
+  num('ifRatingA', 'IF rating', 'A'),
+  num('tjMaxC', 'Tj max', '°C'),
+  num('thetaJcKPerW', 'θJC', 'K/W'),
+];
+
+const coreLoss: UnionSpec = {
+  type: 'union',
+  key: 'coreLoss',
+  label: 'Core loss data',
+  tag: 'kind',
+  variants: [
+    {
+      value: 'steinmetz',
+      label: 'Steinmetz coefficients',
+      fields: [num('k', 'k (W/m³, f in Hz, B in T)', ''), num('alpha', 'Frequency exponent α', ''), num('beta', 'Flux exponent β', '')],
+      defaults: () => ({ k: 3, alpha: 1.4, beta: 2.5 }),
+    },
+    {
+      value: 'point',
+      label: 'One datasheet point',
+      fields: [
+        num('lossWPerM3', 'Loss density', 'W/m³'),
+        num('atHz', 'At frequency', 'Hz'),
+        num('atPeakT', 'At peak flux', 'T'),
+        num('alpha', 'Frequency exponent α', ''),
+        num('beta', 'Flux exponent β', ''),
+      ],
+      defaults: () => ({ lossWPerM3: 100e3, atHz: 100e3, atPeakT: 0.1, alpha: 1.4, beta: 2.5 }),
+    },
+  ],
+};
+
+const acWinding: UnionSpec = {
+  type: 'union',
+  key: 'acWinding',
+  label: 'Winding AC resistance',
+  tag: 'kind',
+  variants: [
+    { value: 'none', label: 'Ignore', fields: [], defaults: () => ({}) },
+    { value: 'factor', label: 'Rac/Rdc factor', fields: [num('racOverRdc', 'Rac / Rdc at fs', '')], defaults: () => ({ racOverRdc: 1.5 }) },
+    {
+      value: 'dowell',
+      label: 'Layered winding (Dowell)',
+      fields: [num('layers', 'Layers', ''), num('conductorThicknessM', 'Conductor thickness', 'm'), num('porosity', 'Porosity factor', '')],
+      defaults: () => ({ layers: 2, conductorThicknessM: 0.2e-3, porosity: 0.8 }),
+    },
+  ],
+};
+
+const inductor: FieldSpec[] = [
+  num('inductanceH', 'Inductance', 'H'),
+  {
+    type: 'group',
+    key: 'rolloff',
+    label: 'Inductance falls with current',
+    fields: [num('currentA', 'At current', 'A'), num('inductanceH', 'Inductance there', 'H')],
+    defaults: (part) => ({ currentA: Number(part.isatA) || 1, inductanceH: 0.8 * (Number(part.inductanceH) || 1e-6) }),
+  },
+  num('dcr20Ohm', 'DCR at 20 °C', 'Ω'),
+  num('isatA', 'Saturation current Isat', 'A'),
+  num('isatAtC', 'Isat stated at', '°C'),
+  num('isatTempCoPerK', 'Isat change per kelvin', '/K'),
+  num('irmsRatingA', 'RMS current rating', 'A'),
+  num('turns', 'Turns', ''),
+  num('aeM2', 'Core area Ae', 'm²'),
+  num('veM3', 'Core volume Ve', 'm³'),
+  coreLoss,
+  acWinding,
+  num('tMaxC', 'Maximum temperature', '°C'),
+];
+
+const capacitor: FieldSpec[] = [
+  {
+    type: 'choice',
+    key: 'dielectric',
+    label: 'Dielectric',
+    options: [
+      { value: 'ceramic', label: 'ceramic' },
+      { value: 'electrolytic', label: 'aluminium electrolytic' },
+      { value: 'polymer', label: 'polymer' },
+      { value: 'film', label: 'film' },
+    ],
+  },
+  num('capacitanceF', 'Capacitance', 'F'),
+  num('esrOhm', 'ESR at fs', 'Ω'),
+  num('esrTempCoPerK', 'ESR change per kelvin', '/K'),
+  num('rippleRatingA', 'Ripple current rating', 'A'),
+  num('voltageRatingV', 'Voltage rating', 'V'),
+  num('tMaxC', 'Maximum temperature', '°C'),
+  {
+    type: 'group',
+    key: 'life',
+    label: 'Rated life (electrolytic, polymer)',
+    fields: [num('ratedHours', 'Rated life', 'h'), num('ratedC', 'At temperature', '°C')],
+    defaults: () => ({ ratedHours: 2000, ratedC: 105 }),
+  },
+];
+
+const resistor: FieldSpec[] = [
+  num('resistanceOhm', 'Resistance', 'Ω'),
+  num('tempCoPerK', 'Temperature coefficient', '/K'),
+  num('powerRatingW', 'Power rating', 'W'),
+  num('deratingStartC', 'Derating starts at', '°C'),
+  num('zeroPowerC', 'Zero power at', '°C'),
+];
+
+const controller: FieldSpec[] = [
+  num('quiescentA', 'Quiescent current', 'A'),
+  num('driveV', 'Gate drive voltage', 'V'),
+  num('pullUpOhm', 'Driver pull-up resistance', 'Ω'),
+  num('pullDownOhm', 'Driver pull-down resistance', 'Ω'),
+  { type: 'boolean', key: 'driveFromVinLinear', label: 'Drive rail made from Vin by a linear regulator' },
+  num('tjMaxC', 'Tj max', '°C'),
+];
+
+export const PART_FIELDS: Record<PartKind, { identity: FieldSpec[]; values: FieldSpec[] }> = {
+  mosfet: { identity, values: [...mosfet, notes] },
+  diode: { identity, values: [...diode, notes] },
+  inductor: { identity, values: [...inductor, notes] },
+  capacitor: { identity, values: [...capacitor, notes] },
+  resistor: { identity, values: [...resistor, notes] },
+  controller: { identity, values: [...controller, notes] },
+};
+
+export const KIND_LABELS: Record<PartKind, { one: string; many: string }> = {
+  mosfet: { one: 'MOSFET', many: 'MOSFETs' },
+  diode: { one: 'Diode', many: 'Diodes' },
+  inductor: { one: 'Inductor', many: 'Inductors' },
+  capacitor: { one: 'Capacitor', many: 'Capacitors' },
+  resistor: { one: 'Resistor', many: 'Resistors' },
+  controller: { one: 'Controller', many: 'Controllers' },
+};

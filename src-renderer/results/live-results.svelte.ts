@@ -1,0 +1,232 @@
+/**
+ * Everything the results area computes for the last valid design at the chosen load and Vin:
+ * - the full evaluation at that point, synchronously on every change (the engine's evaluate);
+ * - the 200-point load sweep with its landmarks: synchronously while that stays inside the speed
+ *   budget, otherwise in the engine worker; the measured time of the single evaluation, of each worker
+ *   sweep and of each sweep done here decide which; newest request wins;
+ * - the Vin family, frequency sweep, load × Vin (or × fs) grid, worst-case corners, Monte Carlo and
+ *   part comparison, always in a worker, and only while the section that shows them is on screen (or
+ *   on request). Two workers: the load sweep never waits behind a grid or a Monte Carlo.
+ * Nothing here recomputes physics: the engine's records are kept as they come.
+ */
+import { untrack } from 'svelte';
+import {
+  DEFAULT_KNEE_THRESHOLD_POINTS,
+  DEFAULT_MONTE_CARLO_SAMPLES,
+  DEFAULT_MONTE_CARLO_SEED,
+  evaluate,
+  findLandmarks,
+  partInRole,
+  sweepLoad,
+} from '../../shared-model/index.ts';
+import type {
+  Comparison,
+  Design,
+  Evaluation,
+  FiguresOfMerit,
+  FrequencySweep,
+  GridAxis,
+  Landmarks,
+  LoadGrid,
+  LoadSweep,
+  LoadSweepOptions,
+  MonteCarlo,
+  MonteCarloDistribution,
+  Role,
+  SweepFamilies,
+  Tolerances,
+  WorstCase,
+} from '../../shared-model/index.ts';
+import { conditionsFor } from '../state/compute.ts';
+import type { Workspace } from '../state/workspace.svelte.ts';
+import { startEngineWorker, type EngineClient } from '../workers/engine-client.ts';
+import type { GridQuantity } from './frequency-data.ts';
+import { JobSlot } from './job-slot.svelte.ts';
+
+/** A sweep computed here must finish within this time to keep the keystroke-to-chart path under 50 ms. */
+export const SYNC_SWEEP_BUDGET_MS = 20;
+/** Evaluations in one sweep with its landmarks: 200 points and about 60 for the refined searches. */
+const SWEEP_EVALUATIONS = 260;
+
+export type EvaluationOutcome = { ok: true; evaluation: Evaluation; ms: number } | { ok: false; message: string };
+export interface SweepResult {
+  sweep: LoadSweep;
+  landmarks: Landmarks;
+}
+type SweepKey = {
+  design: Design;
+  vinV: number;
+  spacing: LoadSweepOptions['spacing'];
+  knee: number;
+};
+
+export class LiveResults {
+  readonly ws: Workspace;
+  /** Sections scrolled into view: heavy jobs run only for those. */
+  visible: Record<string, boolean> = $state({});
+  loadScale: 'log' | 'linear' = $state('log');
+  kneeThresholdPoints = $state(DEFAULT_KNEE_THRESHOLD_POINTS);
+  vinFamily = $state(false);
+  stackBy: 'mechanism' | 'part' = $state('mechanism');
+  temperaturePart: Role | null = $state(null);
+  gridAxis: GridAxis = $state('vin');
+  gridQuantity: GridQuantity = $state('efficiency');
+  tolerances: Tolerances = $state.raw({});
+  seed = $state(DEFAULT_MONTE_CARLO_SEED);
+  samples = $state(DEFAULT_MONTE_CARLO_SAMPLES);
+  distribution: MonteCarloDistribution = $state('uniform');
+  compareRole: Role = $state('switch');
+  compareParts: string[] = $state.raw([]);
+  /** How the last load sweep was computed, for the speed note. */
+  sweepMode: 'worker' | 'here' = $state('worker');
+
+  readonly sweep = new JobSlot<SweepResult>();
+  /** Average (25/50/75/100 %) and 10 % efficiency at nominal Vin: five exact evaluations, in the worker. */
+  readonly figures = new JobSlot<FiguresOfMerit>();
+  readonly families = new JobSlot<SweepFamilies>();
+  readonly frequency = new JobSlot<FrequencySweep>();
+  readonly grid = new JobSlot<LoadGrid>();
+  readonly worstCase = new JobSlot<WorstCase>();
+  readonly monteCarlo = new JobSlot<MonteCarlo>();
+  readonly comparison = new JobSlot<Comparison>();
+
+  design: Design = $derived(this.#workspace().doc.lastValid);
+  conditions = $derived(conditionsFor(this.design, { loadA: this.#workspace().results.loadA, vinV: this.#workspace().results.vinV }));
+  evaluation: EvaluationOutcome = $derived.by(() => {
+    const t0 = performance.now();
+    try {
+      return { ok: true, evaluation: evaluate(this.design, this.conditions), ms: performance.now() - t0 };
+    } catch (error) {
+      return { ok: false, message: `The engine stopped on this design: ${(error as Error).message}` };
+    }
+  });
+
+  #quick: EngineClient | null = null;
+  #heavy: EngineClient | null = null;
+  #syncSweep = false;
+
+  constructor(ws: Workspace) {
+    this.ws = ws;
+  }
+
+  /** The workspace, for the derived fields above (read lazily, after the constructor has run). */
+  #workspace(): Workspace {
+    return this.ws;
+  }
+
+  /** The worker for the load sweep and its family: never queued behind a grid or a Monte Carlo. */
+  get quick(): EngineClient {
+    this.#quick ??= startEngineWorker();
+    return this.#quick;
+  }
+
+  /** The worker for grids, frequency sweeps, tolerance runs and comparisons. */
+  get heavy(): EngineClient {
+    this.#heavy ??= startEngineWorker();
+    return this.#heavy;
+  }
+
+  dispose(): void {
+    this.#quick?.dispose();
+    this.#heavy?.dispose();
+    this.#quick = this.#heavy = null;
+  }
+
+  sweepOptions(): LoadSweepOptions {
+    return { spacing: this.loadScale, conditions: { vinV: this.conditions.vinV } };
+  }
+
+  /** Load sweep and landmarks of the current design (reads its inputs, so an effect re-runs on change). */
+  requestSweep(): void {
+    const key: SweepKey = { design: this.design, vinV: this.conditions.vinV, spacing: this.loadScale, knee: this.kneeThresholdPoints };
+    const options = this.sweepOptions();
+    // The evaluation at the chosen load was just timed: if 260 of them fit the budget, sweep here.
+    const single = untrack(() => this.evaluation);
+    if (!this.#syncSweep && single.ok && single.ms * SWEEP_EVALUATIONS <= SYNC_SWEEP_BUDGET_MS) this.#syncSweep = true;
+    if (this.#syncSweep) {
+      const t0 = performance.now();
+      try {
+        const sweep = sweepLoad(key.design, options);
+        const landmarks = findLandmarks(sweep, { kneeThresholdPoints: key.knee, design: key.design });
+        const ms = performance.now() - t0;
+        this.sweep.set(key, { sweep, landmarks }, ms);
+        // Back to the worker only when clearly over budget (not on one slow sweep near the line).
+        if (ms > 1.5 * SYNC_SWEEP_BUDGET_MS) this.#syncSweep = false;
+        this.sweepMode = 'here';
+      } catch (error) {
+        this.sweep.fail(`The load sweep failed: ${(error as Error).message}`);
+      }
+      return;
+    }
+    void this.sweep
+      .run(key, () => this.quick.run('sweep', { design: key.design, options, landmarks: { kneeThresholdPoints: key.knee } }), (o) => o.output)
+      .then((outcome) => {
+        if (outcome?.status !== 'done') return;
+        this.sweepMode = 'worker';
+        // The worker's own time decides whether the next sweep may run here.
+        if (outcome.elapsedMs <= SYNC_SWEEP_BUDGET_MS) this.#syncSweep = true;
+      });
+  }
+
+  /** At the design's nominal conditions (the worker's figures job takes the design only). */
+  requestFigures(): void {
+    const design = this.design;
+    void this.figures.run({ design }, () => this.quick.run('figures', { design }), (o) => o.output);
+  }
+
+  requestFamilies(): void {
+    const design = this.design;
+    const options = { spacing: this.loadScale, kneeThresholdPoints: this.kneeThresholdPoints };
+    void this.families.run({ design, ...options }, () => this.quick.run('families', { design, options }), (o) => o.output);
+  }
+
+  requestFrequency(): void {
+    const design = this.design;
+    const { loadA, vinV } = this.conditions;
+    void this.frequency.run({ design, loadA, vinV }, () => this.heavy.run('frequency', { design, options: { loadA, conditions: { vinV } } }), (o) => o.output);
+  }
+
+  requestGrid(): void {
+    const design = this.design;
+    const axis = this.gridAxis;
+    const conditions = axis === 'frequency' ? { vinV: this.conditions.vinV } : {};
+    void this.grid.run({ design, axis, vinV: conditions.vinV ?? null }, () => this.heavy.run('grid', { design, options: { axis, conditions } }), (o) => o.output);
+  }
+
+  requestWorstCase(): void {
+    const design = this.design;
+    const { loadA, vinV } = this.conditions;
+    const tolerances = this.tolerances;
+    void this.worstCase.run(
+      { design, loadA, vinV, tolerances: JSON.stringify(tolerances) },
+      () => this.heavy.run('worst-case', { design, options: { loadA, tolerances, conditions: { vinV } } }),
+      (o) => o.output,
+    );
+  }
+
+  runMonteCarlo(): void {
+    const design = this.design;
+    const { loadA, vinV } = this.conditions;
+    const options = { seed: this.seed, samples: this.samples, distribution: this.distribution, tolerances: this.tolerances, loadA, conditions: { vinV } };
+    void this.monteCarlo.run({ design, ...options, tolerances: JSON.stringify(options.tolerances), conditions: options.conditions.vinV }, () => this.heavy.run('monte-carlo', { design, options }), (o) => o.output);
+  }
+
+  requestComparison(): void {
+    const design = this.design;
+    const role = this.compareRole;
+    const current = partInRole(design, role);
+    const parts = this.compareParts.map((id) => (current?.id === id ? current : this.ws.library.find(id))).filter((p) => p !== undefined);
+    if (parts.length < 2) {
+      this.comparison.clear();
+      return;
+    }
+    const loadA = this.conditions.loadA;
+    const sweep = { spacing: this.loadScale, conditions: { vinV: this.conditions.vinV } };
+    void this.comparison.run({ design, role, ids: parts.map((p) => p.id), loadA, spacing: sweep.spacing, vinV: sweep.conditions.vinV }, () => this.heavy.run('compare', { design, options: { role, parts, loadA, sweep } }), (o) => o.output);
+  }
+
+  /** True when a slot's value was computed for the design now shown. */
+  isCurrent(slot: JobSlot<unknown>): boolean {
+    return (slot.inputs as { design?: Design } | null)?.design === this.design;
+  }
+}

@@ -1,0 +1,81 @@
+/**
+ * Chart data of the load sweep: efficiency against load with the engine's landmarks marked (peak,
+ * knee, CCM/DCM boundary, rated load, thermal ceiling, regulation limit), the Vin family, and the loss
+ * against load stacked by mechanism or by part. Everything plotted is a number from the sweep record
+ * or the landmarks; the stacks only add the engine's loss columns.
+ */
+import type { FamilyMember, Landmark, Landmarks, LoadSweep, Role } from '../../shared-model/index.ts';
+import type { LineMarker, LineSeries, PointMarker } from '../charts/chart-data.ts';
+
+export interface CurveChart {
+  xValues: number[];
+  series: LineSeries[];
+  markers: LineMarker[];
+  points: PointMarker[];
+}
+
+const found = (l: Landmark): l is Landmark & { load: number; value: number } => l.load !== null && l.value !== null;
+
+/**
+ * Vertical markers shared by the load charts: rated load, the load the ledger is shown at (when it is
+ * not the rated load), mode boundary, thermal ceiling, regulation limit.
+ */
+export function loadMarkers(sweep: LoadSweep, landmarks: Landmarks | null, chosenA: number | null = null): LineMarker[] {
+  const markers: LineMarker[] = [{ key: 'rated', axis: 'x', value: sweep.ratedLoadA, label: 'rated', tone: 'muted' }];
+  if (chosenA !== null && chosenA !== sweep.ratedLoadA) markers.push({ key: 'chosen', axis: 'x', value: chosenA, label: 'shown load', tone: 'text', dashed: true });
+  if (!landmarks) return markers;
+  if (landmarks.modeBoundary.load !== null)
+    markers.push({ key: 'mode', axis: 'x', value: landmarks.modeBoundary.load, label: 'DCM | CCM', tone: 'caution', dashed: true });
+  if (landmarks.thermalCeiling.load !== null)
+    markers.push({ key: 'ceiling', axis: 'x', value: landmarks.thermalCeiling.load, label: 'thermal ceiling', tone: 'danger' });
+  if (landmarks.regulationLimit.load !== null)
+    markers.push({ key: 'regulation', axis: 'x', value: landmarks.regulationLimit.load, label: 'regulation limit', tone: 'danger', dashed: true });
+  return markers;
+}
+
+export function efficiencyCurves(
+  sweep: LoadSweep,
+  landmarks: Landmarks | null,
+  family: readonly FamilyMember[] | null = null,
+  chosenA: number | null = null,
+): CurveChart {
+  const xValues = sweep.points.map((p) => p.loadA);
+  const sameAxis = family?.every((m) => m.sweep.points.length === xValues.length && m.sweep.points.every((p, i) => p.loadA === xValues[i]));
+  const series: LineSeries[] =
+    family && sameAxis
+      ? family.map((m, k) => ({ key: `family-${k}`, label: m.label, values: m.sweep.points.map((p) => p.efficiency), tone: k }))
+      : [{ key: 'efficiency', label: `Efficiency at ${sweep.vinV} V in`, values: sweep.points.map((p) => p.efficiency), tone: 0 }];
+  const markers = loadMarkers(sweep, landmarks, chosenA);
+  const points: PointMarker[] = [];
+  if (landmarks && found(landmarks.knee)) {
+    markers.push({ key: 'knee', axis: 'x', value: landmarks.knee.load, label: 'knee', tone: 'focus', dashed: true });
+    points.push({ key: 'knee', x: landmarks.knee.load, y: landmarks.knee.value, label: 'Knee', tone: 'focus' });
+  }
+  if (landmarks && found(landmarks.peak)) {
+    markers.push({ key: 'peak', axis: 'x', value: landmarks.peak.load, label: 'peak', tone: 'accent', dashed: true });
+    points.push({ key: 'peak', x: landmarks.peak.load, y: landmarks.peak.value, label: 'Peak efficiency', tone: 'accent' });
+  }
+  return { xValues, series, markers, points };
+}
+
+/** Loss against load, one stacked series per mechanism or per part, largest at the heaviest load first. */
+export function lossStack(sweep: LoadSweep, by: 'mechanism' | 'part', labelOf: (role: Role) => string): CurveChart {
+  const groups = new Map<string, { label: string; columns: number[] }>();
+  sweep.columns.losses.forEach((col, i) => {
+    const key = by === 'part' ? col.part : col.mechanism;
+    const group = groups.get(key) ?? { label: by === 'part' ? labelOf(col.part) : col.mechanism, columns: [] };
+    group.columns.push(i);
+    groups.set(key, group);
+  });
+  const last = sweep.points[sweep.points.length - 1];
+  const ordered = [...groups.entries()]
+    .map(([key, g]) => ({ key, label: g.label, values: sweep.points.map((p) => g.columns.reduce((s, i) => s + (p.losses[i] ?? 0), 0)) }))
+    .filter((g) => g.values.some((v) => v > 0))
+    .sort((a, b) => (last ? b.values[b.values.length - 1] - a.values[a.values.length - 1] : 0));
+  return {
+    xValues: sweep.points.map((p) => p.loadA),
+    series: ordered.map((g, k) => ({ key: g.key, label: g.label, values: g.values, tone: k })),
+    markers: [],
+    points: [],
+  };
+}

@@ -1,0 +1,120 @@
+/**
+ * Design edits that touch several fields at once, each recorded as one undo step: rectifier and
+ * sense-resistor switches, picking a part from the library, heatsinks.
+ */
+import type { Design, Heatsink, Part, Role, ThermalPath } from '../../shared-model/index.ts';
+import { uniqueId } from './library-data.ts';
+import { stashRemoved, withRectifier, withSenseLocation } from './topology-edits.ts';
+import type { Workspace } from './workspace.svelte.ts';
+
+export const ROLE_LABELS: Record<Role, string> = {
+  switch: 'Control switch',
+  rectifier: 'Rectifier',
+  inductor: 'Inductor',
+  inputCapacitor: 'Input capacitor',
+  outputCapacitor: 'Output capacitor',
+  senseResistor: 'Current-sense resistor',
+  controller: 'Controller and gate driver',
+};
+
+/** The part kinds that may fill a role in the current design. */
+export function kindForRole(design: Design, role: Role): Part['kind'] {
+  switch (role) {
+    case 'switch':
+      return 'mosfet';
+    case 'rectifier':
+      return design.topology.rectifier === 'synchronous' ? 'mosfet' : 'diode';
+    case 'inductor':
+      return 'inductor';
+    case 'inputCapacitor':
+    case 'outputCapacitor':
+      return 'capacitor';
+    case 'senseResistor':
+      return 'resistor';
+    case 'controller':
+      return 'controller';
+  }
+}
+
+export function setRectifier(ws: Workspace, rectifier: Design['topology']['rectifier']): void {
+  try {
+    const { design, removed } = withRectifier(ws.doc.design, rectifier, ws.stash, ws.library.parts);
+    ws.stash = stashRemoved(ws.stash, removed);
+    ws.doc.commit(design, rectifier === 'synchronous' ? 'Use a synchronous rectifier' : 'Use a diode rectifier');
+  } catch (error) {
+    ws.messages.error((error as Error).message);
+  }
+}
+
+export function setSenseLocation(ws: Workspace, location: Design['topology']['senseLocation']): void {
+  try {
+    const { design, removed } = withSenseLocation(ws.doc.design, location, ws.stash, ws.library.parts);
+    ws.stash = stashRemoved(ws.stash, removed);
+    ws.doc.commit(design, 'Move the current-sense resistor');
+  } catch (error) {
+    ws.messages.error((error as Error).message);
+  }
+}
+
+/** Copies a library part into the design for `role`. */
+export function usePart(ws: Workspace, role: Role, partId: string): void {
+  const part = ws.library.find(partId);
+  if (!part) return;
+  const design = ws.doc.design;
+  if (part.kind !== kindForRole(design, role)) {
+    ws.messages.error(`${part.name} is a ${part.kind} and cannot be the ${ROLE_LABELS[role].toLowerCase()}.`);
+    return;
+  }
+  const copy = structuredClone(part);
+  const parts =
+    role === 'inputCapacitor' || role === 'outputCapacitor'
+      ? { ...design.parts, [role]: { ...design.parts[role], part: copy } }
+      : { ...design.parts, [role]: copy };
+  ws.doc.commit({ ...design, parts } as Design, `Use ${part.name} as ${ROLE_LABELS[role].toLowerCase()}`);
+}
+
+/** The part record that fills `role` (capacitor slots hold it under `.part`). */
+export function partOfRole(design: Design, role: Role): Part | undefined {
+  if (role === 'inputCapacitor' || role === 'outputCapacitor') return design.parts[role].part;
+  return design.parts[role];
+}
+
+export function partPath(role: Role): string[] {
+  return role === 'inputCapacitor' || role === 'outputCapacitor' ? ['parts', role, 'part'] : ['parts', role];
+}
+
+export function addToLibrary(ws: Workspace, role: Role): void {
+  const part = partOfRole(ws.doc.design, role);
+  if (!part) return;
+  const stored = ws.library.add(structuredClone(part));
+  ws.messages.success(`Added ${stored.name} to the part library${stored.id === part.id ? '' : ` as ${stored.id}`}.`);
+}
+
+export function addHeatsink(ws: Workspace): void {
+  const design = ws.doc.design;
+  const id = uniqueId('sink-1', new Set(design.thermal.heatsinks.map((h) => h.id)));
+  const sink: Heatsink = { id, name: `Heatsink ${design.thermal.heatsinks.length + 1}`, thetaSaKPerW: 10, surface: 'metal' };
+  ws.doc.commit({ ...design, thermal: { ...design.thermal, heatsinks: [...design.thermal.heatsinks, sink] } }, 'Add a heatsink');
+}
+
+/** Roles whose thermal path leads to heatsink `id`. */
+export function rolesOnHeatsink(design: Design, id: string): Role[] {
+  const paths = design.thermal.paths as Partial<Record<Role, ThermalPath>>;
+  return (Object.keys(paths) as Role[]).filter((role) => {
+    const path = paths[role];
+    return path?.kind === 'heatsink' && path.heatsinkId === id;
+  });
+}
+
+export function removeHeatsink(ws: Workspace, id: string): void {
+  const design = ws.doc.design;
+  const users = rolesOnHeatsink(design, id);
+  if (users.length > 0) {
+    ws.messages.error(
+      `The heatsink “${id}” still cools: ${users.map((r) => ROLE_LABELS[r].toLowerCase()).join(', ')}. Give those parts another thermal path first.`,
+    );
+    return;
+  }
+  const heatsinks = design.thermal.heatsinks.filter((h) => h.id !== id);
+  ws.doc.commit({ ...design, thermal: { ...design.thermal, heatsinks } }, 'Remove a heatsink');
+}

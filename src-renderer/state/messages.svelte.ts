@@ -1,0 +1,69 @@
+/**
+ * Messages to the user: short notices that fade (saved, restored), problems that stay until dismissed
+ * (a file that could not be opened, with the reasons), and yes/no questions answered in an in-page
+ * dialog (discard unsaved changes?).
+ */
+export type MessageKind = 'info' | 'success' | 'error';
+
+export interface Message {
+  id: number;
+  kind: MessageKind;
+  title: string;
+  details: string[];
+}
+
+export interface Question {
+  title: string;
+  body: string;
+  confirmLabel: string;
+  cancelLabel: string;
+  resolve(answer: boolean): void;
+}
+
+const FADE_MS = 6000;
+
+export class Messages {
+  list = $state<Message[]>([]);
+  question = $state<Question | null>(null);
+  #next = 1;
+
+  show(kind: MessageKind, title: string, details: string[] = []): number {
+    const id = this.#next++;
+    this.list = [...this.list, { id, kind, title, details }];
+    if (kind !== 'error') setTimeout(() => this.dismiss(id), FADE_MS);
+    return id;
+  }
+
+  error(title: string, details: string[] = []): number {
+    return this.show('error', title, details);
+  }
+
+  info(title: string, details: string[] = []): number {
+    return this.show('info', title, details);
+  }
+
+  success(title: string, details: string[] = []): number {
+    return this.show('success', title, details);
+  }
+
+  dismiss(id: number): void {
+    this.list = this.list.filter((m) => m.id !== id);
+  }
+
+  /** Asks a yes/no question in the page; resolves true when the user confirms. */
+  ask(title: string, body: string, confirmLabel: string, cancelLabel = 'Cancel'): Promise<boolean> {
+    this.question?.resolve(false);
+    return new Promise((resolve) => {
+      this.question = {
+        title,
+        body,
+        confirmLabel,
+        cancelLabel,
+        resolve: (answer) => {
+          this.question = null;
+          resolve(answer);
+        },
+      };
+    });
+  }
+}

@@ -1,0 +1,56 @@
+/**
+ * Everything the app shell shares: the open document, the results, the part library, messages, the
+ * theme, the screen shown and the operating-system adapter. Created once in App.svelte and handed to
+ * components through Svelte context.
+ */
+import { getContext, setContext } from 'svelte';
+import type { Design, Part } from '../../shared-model/index.ts';
+import type { FileAccess } from '../desktop/file-access.ts';
+import { suggestFileName, type Recovered } from './design-file.ts';
+import { DocumentStore, UNTITLED } from './document.svelte.ts';
+import { PartLibrary } from './library.svelte.ts';
+import { Messages } from './messages.svelte.ts';
+import { ResultsState } from './results.svelte.ts';
+import { ThemeState } from './theme.svelte.ts';
+import type { PartStash } from './topology-edits.ts';
+
+export type Screen = 'design' | 'library';
+
+export interface RecoveryOffer {
+  recovered: Recovered;
+  savedAt: string;
+}
+
+export class Workspace {
+  readonly files: FileAccess;
+  readonly demoDesign: Design;
+  readonly doc: DocumentStore;
+  readonly results: ResultsState;
+  readonly library: PartLibrary;
+  readonly messages = new Messages();
+  readonly theme = new ThemeState();
+  screen: Screen = $state('design');
+  recoveryOffer: RecoveryOffer | null = $state(null);
+  /** Parts set aside by rectifier or sense-resistor switches, restored when switching back. */
+  stash: PartStash = {};
+
+  constructor(files: FileAccess, demoDesign: Design, demoParts: readonly Part[]) {
+    this.files = files;
+    this.demoDesign = demoDesign;
+    this.doc = new DocumentStore(demoDesign, suggestFileName(UNTITLED, demoDesign.name));
+    this.results = new ResultsState(this.doc);
+    this.library = new PartLibrary(demoParts);
+  }
+}
+
+const KEY = Symbol('wattledger.workspace');
+
+export function provideWorkspace(workspace: Workspace): void {
+  setContext(KEY, workspace);
+}
+
+export function useWorkspace(): Workspace {
+  const workspace = getContext<Workspace | undefined>(KEY);
+  if (!workspace) throw new Error('useWorkspace() called outside App');
+  return workspace;
+}

@@ -1,0 +1,74 @@
+import { describe, expect, it } from 'vitest';
+import { axisTitle, fileNameOf, tickText } from '../../../src-renderer/charts/chart-format.ts';
+import { cellEdges, rampColour, valueRange } from '../../../src-renderer/charts/heat-scale.ts';
+import { lineTable } from '../../../src-renderer/charts/chart-tables.ts';
+import { along, labelRows } from '../../../src-renderer/charts/label-rows.ts';
+import { closeTo } from '../../helpers/close-to.ts';
+
+describe('chart text', () => {
+  it('puts the unit in the axis title and engineering prefixes on the ticks', () => {
+    expect(axisTitle({ title: 'Load current', unit: 'A' })).toBe('Load current (A)'); // house style: every number with its unit
+    expect(tickText(0.25, { title: 'Load', unit: 'A' })).toBe('250 mA'); // SI prefix milli = 1e-3 (BIPM SI Brochure, 9th ed., Table 7)
+    expect(tickText(0.9, { title: 'Efficiency', unit: '%' })).toBe('90 %'); // a fraction shown as a percentage (0.9 = 90 %)
+  });
+
+  it('labels only 1, 2 and 5 of each decade on a log axis', () => {
+    const axis = { title: 'f', unit: 'Hz', scale: 'log' as const };
+    expect(tickText(2e5, axis)).toBe('200 kHz'); // SI prefix kilo = 1e3 (BIPM SI Brochure, 9th ed.)
+    expect(tickText(3e5, axis)).toBe(''); // 1-2-5 tick rule for log axes (common practice)
+  });
+
+  it('makes a plain file name from a title', () => {
+    expect(fileNameOf('Efficiency against load at 14.4 V in')).toBe('efficiency-against-load-at-14-4-v-in'); // portable file names: [a-z0-9-] (POSIX portable filename character set)
+  });
+});
+
+describe('heat-map geometry', () => {
+  it('puts cell edges halfway between values on a linear axis', () => {
+    expect(cellEdges([1, 2, 4])).toEqual([0.5, 1.5, 3, 5]); // arithmetic midpoints; the ends mirror the first and last gap
+  });
+
+  it('puts cell edges at geometric means on a log axis', () => {
+    const edges = cellEdges([1e5, 1e6], true);
+    closeTo(edges[1], Math.sqrt(1e5 * 1e6), 1e-12); // the midpoint in log space is the geometric mean (common practice for log bins)
+  });
+
+  it('clips the colour range to the 2nd–98th percentile and says so', () => {
+    const values = [Array.from({ length: 100 }, (_, i) => (i === 0 ? -1000 : i))];
+    const range = valueRange({ x: values[0], y: [0], values });
+    expect(range?.clippedLow).toBe(true); // the outlier −1000 lies below the 2nd percentile (nearest rank)
+    expect(range?.min).toBe(values[0][Math.round(0.02 * 99)]); // nearest-rank quantile of the sorted values
+  });
+
+  it('mixes the ramp ends exactly at 0 and 1', () => {
+    expect(rampColour(0, '#000000', '#808080', '#ffffff')).toBe('rgb(0, 0, 0)'); // linear interpolation at its end points
+    expect(rampColour(1, '#000000', '#808080', '#ffffff')).toBe('rgb(255, 255, 255)'); // linear interpolation at its end points
+  });
+});
+
+describe('marker labels', () => {
+  it('places a value on a log axis by its logarithm', () => {
+    closeTo(along(10, 1, 100, true), 0.5, 1e-12); // log10(10) lies halfway between log10(1) and log10(100)
+  });
+
+  it('moves a label to the next row when a neighbour is too close', () => {
+    expect(labelRows([0.5, 0.55, 0.9, 0.52])).toEqual([0, 1, 0, 2]); // greedy first-fit rows (interval scheduling, first fit)
+  });
+});
+
+describe('data-table view', () => {
+  it('has one row per x value and one column per series, with the markers as notes', () => {
+    const table = lineTable(
+      { title: 'Load', unit: 'A' },
+      { title: 'Efficiency', unit: '%' },
+      [1, 2],
+      [{ key: 'e', label: 'Efficiency', values: [0.9, 0.95], tone: 0 }],
+      [{ key: 'k', axis: 'x', value: 1.5, label: 'knee', tone: 'focus' }],
+    );
+    expect(table.rows).toEqual([
+      [1, 0.9],
+      [2, 0.95],
+    ]); // the plotted numbers, unchanged
+    expect(table.notes).toEqual(['knee: 1.5 A']); // marker with its unit (formatEngineering)
+  });
+});

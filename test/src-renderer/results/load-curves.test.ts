@@ -1,0 +1,42 @@
+import { describe, expect, it } from 'vitest';
+import { findLandmarks, sweepLoad } from '../../../shared-model/index.ts';
+import { efficiencyCurves, lossStack } from '../../../src-renderer/results/load-curves.ts';
+import { temperatureCurves } from '../../../src-renderer/results/temperature-curves.ts';
+import { closeTo } from '../../helpers/close-to.ts';
+import { demoDesign, labelOf } from './demo.ts';
+
+describe('load-curve chart data of the demo design', () => {
+  const design = demoDesign();
+  const sweep = sweepLoad(design, { points: 40 });
+  const landmarks = findLandmarks(sweep, { design });
+
+  it('plots the sweep efficiency and marks the engine landmarks where they were found', () => {
+    const curves = efficiencyCurves(sweep, landmarks);
+    expect(curves.series[0].values).toEqual(sweep.points.map((p) => p.efficiency)); // engine sweep record (rendered, not recomputed)
+    const peak = curves.points.find((p) => p.key === 'peak');
+    expect(peak?.x).toBe(landmarks.peak.load); // engine landmark (findLandmarks)
+    expect(peak?.y).toBe(landmarks.peak.value); // engine landmark (findLandmarks)
+    expect(curves.markers.find((m) => m.key === 'rated')?.value).toBe(design.spec.ratedLoadA); // the design's rated load
+    expect(curves.markers.some((m) => m.key === 'mode')).toBe(landmarks.modeBoundary.load !== null); // marked only when found
+  });
+
+  it('stacks the loss so that the top of the stack is the total loss at every load', () => {
+    for (const by of ['mechanism', 'part'] as const) {
+      const stack = lossStack(sweep, by, labelOf);
+      sweep.points.forEach((p, i) => {
+        const top = stack.series.reduce((s, series) => s + (series.values[i] ?? 0), 0);
+        closeTo(top, p.totalLoss, 1e-9, 1e-12, { by, load: p.loadA }); // energy balance: the total loss is the sum of the terms (first law)
+      });
+    }
+  });
+
+  it('draws every part temperature and, for one part, its own limits', () => {
+    const all = temperatureCurves(sweep, landmarks, null, labelOf);
+    expect(all.series).toHaveLength(sweep.columns.temperatures.length); // one curve per part of the sweep
+    const one = temperatureCurves(sweep, landmarks, 'switch', labelOf);
+    const column = sweep.columns.temperatures.find((c) => c.part === 'switch');
+    expect(one.markers.find((m) => m.key === 'derated')?.value).toBe(column?.deratedLimitC); // engine column: limit less the design margin
+    const touch = sweep.columns.hazards.find((h) => h.part === 'switch');
+    expect(one.markers.find((m) => m.key === 'touch')?.value).toBe(touch?.limitC); // engine column: touch limit of the surface
+  });
+});
