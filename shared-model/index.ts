@@ -80,6 +80,7 @@ export type {
   TemperatureColumn,
 } from './sweep/types.ts';
 export { axisValues, checkAxis, MAX_AXIS_POINTS } from './sweep/spacing.ts';
+export { evaluatorFor } from './sweep/evaluator.ts';
 export { lossByMechanism } from './sweep/point-record.ts';
 export {
   checkLoadSweepOptions,

@@ -7,7 +7,7 @@
 import type { Part } from '../design/parts.ts';
 import type { Design, Role } from '../design/schema.ts';
 import type { Evaluation } from '../ledger/types.ts';
-import { conditionsFor, defaultEvaluator } from '../sweep/evaluator.ts';
+import { conditionsFor, evaluatorFor } from '../sweep/evaluator.ts';
 import { sweepLoad } from '../sweep/load-sweep.ts';
 import type { PointEvaluator, LoadSweep, LoadSweepOptions, OptionProblem } from '../sweep/types.ts';
 import { findCrossovers, winnersOf } from './crossover.ts';
@@ -75,15 +75,16 @@ export function compareParts(design: Design, options: CompareOptions): Compariso
   });
   if (problems.length > 0) return { ok: false, problems };
 
-  const evaluator = options.evaluator ?? defaultEvaluator;
+  // One set-up per alternative design serves its ledger, its sweep and the crossover refinement.
+  const evaluators = designs.map((d) => evaluatorFor(d, options.evaluator));
   const conditions = conditionsFor(design, { ...options.sweep?.conditions, loadA });
-  const sweeps = designs.map((d) => sweepLoad(d, { ...options.sweep, evaluator }));
+  const sweeps = designs.map((d, k) => sweepLoad(d, { ...options.sweep, evaluator: evaluators[k] }));
   const reference = sweeps[0].points;
   const alternatives: CompareAlternative[] = designs.map((d, k) => ({
     partId: options.parts[k].id,
     partName: options.parts[k].name,
     design: d,
-    evaluation: evaluator(d, conditions),
+    evaluation: evaluators[k](d, conditions),
     sweep: sweeps[k],
     lossDifferenceW: sweeps[k].points.map((p, i) => p.totalLoss - reference[i].totalLoss),
     efficiencyDifference: sweeps[k].points.map((p, i) => p.efficiency - reference[i].efficiency),
@@ -94,7 +95,7 @@ export function compareParts(design: Design, options: CompareOptions): Compariso
   const probe =
     options.refine === false
       ? undefined
-      : (k: number, load: number) => evaluator(designs[k], { ...fixed, loadA: load }).totalLoss;
+      : (k: number, load: number) => evaluators[k](designs[k], { ...fixed, loadA: load }).totalLoss;
   const crossings = findCrossovers(loadsA, curves, probe);
   const winnerIndex = winnersOf(curves);
   return {

@@ -11,7 +11,7 @@
  */
 import type { Part } from '../design/parts.ts';
 import type { Design, Role } from '../design/schema.ts';
-import { conditionsFor, defaultEvaluator } from '../sweep/evaluator.ts';
+import { conditionsFor, evaluatorFor } from '../sweep/evaluator.ts';
 import { figuresOfMeritOf } from '../sweep/figures-of-merit.ts';
 import type { PointEvaluator } from '../sweep/types.ts';
 import { DEFAULT_CURRENT_DERATING, ratingShortfalls, stressOf } from './role-fit.ts';
@@ -56,7 +56,6 @@ export interface Ranking {
 }
 
 export function rankParts(design: Design, options: RankOptions): Ranking {
-  const evaluator = options.evaluator ?? defaultEvaluator;
   const derating = options.currentDerating ?? DEFAULT_CURRENT_DERATING;
   const s = design.spec;
   const scored: Omit<RankedPart, 'rank'>[] = [];
@@ -68,6 +67,8 @@ export function rankParts(design: Design, options: RankOptions): Ranking {
       continue;
     }
     const d = sub.design;
+    // One set-up of the candidate design serves its corners, its rated point and its figures of merit.
+    const evaluator = evaluatorFor(d, options.evaluator);
     const corners = [s.vinMinV, s.vinMaxV].map((vinV) => evaluator(d, conditionsFor(d, { vinV })));
     const reasons = ratingShortfalls(d, options.role, part, stressOf(corners), derating);
     if (reasons.length > 0) {

@@ -66,6 +66,8 @@ export const mosfetSchema = z.object({
   outputCapacitance: outputCapacitanceSchema,
   bodyDiodeVsdV: positive(L.forwardVoltageV),
   bodyDiodeQrrC: nonNegative(L.recoveryChargeC),
+  /** Forward current at which bodyDiodeQrrC is stated; Qrr is scaled by IF / this. Rated load current when absent. */
+  bodyDiodeQrrTestA: positive(L.currentA).optional(),
   tjMaxC: temperatureC(),
   thetaJcKPerW: nonNegative(L.thetaKPerW),
 });
@@ -80,6 +82,8 @@ export const diodeSchema = z.object({
   vfTempCoVPerK: between(-0.1, 0.1),
   /** Reverse-recovery charge (PN diodes). */
   qrrC: nonNegative(L.recoveryChargeC),
+  /** Forward current at which qrrC is stated; Qrr is scaled by IF / this. Rated load current when absent. */
+  qrrTestA: positive(L.currentA).optional(),
   /** Junction capacitance (Schottky), treated as linear. */
   cjF: nonNegative(L.parasiticCapacitanceF),
   leakageA: nonNegative(L.leakageA),

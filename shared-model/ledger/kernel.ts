@@ -8,7 +8,8 @@
  *     reverse current); turn-off at the peak; Coss at the turn-on swing when the turn-on is hard or in DCM
  *     (capacitive turn-on after the idle interval; the ringing there is not modelled), none for a
  *     zero-voltage turn-on; reverse recovery of the rectifier (sync: body diode, only after a dead time with
- *     forward current; PN diode: CCM with forward current at turn-on); Schottky Cj like Coss.
+ *     forward current; PN diode: CCM with forward current at turn-on; Qrr · IF/Itest, Itest = rated load
+ *     current when the part states none, losses/reverse-recovery.ts); Schottky Cj like Coss.
  *   rectifier: sync FET conduction + dead-time body diode (forward current at each edge); diode forward
  *     drop, leakage over D at the blocking voltage and over the DCM idle interval at Vout (buck) or
  *     Vout − Vin (boost).
@@ -118,7 +119,9 @@ export function fillLosses(
     ds.secondS = t2;
     ds.frequencyHz = fs;
     const rr = s.swRecovery!.inputs;
-    rr.qrrC = forwardAtOn && t2 > 0 ? rect.bodyDiodeQrrC : 0;
+    rr.qrrC = rect.bodyDiodeQrrC;
+    rr.testA = rect.bodyDiodeQrrTestA ?? design.spec.ratedLoadA;
+    rr.forwardA = forwardAtOn && t2 > 0 ? on.currentA : 0;
     rr.voltageV = on.voltageV;
     rr.frequencyHz = fs;
     const rc = s.rectConduction!.inputs;
@@ -141,7 +144,9 @@ export function fillLosses(
       j.frequencyHz = fs;
     } else {
       const rr = s.swRecovery!.inputs;
-      rr.qrrC = forwardAtOn ? rect.qrrC : 0;
+      rr.qrrC = rect.qrrC;
+      rr.testA = rect.qrrTestA ?? design.spec.ratedLoadA;
+      rr.forwardA = forwardAtOn ? on.currentA : 0;
       rr.voltageV = on.voltageV;
       rr.frequencyHz = fs;
     }

@@ -1,6 +1,7 @@
 /**
  * The ledger's own warnings: thermal runaway naming the part, and model-limit notes (estimated Qgs2,
- * DCM idle-interval ringing, Coss scaled away from its stated voltage).
+ * DCM idle-interval ringing, Coss scaled away from its stated voltage, a Qrr test current assumed equal
+ * to the rated load current).
  */
 import type { Warning } from '../warnings.ts';
 import type { ElectroThermalSolution } from '../thermal/fixed-point.ts';
@@ -45,6 +46,19 @@ export function modelNotes(ctx: LedgerContext): Warning[] {
     out.push({
       code: 'model-limit', severity: 'danger', part: 'switch', path: 'parts.controller.driveV',
       message: 'The drive voltage does not exceed the switch\'s plateau voltage: the switch cannot turn on fully; overlap losses are capped at half a period and are not meaningful.',
+    });
+  }
+  const rr = ctx.slots.swRecovery;
+  const rect = ctx.design.parts.rectifier;
+  const testStated = rect.kind === 'mosfet' ? rect.bodyDiodeQrrTestA !== undefined : rect.qrrTestA !== undefined;
+  if (rr && rr.watts > 0 && !testStated) {
+    const key = rect.kind === 'mosfet' ? 'bodyDiodeQrrTestA' : 'qrrTestA';
+    out.push({
+      code: 'model-limit', severity: 'info', part: 'rectifier', path: `parts.rectifier.${key}`,
+      message:
+        `The rectifier's Qrr has no stated test current: it is assumed to be stated at the rated load current ${f3(rr.inputs.testA)} A ` +
+        `and scaled linearly with the diode's forward current at the switch's turn-on (${f3(rr.inputs.forwardA)} A here); ` +
+        `give ${key} from the datasheet for a better reverse-recovery loss.`,
     });
   }
   if (op.mode === 'DCM') {

@@ -52,7 +52,7 @@ export interface Slot<I> {
 const conductionIn = (): ConductionInputs => ({ irmsA: 0, resistanceOhm: 0, temperatureC: 0 });
 const gateIn = (): GateDriveInputs => ({ qgC: 0, driveV: 0, frequencyHz: 0, gateOhm: 0, pullUpOhm: 0, pullDownOhm: 0 });
 const deadIn = (): DeadTimeInputs => ({ vsdV: 0, firstA: 0, firstS: 0, secondA: 0, secondS: 0, frequencyHz: 0 });
-const recoveryIn = (): ReverseRecoveryInputs => ({ qrrC: 0, voltageV: 0, frequencyHz: 0 });
+const recoveryIn = (): ReverseRecoveryInputs => ({ qrrC: 0, testA: 1, forwardA: 0, voltageV: 0, frequencyHz: 0 });
 const capIn = (): CapacitorEsrInputs => ({ irmsA: 0, esrOhm: 0, count: 1, temperatureC: 0 });
 
 const THERMAL: ReadonlySet<string> = new Set(['conduction', 'forward drop', 'reverse leakage', 'winding DC', 'winding AC', 'ESR', 'sense']);

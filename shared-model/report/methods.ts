@@ -74,9 +74,15 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
   {
     id: 'reverse-recovery',
     title: 'Reverse recovery',
-    formula: 'P ≈ Qrr · Vsw · fs, charged to the control switch that turns on into the conducting diode.',
-    source: `METHODS.md §4; ${MUR}, ch. 20–22 (from memory).`,
-    limits: ['Qrr is the datasheet value: its dependence on current, di/dt and temperature is not modelled.'],
+    formula:
+      'P ≈ Qrr · (IF / Itest) · Vsw · fs, charged to the control switch that turns on into the conducting diode: the datasheet Qrr, ' +
+      'stated at the test current Itest, is scaled linearly to the forward current IF the diode carries when the switch turns on ' +
+      '(0 in DCM, so the loss is continuous at the CCM/DCM boundary). Itest is the rated load current when the part does not state it.',
+    source: `METHODS.md §4; ${MUR}, ch. 20–22, charge-control model of the diode Q ≈ τ · IF (from memory).`,
+    limits: [
+      'Linear in the forward current (a simplification: measured Qrr grows less than linearly at high current); its dependence on di/dt and temperature is not modelled.',
+      'Where the part states no Qrr test current, the rated load current is assumed (a model-limit note says so).',
+    ],
   },
   {
     id: 'diode-forward',

@@ -6,6 +6,7 @@
 import type { Design } from '../design/schema.ts';
 import { findLandmarks } from '../landmarks/find-landmarks.ts';
 import type { Landmarks } from '../landmarks/types.ts';
+import { evaluatorFor } from './evaluator.ts';
 import { sweepLoad } from './load-sweep.ts';
 import type { LoadSweep, LoadSweepOptions } from './types.ts';
 
@@ -33,12 +34,14 @@ export const DEFAULT_EXTRA_AMBIENT_K = 25;
 
 export function sweepFamilies(design: Design, options: FamilyOptions = {}): SweepFamilies {
   const { ambientsC, kneeThresholdPoints, refineLandmarks = true, ...sweepOptions } = options;
+  // One set-up of the design serves every sweep of the family and every landmark refinement.
+  const evaluator = evaluatorFor(design, sweepOptions.evaluator);
   const member = (label: string, conditions: LoadSweepOptions['conditions']): FamilyMember => {
-    const sweep = sweepLoad(design, { ...sweepOptions, conditions });
+    const sweep = sweepLoad(design, { ...sweepOptions, conditions, evaluator });
     const landmarks = findLandmarks(sweep, {
       kneeThresholdPoints,
       design: refineLandmarks ? design : undefined,
-      evaluator: sweepOptions.evaluator,
+      evaluator,
     });
     return { label, sweep, landmarks };
   };

@@ -8,7 +8,7 @@
  */
 import type { Design } from '../design/schema.ts';
 import type { Conditions } from '../operating-point/types.ts';
-import { conditionsFor, defaultEvaluator } from './evaluator.ts';
+import { conditionsFor, evaluatorFor } from './evaluator.ts';
 import type { PointEvaluator } from './types.ts';
 
 export const AVERAGE_EFFICIENCY_FRACTIONS = [0.25, 0.5, 0.75, 1] as const;
@@ -52,7 +52,7 @@ export function figuresOfMerit(
   design: Design,
   options: { conditions?: Partial<Omit<Conditions, 'loadA'>>; evaluator?: PointEvaluator } = {},
 ): FiguresOfMerit {
-  const evaluator = options.evaluator ?? defaultEvaluator;
+  const evaluator = evaluatorFor(design, options.evaluator);
   const fixed = conditionsFor(design, options.conditions);
   return figuresOfMeritOf((loadA) => evaluator(design, { ...fixed, loadA }).efficiency, design.spec.ratedLoadA);
 }

@@ -8,7 +8,7 @@
 import type { Design } from '../design/schema.ts';
 import { findMaximum } from '../landmarks/search.ts';
 import type { Conditions } from '../operating-point/types.ts';
-import { conditionsFor, defaultEvaluator } from './evaluator.ts';
+import { conditionsFor, evaluatorFor } from './evaluator.ts';
 import { ColumnBook, lossByMechanism } from './point-record.ts';
 import { axisValues, checkAxis } from './spacing.ts';
 import type { PointEvaluator, OptionProblem, SweepSpacing, SweepColumns, SweepPoint } from './types.ts';
@@ -59,7 +59,7 @@ export function sweepFrequency(design: Design, options: FrequencySweepOptions = 
   const problems = checkFrequencySweepOptions(design, options);
   if (problems.length > 0) throw new RangeError(problems.map((p) => p.message).join(' '));
   const fs = design.spec.switchingFrequencyHz;
-  const evaluator = options.evaluator ?? defaultEvaluator;
+  const evaluator = evaluatorFor(design, options.evaluator);
   const loadA = options.loadA ?? design.spec.ratedLoadA;
   const fixed = conditionsFor(design, { ...options.conditions, loadA });
   const book = new ColumnBook();

@@ -4,7 +4,7 @@
  * frequency held. Each point is reduced to a compact record (see point-record.ts).
  */
 import type { Design } from '../design/schema.ts';
-import { conditionsFor, defaultEvaluator } from './evaluator.ts';
+import { conditionsFor, evaluatorFor } from './evaluator.ts';
 import { ColumnBook } from './point-record.ts';
 import { axisValues, checkAxis } from './spacing.ts';
 import type { LoadSweep, LoadSweepOptions, OptionProblem, SweepSpacing } from './types.ts';
@@ -56,7 +56,7 @@ export function sweepLoad(design: Design, options: LoadSweepOptions = {}): LoadS
   const problems = checkLoadSweepOptions(design, options);
   if (problems.length > 0) throw new RangeError(problems.map((p) => p.message).join(' '));
   const axis = resolveAxis(design, options);
-  const evaluator = options.evaluator ?? defaultEvaluator;
+  const evaluator = evaluatorFor(design, options.evaluator);
   const fixed = conditionsFor(design, options.conditions);
   const book = new ColumnBook();
   const points = axisValues(axis.from, axis.to, axis.points, axis.spacing).map((loadA) =>

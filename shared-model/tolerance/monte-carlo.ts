@@ -11,18 +11,20 @@
  * Result: distribution of efficiency and of each part's temperature (summary, histogram), the fraction of
  * samples over each part's derated limit, its absolute limit, its touch limit, below the efficiency target,
  * and not regulating. With every tolerance zero every sample equals the nominal evaluation.
+ * Each sample is a new design, evaluated from scratch; only samples whose parts are all nominal (every
+ * part spread zero) reuse the nominal design's evaluator set-up (sweep/evaluator.ts; same results).
  */
 import type { Design, Role } from '../design/schema.ts';
 import type { Evaluation, PartTemperature } from '../ledger/types.ts';
 import type { Conditions } from '../operating-point/types.ts';
-import { conditionsFor, defaultEvaluator } from '../sweep/evaluator.ts';
+import { conditionsFor, defaultEvaluator, evaluatorFor } from '../sweep/evaluator.ts';
 import type { PointEvaluator, OptionProblem } from '../sweep/types.ts';
 import type { RandomSource } from './prng.ts';
 import { createRandom, isValidSeed } from './prng.ts';
 import type { SampleHistogram, SampleSummary } from './statistics.ts';
 import { sampleHistogram, summarizeSamples } from './statistics.ts';
 import type { ResolvedTolerances, Tolerances, Variation } from './variation.ts';
-import { applyVariation, checkTolerances, resolveTolerances } from './variation.ts';
+import { applyVariation, checkTolerances, partsNominal, resolveTolerances, varyConditions } from './variation.ts';
 
 export type MonteCarloDistribution = 'uniform' | 'normal';
 export const DEFAULT_MONTE_CARLO_SAMPLES = 2000;
@@ -124,12 +126,13 @@ export function monteCarlo(design: Design, options: MonteCarloOptions): MonteCar
   const problems = checkMonteCarloOptions(options);
   if (problems.length > 0) throw new RangeError(problems.map((p) => p.message).join(' '));
   const evaluator = options.evaluator ?? defaultEvaluator;
+  const nominalEvaluator = evaluatorFor(design, options.evaluator);
   const n = options.samples ?? DEFAULT_MONTE_CARLO_SAMPLES;
   const distribution = options.distribution ?? 'uniform';
   const spreadConditions = options.spreadConditions ?? false;
   const tolerances = resolveTolerances(design, options.tolerances);
   const base = conditionsFor(design, { ...options.conditions, loadA: options.loadA });
-  const nominalEval = evaluator(design, base);
+  const nominalEval = nominalEvaluator(design, base);
   const parts = nominalEval.temperatures.map((t) => t.part);
   const touchParts = new Map(nominalEval.hazards.map((h, k) => [h.part, k]));
   const efficiency = new Float64Array(n);
@@ -141,8 +144,12 @@ export function monteCarlo(design: Design, options: MonteCarloOptions): MonteCar
   const rng = createRandom(options.seed);
   for (let i = 0; i < n; i++) {
     const v = drawVariation(rng, tolerances, distribution, base, spreadConditions);
-    const applied = applyVariation(design, base, v);
-    const e: Evaluation = evaluator(applied.design, applied.conditions);
+    let e: Evaluation;
+    if (partsNominal(v)) e = nominalEvaluator(design, varyConditions(base, v));
+    else {
+      const applied = applyVariation(design, base, v);
+      e = evaluator(applied.design, applied.conditions);
+    }
     efficiency[i] = e.efficiency;
     for (let k = 0; k < e.warnings.length; k++) {
       if (NOT_REGULATING.has(e.warnings[k].code)) {

@@ -109,6 +109,29 @@ export function nominalVariation(conditions: Conditions): Variation {
 
 /** The design and conditions with a variation applied (new objects; the inputs are unchanged). */
 export function applyVariation(design: Design, conditions: Conditions, v: Variation): { design: Design; conditions: Conditions } {
+  return { design: varyDesign(design, v), conditions: varyConditions(conditions, v) };
+}
+
+/** True when a variation leaves every part at its nominal value (only Vin, ambient or fs move). */
+export function partsNominal(v: Variation): boolean {
+  return (
+    v.switchRdsOnScale === 1 && v.rectifierRdsOnScale === 1 && v.dcrScale === 1 && v.inductanceScale === 1 &&
+    v.inputEsrScale === 1 && v.outputEsrScale === 1
+  );
+}
+
+/** A key that is equal for two variations exactly when they give the same part values. */
+export function partsKey(v: Variation): string {
+  return `${v.switchRdsOnScale} ${v.rectifierRdsOnScale} ${v.dcrScale} ${v.inductanceScale} ${v.inputEsrScale} ${v.outputEsrScale}`;
+}
+
+/** The conditions with a variation applied (Vin, ambient, switching frequency; a new object). */
+export function varyConditions(conditions: Conditions, v: Variation): Conditions {
+  return { ...conditions, vinV: v.vinV, ambientC: v.ambientC, switchingFrequencyHz: conditions.switchingFrequencyHz * v.frequencyScale };
+}
+
+/** The design with a variation's part scales applied (a new object; the input is unchanged). */
+export function varyDesign(design: Design, v: Variation): Design {
   const p = design.parts;
   const inductor = {
     ...p.inductor,
@@ -126,15 +149,7 @@ export function applyVariation(design: Design, conditions: Conditions, v: Variat
     inputCapacitor: { ...p.inputCapacitor, part: { ...p.inputCapacitor.part, esrOhm: p.inputCapacitor.part.esrOhm * v.inputEsrScale } },
     outputCapacitor: { ...p.outputCapacitor, part: { ...p.outputCapacitor.part, esrOhm: p.outputCapacitor.part.esrOhm * v.outputEsrScale } },
   };
-  return {
-    design: { ...design, parts },
-    conditions: {
-      ...conditions,
-      vinV: v.vinV,
-      ambientC: v.ambientC,
-      switchingFrequencyHz: conditions.switchingFrequencyHz * v.frequencyScale,
-    },
-  };
+  return { ...design, parts };
 }
 
 /** A short label of a variation, e.g. "Vin 9 V · ambient 50 °C · RDS(on) +20 % · … · fs −10 %". */

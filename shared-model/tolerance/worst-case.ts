@@ -6,13 +6,16 @@
  * over) a temperature limit, and each part's hottest corner.
  * Caution: corners bound a result only where it changes monotonically with each tolerance; use the Monte
  * Carlo for the interior.
+ * Corners that differ only in Vin, ambient and fs share one varied design and its evaluator set-up
+ * (sweep/evaluator.ts), so 128 corners need 16 set-ups; the results are those of evaluating each corner alone.
  */
 import type { Design, Role } from '../design/schema.ts';
+import type { Evaluation } from '../ledger/types.ts';
 import type { Conditions } from '../operating-point/types.ts';
-import { conditionsFor, defaultEvaluator } from '../sweep/evaluator.ts';
+import { conditionsFor, evaluatorFor } from '../sweep/evaluator.ts';
 import type { PointEvaluator } from '../sweep/types.ts';
 import type { Tolerances, ResolvedTolerances, Variation } from './variation.ts';
-import { applyVariation, checkTolerances, describeVariation, nominalVariation, resolveTolerances } from './variation.ts';
+import { applyVariation, checkTolerances, describeVariation, nominalVariation, partsKey, resolveTolerances, varyConditions, varyDesign } from './variation.ts';
 
 export interface CornerTemperature {
   part: Role;
@@ -85,7 +88,10 @@ export function cornerVariations(t: ResolvedTolerances): Variation[] {
 
 export function evaluateCorner(design: Design, base: Conditions, v: Variation, evaluator: PointEvaluator): ToleranceCorner {
   const applied = applyVariation(design, base, v);
-  const e = evaluator(applied.design, applied.conditions);
+  return cornerRecord(v, evaluator(applied.design, applied.conditions));
+}
+
+function cornerRecord(v: Variation, e: Evaluation): ToleranceCorner {
   let worstMarginK = Infinity;
   let worstPart: Role | null = null;
   const temperatures = e.temperatures.map((t) => {
@@ -111,11 +117,21 @@ export function evaluateCorner(design: Design, base: Conditions, v: Variation, e
 export function worstCase(design: Design, options: WorstCaseOptions = {}): WorstCase {
   const problems = checkTolerances(options.tolerances ?? {});
   if (problems.length > 0) throw new RangeError(problems.map((p) => p.message).join(' '));
-  const evaluator = options.evaluator ?? defaultEvaluator;
   const tolerances = resolveTolerances(design, options.tolerances);
   const base = conditionsFor(design, { ...options.conditions, loadA: options.loadA });
-  const nominal = evaluateCorner(design, base, nominalVariation(base), evaluator);
-  const corners = cornerVariations(tolerances).map((v) => evaluateCorner(design, base, v, evaluator));
+  const byParts = new Map<string, { design: Design; evaluate: PointEvaluator }>();
+  const corner = (v: Variation): ToleranceCorner => {
+    const key = partsKey(v);
+    let entry = byParts.get(key);
+    if (!entry) {
+      const varied = varyDesign(design, v);
+      entry = { design: varied, evaluate: evaluatorFor(varied, options.evaluator) };
+      byParts.set(key, entry);
+    }
+    return cornerRecord(v, entry.evaluate(entry.design, varyConditions(base, v)));
+  };
+  const nominal = corner(nominalVariation(base));
+  const corners = cornerVariations(tolerances).map(corner);
   // A corner that does not converge (runaway) is worse than any that does.
   const rank = (c: ToleranceCorner) => (c.converged ? 0 : 1);
   let worstEfficiency = corners[0];

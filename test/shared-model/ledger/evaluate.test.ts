@@ -66,14 +66,29 @@ describe('evaluate: conduction modes and edges', () => {
     expect(e.warnings.some((w) => w.code === 'model-limit' && w.message.includes('ringing'))).toBe(true);
     closeTo(e.inputPower, e.outputPower + e.totalLoss, 1e-9); // power balance holds in DCM too
   });
-  it('in CCM charges the PN diode’s recovery to the switch as Qrr·Vsw·fs', () => {
+  it('in CCM charges the PN diode’s recovery to the switch as Qrr·(IF/Itest)·Vsw·fs', () => {
     const d = valid(design({ ...DIODE_BOOST }, (x) => {
-      if (x.parts.rectifier.kind === 'diode') x.parts.rectifier = { ...x.parts.rectifier, technology: 'pn', qrrC: 40e-9 };
+      if (x.parts.rectifier.kind === 'diode') x.parts.rectifier = { ...x.parts.rectifier, technology: 'pn', qrrC: 40e-9, qrrTestA: 2 };
     }));
     const e = evaluate(d);
     expect(e.conductionMode).toBe('CCM');
     const rr = term(e, 'switch', 'reverse recovery')!;
-    closeTo(rr.watts, 40e-9 * e.operatingPoint.edges.turnOn.voltageV * d.spec.switchingFrequencyHz, 1e-12); // METHODS.md §4: Qrr·Vsw·fs
+    const on = e.operatingPoint.edges.turnOn; // the diode's forward current when the switch turns on is the valley current
+    // METHODS.md §4 Qrr·Vsw·fs with the charge scaled from its 2 A test current (charge-control model Q ∝ IF, Mohan et al. [from memory])
+    closeTo(rr.watts, 40e-9 * (on.currentA / 2) * on.voltageV * d.spec.switchingFrequencyHz, 1e-12);
+    expect(e.warnings.some((w) => w.path === 'parts.rectifier.qrrTestA')).toBe(false); // a stated test current needs no note
+  });
+  it('takes the rated load current as the Qrr test current when none is stated, and says so', () => {
+    const d = valid(design({ ...DIODE_BOOST }, (x) => {
+      if (x.parts.rectifier.kind === 'diode') x.parts.rectifier = { ...x.parts.rectifier, technology: 'pn', qrrC: 40e-9, qrrTestA: undefined };
+    }));
+    const e = evaluate(d);
+    const on = e.operatingPoint.edges.turnOn;
+    const rr = term(e, 'switch', 'reverse recovery')!;
+    // METHODS.md §4 Qrr·Vsw·fs, Itest = rated load (our stated default; losses/reverse-recovery.ts header)
+    closeTo(rr.watts, 40e-9 * (on.currentA / d.spec.ratedLoadA) * on.voltageV * d.spec.switchingFrequencyHz, 1e-12);
+    expect(rr.inputs.find((i) => i.name.startsWith('Itest'))?.value).toBe(d.spec.ratedLoadA); // the ledger shows the current it assumed
+    expect(e.warnings.some((w) => w.code === 'model-limit' && w.path === 'parts.rectifier.qrrTestA')).toBe(true); // and a model-limit note names the field
   });
   it('books a Schottky rectifier’s junction capacitance as ½·Cj·V²·fs', () => {
     const d = valid(design(DIODE_BOOST));

@@ -4,7 +4,6 @@ import { turnOff, turnOffTimes } from '../../../shared-model/losses/turn-off.ts'
 import { gateDrive, insideShare } from '../../../shared-model/losses/gate-drive.ts';
 import { driverSupply, gateSupplyW } from '../../../shared-model/losses/driver-supply.ts';
 import { deadTime } from '../../../shared-model/losses/dead-time.ts';
-import { reverseRecovery } from '../../../shared-model/losses/reverse-recovery.ts';
 import { cossAt, outputCapacitance } from '../../../shared-model/losses/output-capacitance.ts';
 import { conduction } from '../../../shared-model/losses/conduction.ts';
 import { qgs2Of } from '../../../shared-model/losses/gate-charge.ts';
@@ -86,11 +85,7 @@ describe('dead-time body-diode conduction', () => {
   });
 });
 
-describe('reverse recovery', () => {
-  it('gives 0.12 W for 20 nC at 12 V and 500 kHz', () => {
-    closeTo(reverseRecovery.watts({ qrrC: 20e-9, voltageV: 12, frequencyHz: M4.fs }), 0.12, 1e-9); // METHODS.md §4: Qrr 20 nC → 0.12 W
-  });
-});
+// Reverse recovery (METHODS.md §4, Qrr 20 nC → 0.12 W): test/shared-model/losses/reverse-recovery.test.ts.
 
 describe('output capacitance', () => {
   it('uses the hard-switched half-bridge form: 120 nJ per cycle for two identical FETs', () => {
