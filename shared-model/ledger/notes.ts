@@ -64,7 +64,7 @@ export function modelNotes(ctx: LedgerContext): Warning[] {
   if (op.mode === 'DCM') {
     out.push({
       code: 'model-limit', severity: 'info',
-      message: 'DCM: the ringing of the switch node during the idle interval is not modelled; the capacitive turn-on loss uses the swing from the idle level, and no relaxation core loss is added.',
+      message: 'DCM: the ringing of the switch node during the idle interval is not modelled; the capacitive turn-on loss uses the full swing from the start of the idle interval (conservative: the ringing usually lowers it), and no relaxation core loss is added.',
     });
   }
   return out;

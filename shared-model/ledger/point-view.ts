@@ -217,7 +217,8 @@ export function leanPointAt(c: Circuit, s: Shape, p: LeanPoint): LeanPoint {
   const vo1 = vo + c.rOutputSenseOhm * io;
   const on = p.edges.turnOn;
   on.currentA = lo;
-  on.voltageV = c.boost ? (s.dcm ? s.vin1 : vo1 + rectifierDrop(c, s.iv)) : s.dcm ? s.vin1 - vo : s.vin1 + rectifierDrop(c, s.iv);
+  // Same rule as operating-point/assemble.ts: in DCM, the swing when the idle interval starts.
+  on.voltageV = c.boost ? vo1 + rectifierDrop(c, s.dcm ? 0 : s.iv) : s.vin1 + rectifierDrop(c, s.dcm ? 0 : s.iv);
   on.hard = !s.dcm && lo > 0;
   const off = p.edges.turnOff;
   off.currentA = hi;

@@ -10,7 +10,8 @@
  *   sense resistor: source DC (input), switch, inductor, or Io (output).
  * Edges: turn-on at the valley (0 in DCM, not hard; soft too when the valley is negative, since the
  * reverse current discharges the switch node first), turn-off at the peak. Blocking voltages: buck
- * Vin + rectifier drop (CCM) or Vin − Vo (DCM idle, node rests at Vo); boost Vo + drop (CCM) or Vin (DCM).
+ * Vin + rectifier drop; boost Vo + rectifier drop (in DCM at zero current: the swing when the idle interval
+ * starts; the ringing toward the resting value is not modelled, a conservative choice).
  * Boost small signal (CCM): ωz = D'²R/L, current-mode output pole ωp = 2/(R·C) (METHODS.md §13).
  * Source: Erickson & Maksimović 2nd ed. ch. 2, 5 and 8 [memory for chapters]; METHODS.md §1, §2, §13.
  */
@@ -82,7 +83,11 @@ export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions
   const vo = s.vo;
   const vo1 = vo + c.rOutputSenseOhm * io;
   const vin = c.vinV;
-  const turnOnV = c.boost ? (s.dcm ? s.vin1 : vo1 + rectifierDrop(c, s.iv)) : s.dcm ? s.vin1 - vo : s.vin1 + rectifierDrop(c, s.iv);
+  // DCM: the swing the switch sees when the idle interval starts (the rectifier has just stopped
+  // conducting), as in CCM at zero current. The idle-interval ringing, which moves the node toward its
+  // resting value (buck Vo, boost Vin) and usually lowers the swing, is not modelled: this is the
+  // conservative choice, and it keeps the capacitive turn-on loss continuous at the CCM/DCM boundary.
+  const turnOnV = c.boost ? vo1 + rectifierDrop(c, s.dcm ? 0 : s.iv) : s.vin1 + rectifierDrop(c, s.dcm ? 0 : s.iv);
   const turnOffV = c.boost ? vo1 + rectifierDrop(c, s.ipk) : s.vin1 + rectifierDrop(c, s.ipk);
   const ripple = capacitorVoltageRipple(outputCapacitor, c.outputCapacitanceF, c.esrOhm);
   const op: OperatingPoint = {
