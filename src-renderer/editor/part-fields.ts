@@ -65,6 +65,7 @@ const mosfet: FieldSpec[] = [
   outputCapacitance,
   num('bodyDiodeVsdV', 'Body diode VSD', 'V'),
   num('bodyDiodeQrrC', 'Body diode Qrr', 'C'),
+  num('bodyDiodeQrrTestA', 'Qrr measured at forward current (blank: rated load)', 'A', { optional: true }),
   num('tjMaxC', 'Tj max', '°C'),
   num('thetaJcKPerW', 'θJC', 'K/W'),
 ];
@@ -75,6 +76,7 @@ const diode: FieldSpec[] = [
   num('rdOhm', 'Slope resistance Rd', 'Ω'),
   num('vfTempCoVPerK', 'VF0 temperature coefficient', 'V/K'),
   num('qrrC', 'Reverse-recovery charge Qrr', 'C'),
+  num('qrrTestA', 'Qrr measured at forward current (blank: rated load)', 'A', { optional: true }),
   num('cjF', 'Junction capacitance Cj', 'F'),
   num('leakageA', 'Reverse leakage', 'A'),
   num('leakageAtC', 'Leakage measured at', '°C'),
