@@ -7,6 +7,7 @@
 import { readFile } from '../desktop/browser-files.ts';
 import { checkRecovery, openFile, runCommand, startRecoverySnapshots } from '../state/file-actions.ts';
 import { LIBRARY_FORMAT } from '../state/library-data.ts';
+import type { MenuCommand } from '../../shared-model/index.ts';
 import type { Workspace } from '../state/workspace.svelte.ts';
 import { listenForDroppedFiles } from './drop-files.ts';
 import { commandForKey } from './shortcuts.ts';
@@ -21,12 +22,12 @@ export function connectShell(ws: Workspace, isMac: boolean, onDragState: (draggi
       const command = commandForKey(event, isMac);
       if (!command) return;
       event.preventDefault();
-      void runCommand(ws, command);
+      dispatch(ws, command);
     };
     window.addEventListener('keydown', onKey);
     stops.push(() => window.removeEventListener('keydown', onKey));
   }
-  stops.push(ws.files.onMenuCommand((command) => void runCommand(ws, command)));
+  stops.push(ws.files.onMenuCommand((command) => dispatch(ws, command)));
   stops.push(ws.files.onOpenFile((file) => void openFile(ws, file)));
 
   stops.push(
@@ -53,6 +54,16 @@ export function connectShell(ws: Workspace, isMac: boolean, onDragState: (draggi
   stops.push(() => window.removeEventListener('beforeunload', beforeUnload));
 
   return () => stops.forEach((stop) => stop());
+}
+
+/**
+ * A menu command or shortcut. Both report commands show the report screen and print it there (a PDF file
+ * through DesktopApi.printToPdf in Electron, the browser's print dialog otherwise): the report screen is
+ * what prints, since its print rules hide the rest of the app.
+ */
+function dispatch(ws: Workspace, command: MenuCommand): void {
+  if (command === 'print-report' || command === 'export-report') ws.requestReportPrint();
+  else void runCommand(ws, command);
 }
 
 function isLibraryFile(text: string): boolean {

@@ -14,7 +14,7 @@ import { ResultsState } from './results.svelte.ts';
 import { ThemeState } from './theme.svelte.ts';
 import type { PartStash } from './topology-edits.ts';
 
-export type Screen = 'design' | 'library';
+export type Screen = 'design' | 'library' | 'report';
 
 export interface RecoveryOffer {
   recovered: Recovered;
@@ -31,6 +31,8 @@ export class Workspace {
   readonly theme = new ThemeState();
   screen: Screen = $state('design');
   recoveryOffer: RecoveryOffer | null = $state(null);
+  /** Set by the menu's print/export report commands; the report screen prints once its report is shown. */
+  reportPrintPending = $state(false);
   /** Parts set aside by rectifier or sense-resistor switches, restored when switching back. */
   stash: PartStash = {};
 
@@ -40,6 +42,12 @@ export class Workspace {
     this.doc = new DocumentStore(demoDesign, suggestFileName(UNTITLED, demoDesign.name));
     this.results = new ResultsState(this.doc);
     this.library = new PartLibrary(demoParts);
+  }
+
+  /** Shows the report screen and asks it to print the report (to a PDF in Electron) once it is built. */
+  requestReportPrint(): void {
+    this.screen = 'report';
+    this.reportPrintPending = true;
   }
 }
 
