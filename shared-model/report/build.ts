@@ -71,7 +71,7 @@ export function titleBlock(input: Pick<ReportInput, 'design' | 'documentText' | 
     designHash: sha256Hex(input.documentText),
     hashNote: input.unsaved
       ? 'SHA-256 of the design document\'s UTF-8 text as it would be saved now: the design has unsaved changes, so no file on disk matches yet.'
-      : 'SHA-256 of the design document\'s UTF-8 text (without a byte-order mark); for a saved file it equals the output of "sha256sum FILE".',
+      : 'SHA-256 of the design document\'s UTF-8 text (without a byte-order mark) as WattLedger writes it; for a file saved by WattLedger, or the file given to the report command, it equals the output of "sha256sum FILE".',
   };
 }
 
