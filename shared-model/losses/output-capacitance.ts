@@ -49,7 +49,7 @@ export function cossAt(spec: OutputCapacitance, voltageV: number): { qossC: numb
 
 export const outputCapacitance: LossModel<OutputCapacitanceInputs> = {
   mechanism: 'output capacitance',
-  formula: '(Eoss,ctrl(V) + V · Qoss,sync(V) − Eoss,sync(V)) · fs; Qoss ∝ V and Eoss ∝ V² from the stated voltage',
+  formula: '(Eoss,ctrl(V) + V · Qoss,sync(V) − Eoss,sync(V)) · fs; sync terms are 0 without a synchronous FET; Qoss ∝ V and Eoss ∝ V² from the stated voltage',
   watts: (x) =>
     nonNegativeFinite((x.ctrlEossJ + x.voltageV * x.syncQossC - x.syncEossJ) * x.frequencyHz),
   describe: (x) => [
