@@ -11,6 +11,7 @@
  * Source: METHODS.md §1 (exact RMS of straight-line pieces).
  */
 import type { Circuit } from '../operating-point/circuit.ts';
+import { turnOffVoltageV, turnOnVoltageV } from '../operating-point/assemble.ts';
 import type { Shape } from '../operating-point/shape.ts';
 import type { ConductionMode, OperatingPoint, Segment, SwitchingEdge } from '../operating-point/types.ts';
 
@@ -152,10 +153,6 @@ function stats3(out: Stat, tOn: number, tOff: number, tIdle: number, a0: number,
   out.acRmsA = Math.sqrt(ac / period);
 }
 
-function rectifierDrop(c: Circuit, i: number): number {
-  return c.vf0V + c.rRectOhm * i;
-}
-
 /** Appends pooled segment k (durationS, i0 → i1) to the lean point's inductor waveform. */
 function putSegment(p: LeanPoint, k: number, durationS: number, i0A: number, i1A: number): void {
   const g = p.pool[k]!;
@@ -217,12 +214,11 @@ export function leanPointAt(c: Circuit, s: Shape, p: LeanPoint): LeanPoint {
   const vo1 = vo + c.rOutputSenseOhm * io;
   const on = p.edges.turnOn;
   on.currentA = lo;
-  // Same rule as operating-point/assemble.ts: in DCM, the swing when the idle interval starts.
-  on.voltageV = c.boost ? vo1 + rectifierDrop(c, s.dcm ? 0 : s.iv) : s.vin1 + rectifierDrop(c, s.dcm ? 0 : s.iv);
+  on.voltageV = turnOnVoltageV(c, s, vo1);
   on.hard = !s.dcm && lo > 0;
   const off = p.edges.turnOff;
   off.currentA = hi;
-  off.voltageV = c.boost ? vo1 + rectifierDrop(c, s.ipk) : s.vin1 + rectifierDrop(c, s.ipk);
+  off.voltageV = turnOffVoltageV(c, s, vo1);
   off.hard = hi > 0;
   p.stress.rectifierV = c.boost ? vo1 : c.vinV;
   return p;

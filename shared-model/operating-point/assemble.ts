@@ -44,6 +44,24 @@ export function rectifierDrop(c: Circuit, i: number): number {
   return c.vf0V + c.rRectOhm * i;
 }
 
+/**
+ * Voltage the control switch blocks just before it turns on. DCM: the swing the switch sees when the idle
+ * interval starts (the rectifier has just stopped conducting), as in CCM at zero current. The idle-interval
+ * ringing, which moves the node toward its resting value (buck Vo, boost Vin) and usually lowers the swing,
+ * is not modelled: this is the conservative choice, and it keeps the capacitive turn-on loss continuous at
+ * the CCM/DCM boundary. `vo1` is the output plus any output-sense drop.
+ */
+export function turnOnVoltageV(c: Circuit, s: Shape, vo1: number): number {
+  const drop = rectifierDrop(c, s.dcm ? 0 : s.iv);
+  return c.boost ? vo1 + drop : s.vin1 + drop;
+}
+
+/** Voltage the control switch blocks just after it turns off (at the peak current). */
+export function turnOffVoltageV(c: Circuit, s: Shape, vo1: number): number {
+  const drop = rectifierDrop(c, s.ipk);
+  return c.boost ? vo1 + drop : s.vin1 + drop;
+}
+
 export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions, meta: PointMeta): OperatingPoint {
   const T = c.periodS;
   const io = c.loadA;
@@ -83,12 +101,8 @@ export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions
   const vo = s.vo;
   const vo1 = vo + c.rOutputSenseOhm * io;
   const vin = c.vinV;
-  // DCM: the swing the switch sees when the idle interval starts (the rectifier has just stopped
-  // conducting), as in CCM at zero current. The idle-interval ringing, which moves the node toward its
-  // resting value (buck Vo, boost Vin) and usually lowers the swing, is not modelled: this is the
-  // conservative choice, and it keeps the capacitive turn-on loss continuous at the CCM/DCM boundary.
-  const turnOnV = c.boost ? vo1 + rectifierDrop(c, s.dcm ? 0 : s.iv) : s.vin1 + rectifierDrop(c, s.dcm ? 0 : s.iv);
-  const turnOffV = c.boost ? vo1 + rectifierDrop(c, s.ipk) : s.vin1 + rectifierDrop(c, s.ipk);
+  const turnOnV = turnOnVoltageV(c, s, vo1);
+  const turnOffV = turnOffVoltageV(c, s, vo1);
   const ripple = capacitorVoltageRipple(outputCapacitor, c.outputCapacitanceF, c.esrOhm);
   const op: OperatingPoint = {
     conditions,
