@@ -60,6 +60,7 @@ export {
 export type * from './ledger/types.ts';
 export type { EvaluateOptions, LedgerEvaluator } from './ledger/evaluate.ts';
 export { DEFAULT_TOLERANCE_K, evaluate, ledgerEvaluator, POWER_BALANCE_RTOL } from './ledger/evaluate.ts';
+export type { LeanEvaluation, LeanHazard, LeanTerm } from './ledger/lean-evaluate.ts';
 export { RUNAWAY_BAND_K } from './thermal/fixed-point.ts';
 export { TOUCH_LIMITS } from './hazards/touch-limits.ts';
 export type { RowFit } from './hazards/touch-check.ts';

@@ -12,18 +12,43 @@
  *   [common practice, "10 K rule"] ≥ the required hours (METHODS.md §9: 2000 h at 105 °C → 32 000 h at
  *   65 °C). For this check the margin is (value − limit)/limit (more life is better); for all others
  *   (limit − value)/limit.
+ * Each check returns a new record, or refills `into` when given (a caller that needs only the verdict of
+ * many points reuses one record).
  */
 import type { Role } from '../design/schema.ts';
 import type { RatingCheck } from '../ledger/types.ts';
 
-function check(part: Role, kind: RatingCheck['check'], value: number, limit: number, unit: string, note: string): RatingCheck {
+function check(part: Role, kind: RatingCheck['check'], value: number, limit: number, unit: string, note: string, into?: RatingCheck): RatingCheck {
   const marginFraction = limit > 0 ? (limit - value) / limit : value > 0 ? -1 : 0;
-  return { part, check: kind, value, limit, unit, marginFraction, ok: value <= limit, note };
+  return fill(into, part, kind, value, limit, unit, marginFraction, value <= limit, note);
 }
 
-export function temperatureCheck(part: Role, celsius: number, limitC: number, marginK: number): RatingCheck {
+function fill(
+  into: RatingCheck | undefined,
+  part: Role,
+  kind: RatingCheck['check'],
+  value: number,
+  limit: number,
+  unit: string,
+  marginFraction: number,
+  ok: boolean,
+  note: string,
+): RatingCheck {
+  if (!into) return { part, check: kind, value, limit, unit, marginFraction, ok, note };
+  into.part = part;
+  into.check = kind;
+  into.value = value;
+  into.limit = limit;
+  into.unit = unit;
+  into.marginFraction = marginFraction;
+  into.ok = ok;
+  into.note = note;
+  return into;
+}
+
+export function temperatureCheck(part: Role, celsius: number, limitC: number, marginK: number, into?: RatingCheck): RatingCheck {
   const derated = limitC - marginK;
-  return check(part, 'temperature', celsius, derated, '°C', 'temperature against its limit less the temperature margin');
+  return check(part, 'temperature', celsius, derated, '°C', 'temperature against its limit less the temperature margin', into);
 }
 
 /** Isat at the winding temperature, A. */
@@ -32,20 +57,20 @@ export function isatAt(isatA: number, isatAtC: number, coPerK: number, tC: numbe
   return v > 0 ? v : 0;
 }
 
-export function saturationCheck(peakA: number, isatHotA: number): RatingCheck {
-  return check('inductor', 'saturation', Math.abs(peakA), isatHotA, 'A', 'peak |current| against Isat at the winding temperature');
+export function saturationCheck(peakA: number, isatHotA: number, into?: RatingCheck): RatingCheck {
+  return check('inductor', 'saturation', Math.abs(peakA), isatHotA, 'A', 'peak |current| against Isat at the winding temperature', into);
 }
 
-export function voltageCheck(part: Role, stressV: number, ratingV: number, derating: number): RatingCheck {
-  return check(part, 'voltage', stressV, ratingV * derating, 'V', 'blocking voltage against the rating × voltage derating');
+export function voltageCheck(part: Role, stressV: number, ratingV: number, derating: number, into?: RatingCheck): RatingCheck {
+  return check(part, 'voltage', stressV, ratingV * derating, 'V', 'blocking voltage against the rating × voltage derating', into);
 }
 
-export function currentCheck(part: Role, valueA: number, ratingA: number, what: string): RatingCheck {
-  return check(part, 'current', valueA, ratingA, 'A', `${what} against the rating`);
+export function currentCheck(part: Role, valueA: number, ratingA: number, what: string, into?: RatingCheck): RatingCheck {
+  return check(part, 'current', valueA, ratingA, 'A', `${what} against the rating`, into);
 }
 
-export function rippleCheck(part: Role, perCapacitorRmsA: number, ratingA: number, derating: number): RatingCheck {
-  return check(part, 'ripple-current', perCapacitorRmsA, ratingA * derating, 'A', 'RMS current per capacitor against the ripple rating × ripple derating');
+export function rippleCheck(part: Role, perCapacitorRmsA: number, ratingA: number, derating: number, into?: RatingCheck): RatingCheck {
+  return check(part, 'ripple-current', perCapacitorRmsA, ratingA * derating, 'A', 'RMS current per capacitor against the ripple rating × ripple derating', into);
 }
 
 /** Power rating of a resistor at temperature tC, W. */
@@ -55,8 +80,8 @@ export function resistorRatingAt(ratingW: number, startC: number, zeroC: number,
   return (ratingW * (zeroC - tC)) / (zeroC - startC);
 }
 
-export function resistorPowerCheck(part: Role, powerW: number, deratedAtTW: number, derating: number): RatingCheck {
-  return check(part, 'resistor-power', powerW, deratedAtTW * derating, 'W', 'dissipation against the rating derated at the hot-spot temperature × resistor derating');
+export function resistorPowerCheck(part: Role, powerW: number, deratedAtTW: number, derating: number, into?: RatingCheck): RatingCheck {
+  return check(part, 'resistor-power', powerW, deratedAtTW * derating, 'W', 'dissipation against the rating derated at the hot-spot temperature × resistor derating', into);
 }
 
 /** Electrolytic life at hot-spot temperature tC, h (10 K rule). */
@@ -65,16 +90,8 @@ export function electrolyticLifeHours(ratedHours: number, ratedC: number, tC: nu
   return Number.isFinite(v) ? v : Number.MAX_VALUE;
 }
 
-export function lifeCheck(part: Role, lifeH: number, requiredH: number): RatingCheck {
+export function lifeCheck(part: Role, lifeH: number, requiredH: number, into?: RatingCheck): RatingCheck {
   const marginFraction = (lifeH - requiredH) / requiredH;
-  return {
-    part,
-    check: 'capacitor-life',
-    value: lifeH,
-    limit: requiredH,
-    unit: 'h',
-    marginFraction,
-    ok: lifeH >= requiredH,
-    note: 'life at the hot-spot temperature by the 10 K rule (common practice) against the required hours',
-  };
+  const note = 'life at the hot-spot temperature by the 10 K rule (common practice) against the required hours';
+  return fill(into, part, 'capacitor-life', lifeH, requiredH, 'h', marginFraction, lifeH >= requiredH, note);
 }

@@ -50,6 +50,11 @@ export function hazardCaution(row: TouchLimitRow, fit: RowFit, material: Surface
   );
 }
 
+/** K below the row's touch limit (negative: too hot to touch; exceeded when below 0). */
+export function touchMarginK(row: TouchLimitRow, surfaceC: number): number {
+  return row.limitC - surfaceC;
+}
+
 export function touchHazard(
   part: Role,
   partName: string,
@@ -59,7 +64,7 @@ export function touchHazard(
   material: SurfaceMaterial,
   contact: Contact,
 ): Hazard {
-  const marginK = row.limitC - surfaceC;
+  const marginK = touchMarginK(row, surfaceC);
   return {
     part,
     partName,

@@ -5,7 +5,7 @@
  * Peak and knee use only regulating, converged points.
  */
 import type { Design } from '../design/schema.ts';
-import { conditionsFor, defaultEvaluator } from '../sweep/evaluator.ts';
+import { conditionsFor, pointRecorder } from '../sweep/evaluator.ts';
 import { ColumnBook } from '../sweep/point-record.ts';
 import type { PointEvaluator, LoadSweep, SweepPoint } from '../sweep/types.ts';
 import { DEFAULT_KNEE_THRESHOLD_POINTS, findKnee } from './knee.ts';
@@ -23,15 +23,19 @@ export interface LandmarkOptions {
   evaluator?: PointEvaluator;
 }
 
-/** A function that evaluates the sweep's design at any load, as a point aligned with the sweep's columns. */
-export function loadProbe(design: Design, sweep: LoadSweep, evaluator: PointEvaluator = defaultEvaluator): (load: number) => SweepPoint {
-  const book = ColumnBook.resume(sweep.columns);
+/**
+ * A function that evaluates the sweep's design at any load, as a point aligned with the sweep's columns:
+ * through `evaluator` when given, else through a per-design evaluator made for this probe (its set-up
+ * lives as long as the probe; the points are those of `evaluate`, sweep/evaluator.ts).
+ */
+export function loadProbe(design: Design, sweep: LoadSweep, evaluator?: PointEvaluator): (load: number) => SweepPoint {
+  const record = pointRecorder(design, ColumnBook.resume(sweep.columns), evaluator);
   const fixed = { vinV: sweep.vinV, ambientC: sweep.ambientC, switchingFrequencyHz: sweep.switchingFrequencyHz };
   const cache = new Map<number, SweepPoint>();
   return (load) => {
     let p = cache.get(load);
     if (!p) {
-      p = book.record(evaluator(design, conditionsFor(design, { ...fixed, loadA: load })));
+      p = record(conditionsFor(design, { ...fixed, loadA: load }));
       cache.set(load, p);
     }
     return p;

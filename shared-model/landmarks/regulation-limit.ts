@@ -14,7 +14,11 @@ export const REGULATION_WARNINGS: readonly WarningCode[] = ['duty-limit', 'canno
 
 /** The warning that stops regulation at this point, or null. */
 export function regulationCause(p: SweepPoint): WarningCode | null {
-  for (const code of REGULATION_WARNINGS) if (p.warnings.some((w) => w.code === code)) return code;
+  // Plain loops, no callbacks: this runs for every swept point.
+  for (let k = 0; k < REGULATION_WARNINGS.length; k++) {
+    const code = REGULATION_WARNINGS[k]!;
+    for (let i = 0; i < p.warnings.length; i++) if (p.warnings[i]!.code === code) return code;
+  }
   return null;
 }
 

@@ -15,7 +15,14 @@ import type { PartCeiling, ThermalCeilingLandmark } from './types.ts';
 
 /** A point whose margins can be trusted (converged electro-thermal fixed point). */
 export function hasFixedPoint(p: SweepPoint): boolean {
-  return p.converged && !p.warnings.some((w) => w.code === 'thermal-runaway');
+  return p.converged && !hasWarning(p, 'thermal-runaway');
+}
+
+/** Whether the point carries a warning with this code (a plain loop: it runs for every point of every part). */
+function hasWarning(p: SweepPoint, code: string): boolean {
+  const w = p.warnings;
+  for (let i = 0; i < w.length; i++) if (w[i]!.code === code) return true;
+  return false;
 }
 
 interface Series {

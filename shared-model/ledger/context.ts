@@ -5,18 +5,19 @@
  * number of conditions (ledgerEvaluator); vinV and frequencyHz are set per evaluation.
  */
 import type { Design } from '../design/schema.ts';
-import type { ConductionParameters, OperatingPoint } from '../operating-point/types.ts';
-import { newLeanPoint, type LeanPoint, type RippleSquares } from './point-view.ts';
+import type { ConductionParameters } from '../operating-point/types.ts';
+import { newLeanPoint, newRippleSquares, type LeanPoint, type PointSummary, type RippleSquares } from './point-view.ts';
 import { newShape, type Shape } from '../operating-point/shape.ts';
-import { conductionParameters } from '../operating-point/conditions.ts';
-import { isSynchronous } from '../operating-point/circuit.ts';
+import { conductionParametersInto, type PartTempIndex } from '../operating-point/conditions.ts';
+import { isSynchronous, newCircuit, type Circuit } from '../operating-point/circuit.ts';
 import { esrAt } from '../physics/temperature-laws.ts';
 import { qgs2Of, type Qgs2Source } from '../losses/gate-charge.ts';
 import { coreCoefficients } from '../losses/steinmetz.ts';
 import { DOWELL_SCRATCH } from '../losses/dowell.ts';
 import { designNetwork, type DesignNetwork } from '../thermal/from-design.ts';
-import { RUNAWAY_BAND_K } from '../thermal/fixed-point.ts';
+import { RUNAWAY_BAND_K, ThermalWork } from '../thermal/fixed-point.ts';
 import { slotsOf, type Slots } from './slots.ts';
+import type { TouchPick } from './hazards.ts';
 
 const NO_SCRATCH = new Float64Array(0);
 
@@ -32,20 +33,50 @@ export interface LedgerContext {
   slots: Slots;
   /** Thermal node of each slot in slots.all. */
   slotNode: Int32Array;
+  /** Node of each temperature the conduction parameters read (the sense resistor's, or the controller's without one). */
+  tempIndex: PartTempIndex;
   qgs2: { qgs2C: number; source: Qgs2Source };
   core: { k: number; alpha: number; beta: number; ki: number };
   scratch: Float64Array;
   /** Reused record of the slope parts of the branch mean squares. */
   ripple: RippleSquares;
   /** Work records of the electro-thermal loop, reused across evaluations of this context. */
-  work: { shape: Shape; probe: Shape; lean: LeanPoint; raised: Float64Array; base: Float64Array };
+  work: LoopWork;
   /** Outputs of the last fill. */
   nodePowerW: Float64Array;
   pathLossW: number;
   sourceLossW: number;
-  /** The solver's record of the final point (set by evaluate). */
-  op: OperatingPoint | undefined;
+  /** The final point of the last evaluation: the solver's record, or the lean summary in a sweep. */
+  op: PointSummary | undefined;
+  /** Per-context state owned by other ledger files, made on first use (the joint loop, the sweep's records). */
+  loop: unknown;
+  leanRecords: unknown;
+  /** The touch-limit row of each touchable part (hazards.ts), made on first use. */
+  touchPicks: TouchPick[] | undefined;
 }
+
+/**
+ * Work records reused by every evaluation of one context (nothing here outlives it, and no record handed
+ * to a caller refers to them, except the lean sweep records of lean-evaluate.ts, valid until the next call).
+ */
+export interface LoopWork {
+  shape: Shape;
+  probe: Shape;
+  lean: LeanPoint;
+  /** The final point of a sweep evaluation, filled as the record would be (point-view.ts); made on first use. */
+  summary: LeanPoint | undefined;
+  raised: Float64Array;
+  base: Float64Array;
+  ambient: Float64Array;
+  cp: ConductionParameters;
+  cpRaised: ConductionParameters;
+  circuit: Circuit;
+  thermal: ThermalWork;
+}
+
+const newConduction = (): ConductionParameters => ({
+  switchOnOhm: 0, rectifierOnOhm: 0, diodeVf0V: 0, diodeRdOhm: 0, inductorDcrOhm: 0, senseOhm: 0, outputCapacitorEsrOhm: 0,
+});
 
 /**
  * The design-dependent part of an evaluation (network, slots, coefficients), reusable for many conditions
@@ -69,35 +100,49 @@ export function ledgerContext(design: Design, vinV = design.spec.vinNomV, freque
     ceilingC,
     slots,
     slotNode,
+    tempIndex: {
+      switch: net.index.switch,
+      rectifier: net.index.rectifier,
+      inductor: net.index.inductor,
+      sense: net.index.senseResistor >= 0 ? net.index.senseResistor : net.index.controller,
+    },
     qgs2: qgs2Of(design.parts.switch, design.parts.controller.driveV),
     core: coreCoefficients(design.parts.inductor.coreLoss),
     // Allocated only for a layered (Dowell) winding: a typed array this size costs a separate buffer.
     scratch: design.parts.inductor.acWinding.kind === 'dowell' ? new Float64Array(DOWELL_SCRATCH) : NO_SCRATCH,
-    ripple: { switch: 0, rectifier: 0, inductor: 0, inputCapacitor: 0, outputCapacitor: 0, sense: 0 },
+    ripple: newRippleSquares(),
     work: {
       shape: newShape(),
       probe: newShape(),
       lean: newLeanPoint(),
+      summary: undefined,
       raised: new Float64Array(net.nodes.length),
       base: new Float64Array(net.nodes.length),
+      ambient: new Float64Array(net.nodes.length),
+      cp: newConduction(),
+      cpRaised: newConduction(),
+      circuit: newCircuit(),
+      thermal: new ThermalWork(net.network.size, net.network.sinkKPerW.length),
     },
     nodePowerW: new Float64Array(net.nodes.length),
     pathLossW: 0,
     sourceLossW: 0,
     op: undefined,
+    loop: undefined,
+    leanRecords: undefined,
+    touchPicks: undefined,
   };
 }
 
 /** Conduction parameters of the design at node temperatures T (the output bank's ESR at its temperature). */
 export function conductionAt(ctx: LedgerContext, T: Float64Array): ConductionParameters {
-  const i = ctx.net.index;
+  return conductionInto(ctx, T, newConduction());
+}
+
+/** conductionAt written into `out` (one of the context's reused records); returns out. */
+export function conductionInto(ctx: LedgerContext, T: Float64Array, out: ConductionParameters): ConductionParameters {
   const p = ctx.design.parts;
-  const cp = conductionParameters(ctx.design, {
-    switchC: T[i.switch]!,
-    rectifierC: T[i.rectifier]!,
-    inductorC: T[i.inductor]!,
-    senseC: i.senseResistor >= 0 ? T[i.senseResistor]! : T[i.controller]!,
-  });
-  cp.outputCapacitorEsrOhm = esrAt(p.outputCapacitor.part, T[i.outputCapacitor]!) / p.outputCapacitor.count;
-  return cp;
+  conductionParametersInto(ctx.design, T, ctx.tempIndex, out);
+  out.outputCapacitorEsrOhm = esrAt(p.outputCapacitor.part, T[ctx.net.index.outputCapacitor]!) / p.outputCapacitor.count;
+  return out;
 }

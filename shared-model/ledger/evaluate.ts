@@ -17,29 +17,22 @@
  * losses with the runaway part at its limit + 100 K and the others at the last iterate, temperatures
  * capped at each part's limit + 100 K (thermal/fixed-point.ts). All finite.
  * Never throws for physics; throws (RangeError) only for impossible conditions (programmer error).
+ * The steps shared with a sweep's lean record are in solve-point.ts; this file builds the full record.
  */
 import type { Design } from '../design/schema.ts';
-import type { Conditions } from '../operating-point/types.ts';
-import type { Warning } from '../warnings.ts';
-import { nominalConditions } from '../operating-point/conditions.ts';
-import { solveElectroThermal, type ElectroThermalOptions } from '../thermal/fixed-point.ts';
-import { networkTemperatures } from '../thermal/network.ts';
+import type { Conditions, OperatingPoint } from '../operating-point/types.ts';
+import type { ElectroThermalOptions } from '../thermal/fixed-point.ts';
 import { ledgerContext, type LedgerContext } from './kernel.ts';
-import { jointLoop } from './joint-loop.ts';
+import type { JointLoop } from './joint-loop.ts';
 import { lossTerms } from './terms.ts';
 import { heatsinkRecords, partTemperatures } from './temperatures.ts';
-import { burnHazards } from './hazards.ts';
-import { ratingChecks } from './checks.ts';
-import { modelNotes, runawayWarning } from './notes.ts';
-import type { Evaluation } from './types.ts';
+import { settlePoint, solvePoint, type SettleTarget } from './solve-point.ts';
+import { leanEvaluateWith, type LeanEvaluation } from './lean-evaluate.ts';
+import type { Evaluation, Hazard, RatingCheck } from './types.ts';
+
+export { DEFAULT_TOLERANCE_K, POWER_BALANCE_RTOL } from './solve-point.ts';
 
 export type EvaluateOptions = ElectroThermalOptions;
-
-/** Electro-thermal convergence: |Ta + Θ·P(T) − T| ≤ this for every part, K (reported temperatures are Ta + Θ·P exactly). */
-export const DEFAULT_TOLERANCE_K = 1e-4;
-
-/** Relative tolerance of the power balance the record promises. */
-export const POWER_BALANCE_RTOL = 1e-9;
 
 /** Evaluates one operating point of `design` (nominal conditions with overrides). */
 export function evaluate(design: Design, conditions?: Partial<Conditions>, options?: EvaluateOptions): Evaluation {
@@ -48,75 +41,41 @@ export function evaluate(design: Design, conditions?: Partial<Conditions>, optio
 
 export interface LedgerEvaluator {
   evaluate(conditions?: Partial<Conditions>, options?: EvaluateOptions): Evaluation;
+  /**
+   * The same point as `evaluate` as a lean record for sweeps (lean-evaluate.ts): the same numbers and
+   * warnings, without loss-term texts, rating-check and hazard records or waveforms. The record and its
+   * lists are the evaluator's own, refilled by the next call; only its `warnings` array is fresh.
+   */
+  lean(conditions?: Partial<Conditions>, options?: EvaluateOptions): LeanEvaluation;
 }
 
 /**
  * An evaluator for many points of one design (sweeps): the design-dependent set-up is done once.
- * The design must not change while the evaluator is in use (make a new one after an edit). Results are
- * fresh records; nothing in them is shared with the evaluator.
+ * The design must not change while the evaluator is in use (make a new one after an edit). Results of
+ * `evaluate` are fresh records; nothing in them is shared with the evaluator.
  */
 export function ledgerEvaluator(design: Design): LedgerEvaluator {
   const ctx = ledgerContext(design);
-  return { evaluate: (conditions, options) => evaluateWith(ctx, conditions, options) };
+  return {
+    evaluate: (conditions, options) => evaluateWith(ctx, conditions, options),
+    lean: (conditions, options) => leanEvaluateWith(ctx, conditions, options),
+  };
 }
 
-/** Impossible conditions are a programmer error (the caller validates user input): RangeError, as the solver. */
-function checkConditions(c: Conditions): void {
-  const bad = (name: string, value: number, rule: string) => {
-    throw new RangeError(`conditions.${name} = ${value}: must be a finite number ${rule}`);
-  };
-  if (!(Number.isFinite(c.vinV) && c.vinV > 0)) bad('vinV', c.vinV, '> 0');
-  if (!(Number.isFinite(c.loadA) && c.loadA >= 0)) bad('loadA', c.loadA, '≥ 0');
-  if (!(Number.isFinite(c.switchingFrequencyHz) && c.switchingFrequencyHz > 0)) bad('switchingFrequencyHz', c.switchingFrequencyHz, '> 0');
-  if (!(Number.isFinite(c.ambientC) && c.ambientC >= -273.15)) bad('ambientC', c.ambientC, '≥ −273.15');
-}
+const finalRecord = (loop: JointLoop, T: Float64Array): OperatingPoint => loop.finalPoint(T);
 
 function evaluateWith(ctx: LedgerContext, conditions?: Partial<Conditions>, options?: EvaluateOptions): Evaluation {
-  const design = ctx.design;
-  const cond = nominalConditions(design, conditions);
-  checkConditions(cond);
-  ctx.vinV = cond.vinV;
-  ctx.frequencyHz = cond.switchingFrequencyHz;
-  const net = ctx.net;
-  const ceiling = ctx.ceilingC;
-
-  const loop = jointLoop(ctx, cond);
-  const sol = solveElectroThermal(net.network, cond.ambientC, ceiling, loop.lossAt, {
-    toleranceK: options?.toleranceK ?? DEFAULT_TOLERANCE_K,
-    maxIterations: options?.maxIterations,
-  });
-  // The solver's record at the final temperatures; the kernel is refilled on it, so the temperatures are
-  // recomputed from exactly the losses the ledger shows (they differ from the loop's by rounding only).
-  const op = loop.finalPoint(sol.evaluatedC);
-  sol.powersW.set(ctx.nodePowerW);
-  if (sol.runawayNode < 0) networkTemperatures(net.network, cond.ambientC, sol.powersW, sol.temperaturesC, sol.sinkTemperaturesC);
-
-  // The network's warnings belong to the context (shared by its evaluations): copied into each record.
-  const warnings: Warning[] = [...op.warnings];
-  for (const w of net.warnings) warnings.push({ ...w });
+  const point = solvePoint(ctx, conditions, options, finalRecord);
+  const { cond, sol, op } = point;
+  const warnings = op.warnings.slice();
   const losses = lossTerms(ctx);
-  let totalLoss = 0;
-  for (const t of losses) totalLoss += t.watts;
+  const temperatures = partTemperatures(ctx.design, ctx.net, sol);
+  const checks: RatingCheck[] = [];
+  const hazards: Hazard[] = [];
+  const settled: SettleTarget = { totalLoss: 0, inputPower: 0, checks, hazards };
+  settlePoint(ctx, point, temperatures, warnings, settled);
+  const { totalLoss, inputPower } = settled;
   const outputPower = op.outputPowerW;
-  let inputPower = cond.vinV * op.waveforms.inputA;
-  if (!(Math.abs(inputPower - (outputPower + totalLoss)) <= POWER_BALANCE_RTOL * Math.max(inputPower, 1e-300))) {
-    inputPower = outputPower + totalLoss;
-    warnings.push({
-      code: 'model-limit', severity: 'caution',
-      message: 'The operating point could not balance power at this duty cycle (see the regulation warnings); the input power shown is output power plus the ledger\'s losses.',
-    });
-  }
-  const temperatures = partTemperatures(design, net, sol);
-  if (sol.runawayNode >= 0) warnings.push(runawayWarning(net, sol));
-  else if (!sol.converged) {
-    warnings.push({
-      code: 'not-converged', severity: 'caution',
-      message: `The electro-thermal iteration stopped after ${sol.iterations} steps ${sol.residualK.toPrecision(2)} K from a fixed point; treat the temperatures as approximate.`,
-    });
-  }
-  const checks = ratingChecks(design, op, temperatures, warnings);
-  const hazards = burnHazards(design, net, temperatures, warnings);
-  warnings.push(...modelNotes(ctx));
   return {
     conditions: cond,
     converged: sol.converged,
@@ -133,6 +92,6 @@ function evaluateWith(ctx: LedgerContext, conditions?: Partial<Conditions>, opti
     checks,
     warnings,
     operatingPoint: op,
-    heatsinks: heatsinkRecords(net, sol),
+    heatsinks: heatsinkRecords(ctx.net, sol),
   };
 }

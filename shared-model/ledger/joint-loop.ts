@@ -11,20 +11,32 @@
  * `finalPoint(T)` then builds the solver's OperatingPoint record once at the converged duty, exactly as
  * solveOperatingPoint(design, conditions, conduction(T), { lossOf, sourceLossOf }) would (test:
  * test/shared-model/ledger/joint-loop.test.ts).
+ * `finalSummary(T)` is the same point for a sweep: the record's numbers to the last bit in a reused
+ * PointSummary (point-view.ts) with the same warnings, without the record's waveforms.
  * Slow path: a point the volt-second solution cannot regulate, or whose power balance needs more than
  * the duty limit, is handed to solveOperatingPoint at every step (its fallbacks and warnings apply).
+ * One loop object per context, reset for each evaluation; its work records are the context's (no
+ * allocation per step on the fast path).
  */
 import type { Conditions, OperatingPoint } from '../operating-point/types.ts';
-import { circuitOf, type Circuit } from '../operating-point/circuit.ts';
-import { shapeAt } from '../operating-point/shape.ts';
-import { solveVoltSecond } from '../operating-point/duty.ts';
+import { circuitInto, type Circuit } from '../operating-point/circuit.ts';
+import { shapeAt, shapeOfOwn } from '../operating-point/shape.ts';
+import { dutyLimitOf, solveVoltSecond } from '../operating-point/duty.ts';
 import { solveOperatingPoint } from '../operating-point/solve.ts';
 import { buildOperatingPoint } from '../operating-point/assemble.ts';
 import { addWarnings } from '../operating-point/checks.ts';
 import type { ConductionParameters } from '../operating-point/types.ts';
 import type { LossAt } from '../thermal/fixed-point.ts';
-import { conductionAt, fillLosses, type LedgerContext } from './kernel.ts';
-import { leanPointAt, rippleSquaresOf, rippleSquaresOfLean, type PointView, type RippleSquares } from './point-view.ts';
+import { conductionInto, fillLosses, type LedgerContext } from './kernel.ts';
+import {
+  leanPointAt,
+  newLeanPoint,
+  rippleSquaresOf,
+  rippleSquaresOfLean,
+  type PointSummary,
+  type PointView,
+  type RippleSquares,
+} from './point-view.ts';
 
 export const SLOPE_STEP_K = 0.01;
 const BALANCE_RTOL = 1e-12;
@@ -34,26 +46,64 @@ export interface JointLoop {
   lossAt: LossAt;
   /** The solver's record at temperatures T; leaves the kernel filled at that point. */
   finalPoint(T: Float64Array): OperatingPoint;
+  /**
+   * The same point as finalPoint, as a summary: on the fast path the context's reused LeanPoint (valid
+   * until the next evaluation; its `warnings` array is fresh), else the solver's record.
+   */
+  finalSummary(T: Float64Array): PointSummary;
   /** True while the fast path is in use. */
   isFast(): boolean;
 }
 
+/** The context's loop, reset for an evaluation at `cond` (see header). */
 export function jointLoop(ctx: LedgerContext, cond: Conditions): JointLoop {
-  const design = ctx.design;
-  const n = ctx.net.nodes.length;
-  const dMax = design.spec.maxDuty;
-  const vin = cond.vinV;
-  const { shape: s, probe, lean, raised: Tp, base } = ctx.work;
-  const ambient = new Float64Array(n).fill(cond.ambientC);
-  const vs0 = solveVoltSecond(circuitOf(design, cond, conductionAt(ctx, ambient)), dMax, s);
-  let fast = vs0.limit === 'none';
-  const vo = vs0.vo;
-  const pout = vo * cond.loadA;
-  let d = vs0.d;
-  let slope = NaN;
+  let loop = ctx.loop as Loop | undefined;
+  if (!loop) {
+    loop = new Loop(ctx);
+    ctx.loop = loop;
+  }
+  loop.reset(cond);
+  return loop;
+}
 
-  const slowPoint = (T: Float64Array, cp: ConductionParameters): OperatingPoint => {
-    const op = solveOperatingPoint(design, cond, cp, {
+class Loop implements JointLoop {
+  readonly lossAt: LossAt;
+  private cond!: Conditions;
+  private fast = true;
+  private vin = 0;
+  private vo = 0;
+  private pout = 0;
+  private d = 0;
+  private slope = NaN;
+  /** Power-balance residual of the last balance, W. */
+  private f = 0;
+
+  constructor(private readonly ctx: LedgerContext) {
+    this.lossAt = lossAtOf(this);
+  }
+
+  reset(cond: Conditions): void {
+    const ctx = this.ctx;
+    const w = ctx.work;
+    this.cond = cond;
+    this.vin = cond.vinV;
+    w.ambient.fill(cond.ambientC);
+    const c = circuitInto(ctx.design, cond, conductionInto(ctx, w.ambient, w.cp), w.circuit);
+    const vs0 = solveVoltSecond(c, ctx.design.spec.maxDuty, w.shape);
+    this.fast = vs0.limit === 'none';
+    this.vo = vs0.vo;
+    this.pout = vs0.vo * cond.loadA;
+    this.d = vs0.d;
+    this.slope = NaN;
+  }
+
+  isFast(): boolean {
+    return this.fast;
+  }
+
+  private slowPoint(T: Float64Array, cp: ConductionParameters): OperatingPoint {
+    const ctx = this.ctx;
+    const op = solveOperatingPoint(ctx.design, this.cond, cp, {
       lossOf: (p) => {
         fillLosses(ctx, p, rippleSquaresOf(p, ctx.ripple), T, cp);
         return ctx.pathLossW;
@@ -65,91 +115,148 @@ export function jointLoop(ctx: LedgerContext, cond: Conditions): JointLoop {
     });
     ctx.op = op;
     return op;
-  };
+  }
 
-  const balance = (c: Circuit, T: Float64Array, cp: ConductionParameters): number => {
-    shapeAt(c, d, vo, s);
+  /**
+   * Fills the kernel at the current duty and sets `f`, the power-balance residual Vin·Iin − Pout − P_path
+   * (a field, not a return value: a number returned across a call is boxed on the heap).
+   */
+  private balance(T: Float64Array, cp: ConductionParameters): void {
+    const ctx = this.ctx;
+    const { circuit: c, shape: s, lean } = ctx.work;
+    s.d = this.d;
+    s.vo = this.vo;
+    shapeOfOwn(c, s);
     leanPointAt(c, s, lean);
     fillLosses(ctx, lean, rippleSquaresOfLean(lean, ctx.ripple), T, cp);
-    return vin * s.iin - pout - ctx.pathLossW;
-  };
+    this.f = this.vin * s.iin - this.pout - ctx.pathLossW;
+  }
 
-  const balanced = (f: number): boolean =>
-    Math.abs(f) <= BALANCE_RTOL * Math.max(vin * s.iin, pout + ctx.pathLossW, Number.MIN_VALUE);
+  /** Whether the residual `f` of the last balance is within BALANCE_RTOL of the power flows. */
+  private balanced(): boolean {
+    const vin = this.vin;
+    return Math.abs(this.f) <= BALANCE_RTOL * Math.max(vin * this.ctx.work.shape.iin, this.pout + this.ctx.pathLossW, Number.MIN_VALUE);
+  }
 
-  const slopesAt = (view: PointView, ripple: RippleSquares, T: Float64Array, P: Float64Array, G: Float64Array): void => {
+  private slopesAt(view: PointView, ripple: RippleSquares, T: Float64Array, P: Float64Array, G: Float64Array): void {
+    const ctx = this.ctx;
+    const { base, raised: Tp, cpRaised } = ctx.work;
+    const n = ctx.net.nodes.length;
     base.set(P);
     for (let i = 0; i < n; i++) Tp[i] = T[i]! + SLOPE_STEP_K;
-    fillLosses(ctx, view, ripple, Tp, conductionAt(ctx, Tp), true);
+    fillLosses(ctx, view, ripple, Tp, conductionInto(ctx, Tp, cpRaised), true);
     const q = ctx.nodePowerW;
     for (let i = 0; i < n; i++) G[i] = (q[i]! - base[i]!) / SLOPE_STEP_K;
-  };
+  }
 
-  const lossAt: LossAt = (T, P, G, residualK) => {
-    const cp = conductionAt(ctx, T);
-    if (!fast) {
-      const op = slowPoint(T, cp);
+  /** One electro-thermal step (see header): the solver's LossAt. */
+  step(T: Float64Array, P: Float64Array, G: Float64Array, residualK: number): boolean {
+    const ctx = this.ctx;
+    const w = ctx.work;
+    const cp = conductionInto(ctx, T, w.cp);
+    if (!this.fast) {
+      const op = this.slowPoint(T, cp);
       P.set(ctx.nodePowerW);
-      slopesAt(op, ctx.ripple, T, P, G);
+      this.slopesAt(op, ctx.ripple, T, P, G);
       return true;
     }
-    const c = circuitOf(design, cond, cp);
-    let f = balance(c, T, cp);
-    let ok = balanced(f);
+    const dMax = ctx.design.spec.maxDuty;
+    const vin = this.vin;
+    const c = circuitInto(ctx.design, this.cond, cp, w.circuit);
+    const s = w.shape;
+    this.balance(T, cp);
+    let ok = this.balanced();
     // Far from the thermal fixed point (residual above LOOSE_ABOVE_K) one duty step is enough: the
     // temperatures, and with them the losses, will still move. Near it the duty is balanced fully.
     const steps = residualK > LOOSE_ABOVE_K ? 1 : 12;
     for (let k = 0; k < steps && !ok; k++) {
-      if (!(slope > 0)) {
+      const d = this.d;
+      if (!(this.slope > 0)) {
         const h = 1e-7 * Math.max(d, 1e-3);
-        slope = (vin * (shapeAt(c, Math.min(d + h, dMax), vo, probe).iin - s.iin)) / h;
+        this.slope = (vin * (shapeAt(c, Math.min(d + h, dMax), this.vo, w.probe).iin - s.iin)) / h;
       }
+      const slope = this.slope;
+      const f = this.f;
       let next = slope > 0 ? d - f / slope : f < 0 ? 0.5 * (d + dMax) : 0.5 * d;
       if (!(next > 0)) next = 0.5 * d;
       if (next > dMax) {
         if (d >= dMax) {
           // The balance needs more than the duty limit: hand the point to the solver's fallback.
-          fast = false;
-          return lossAt(T, P, G, residualK);
+          this.fast = false;
+          return this.step(T, P, G, residualK);
         }
         next = dMax;
       }
       const fPrev = f;
       const dPrev = d;
-      d = next;
-      f = balance(c, T, cp);
-      if (d !== dPrev) {
-        const secant = (f - fPrev) / (d - dPrev);
-        if (secant > 0) slope = secant;
+      this.d = next;
+      this.balance(T, cp);
+      if (this.d !== dPrev) {
+        const secant = (this.f - fPrev) / (this.d - dPrev);
+        if (secant > 0) this.slope = secant;
       }
-      ok = balanced(f);
+      ok = this.balanced();
     }
     P.set(ctx.nodePowerW);
-    slopesAt(lean, ctx.ripple, T, P, G);
+    this.slopesAt(w.lean, ctx.ripple, T, P, G);
     return ok;
-  };
+  }
 
-  const finalPoint = (T: Float64Array): OperatingPoint => {
-    const cp = conductionAt(ctx, T);
-    if (!fast) return slowPoint(T, cp);
-    const c = circuitOf(design, cond, cp);
-    const vs = solveVoltSecond(c, dMax, probe);
-    if (vs.limit !== 'none') {
-      fast = false;
-      return slowPoint(T, cp);
+  /**
+   * The final point's conduction parameters at T (into the context's work record) and, on the fast path,
+   * its circuit with the inductor-current shape at the loop's duty; null when the point takes the slow
+   * path (the loop already did, or the duty limit binds at T).
+   */
+  private finalCircuit(T: Float64Array): Circuit | null {
+    const ctx = this.ctx;
+    const w = ctx.work;
+    const cp = conductionInto(ctx, T, w.cp);
+    if (!this.fast) return null;
+    const c = circuitInto(ctx.design, this.cond, cp, w.circuit);
+    if (dutyLimitOf(c, ctx.design.spec.maxDuty, w.probe) !== 'none') {
+      this.fast = false;
+      return null;
     }
-    shapeAt(c, d, vo, s);
-    const op = buildOperatingPoint(c, s, cond, { regulated: true, dutyMethod: 'power-balance', extraInputA: 0, warnings: [] });
-    addWarnings({ design, circuit: c, limit: 'none', powerBalanceFallback: false }, op);
+    shapeAt(c, this.d, this.vo, w.shape);
+    return c;
+  }
+
+  finalPoint(T: Float64Array): OperatingPoint {
+    const ctx = this.ctx;
+    const w = ctx.work;
+    const c = this.finalCircuit(T);
+    if (!c) return this.slowPoint(T, w.cp);
+    const cp = w.cp;
+    const op = buildOperatingPoint(c, w.shape, this.cond, { regulated: true, dutyMethod: 'power-balance', extraInputA: 0, warnings: [] });
+    addWarnings({ design: ctx.design, circuit: c, limit: 'none', powerBalanceFallback: false }, op);
     fillLosses(ctx, op, rippleSquaresOf(op, ctx.ripple), T, cp);
-    op.waveforms.inputA += Math.max(ctx.sourceLossW, 0) / vin;
+    op.waveforms.inputA += Math.max(ctx.sourceLossW, 0) / this.vin;
     ctx.op = op;
     return op;
-  };
+  }
 
-  return {
-    lossAt,
-    finalPoint,
-    isFast: () => fast,
-  };
+  finalSummary(T: Float64Array): PointSummary {
+    const ctx = this.ctx;
+    const w = ctx.work;
+    const c = this.finalCircuit(T);
+    if (!c) return this.slowPoint(T, w.cp);
+    const cp = w.cp;
+    w.summary ??= newLeanPoint();
+    const p = leanPointAt(c, w.shape, w.summary, true, this.cond);
+    p.warnings = [];
+    addWarnings({ design: ctx.design, circuit: c, limit: 'none', powerBalanceFallback: false }, p);
+    fillLosses(ctx, p, rippleSquaresOfLean(p, ctx.ripple), T, cp);
+    p.waveforms.inputA += Math.max(ctx.sourceLossW, 0) / this.vin;
+    ctx.op = p;
+    return p;
+  }
+}
+
+/**
+ * The solver's callback for `loop`. Made here rather than as an arrow function in the constructor: there,
+ * capturing `this` led V8 to keep every context alive through its young-generation collections and then
+ * to allocate contexts directly in the old generation (measured: a single `evaluate` 5× slower).
+ */
+function lossAtOf(loop: Loop): LossAt {
+  return (T, P, G, residualK) => loop.step(T, P, G, residualK);
 }

@@ -29,8 +29,8 @@ export function runawayWarning(net: DesignNetwork, sol: ElectroThermalSolution):
   };
 }
 
-export function modelNotes(ctx: LedgerContext): Warning[] {
-  const out: Warning[] = [];
+/** Appends the model-limit notes of the context's last point to `out`. */
+export function modelNotes(ctx: LedgerContext, out: Warning[]): void {
   const op = ctx.op!;
   const sw = ctx.design.parts.switch;
   if (ctx.qgs2.source !== 'datasheet') {
@@ -67,5 +67,4 @@ export function modelNotes(ctx: LedgerContext): Warning[] {
       message: 'DCM: the ringing of the switch node during the idle interval is not modelled; the capacitive turn-on loss uses the full swing from the start of the idle interval (conservative: the ringing usually lowers it), and no relaxation core loss is added.',
     });
   }
-  return out;
 }

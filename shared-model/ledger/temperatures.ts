@@ -1,32 +1,46 @@
 /**
  * PartTemperature and heatsink records from the electro-thermal solution.
  * A capacitor bank's record is one capacitor's hot spot (the bank's dissipation shared by its n parts);
- * its dissipationW is the whole bank's.
+ * its dissipationW is the whole bank's. A sweep refills one set of records per point (`partTemperaturesInto`).
  */
 import type { Design } from '../design/schema.ts';
 import type { ElectroThermalSolution } from '../thermal/fixed-point.ts';
 import type { DesignNetwork } from '../thermal/from-design.ts';
-import { surfaceTemperature } from '../thermal/network.ts';
+import { surfaceTemperatureAt } from '../thermal/network.ts';
 import type { Evaluation, PartTemperature } from './types.ts';
 
+/** Fills `t` with node i's record (every field written); returns t. */
+function fillPartTemperature(design: Design, net: DesignNetwork, sol: ElectroThermalSolution, i: number, t: PartTemperature): PartTemperature {
+  const node = net.nodes[i]!;
+  const celsius = sol.temperaturesC[i]!;
+  const power = sol.powersW[i]!;
+  t.part = node.role;
+  t.partName = node.partName;
+  t.kind = node.kind;
+  t.celsius = celsius;
+  t.limit = node.limitC;
+  t.marginK = node.limitC - design.margins.temperatureMarginK - celsius;
+  t.surfaceC = Math.min(surfaceTemperatureAt(net.network, i, sol.temperaturesC, sol.powersW, sol.sinkTemperaturesC), celsius);
+  t.dissipationW = power;
+  t.path = node.path;
+  return t;
+}
+
+const newPartTemperature = (): PartTemperature => ({
+  part: 'switch', partName: '', kind: 'junction', celsius: 0, limit: 0, marginK: 0, surfaceC: 0, dissipationW: 0, path: '',
+});
+
 export function partTemperatures(design: Design, net: DesignNetwork, sol: ElectroThermalSolution): PartTemperature[] {
-  const margin = design.margins.temperatureMarginK;
-  return net.nodes.map((node, i) => {
-    const celsius = sol.temperaturesC[i]!;
-    const power = sol.powersW[i]!;
-    const surface = Math.min(surfaceTemperature(net.network, i, celsius, power, sol.sinkTemperaturesC), celsius);
-    return {
-      part: node.role,
-      partName: node.partName,
-      kind: node.kind,
-      celsius,
-      limit: node.limitC,
-      marginK: node.limitC - margin - celsius,
-      surfaceC: surface,
-      dissipationW: power,
-      path: node.path,
-    };
-  });
+  return net.nodes.map((_, i) => fillPartTemperature(design, net, sol, i, newPartTemperature()));
+}
+
+/** partTemperatures into `out` (one record per node, made on the first call); returns out. */
+export function partTemperaturesInto(design: Design, net: DesignNetwork, sol: ElectroThermalSolution, out: PartTemperature[]): PartTemperature[] {
+  for (let i = 0; i < net.nodes.length; i++) {
+    if (out.length <= i) out.push(newPartTemperature());
+    fillPartTemperature(design, net, sol, i, out[i]!);
+  }
+  return out;
 }
 
 export function heatsinkRecords(net: DesignNetwork, sol: ElectroThermalSolution): Evaluation['heatsinks'] {

@@ -62,6 +62,11 @@ export function turnOffVoltageV(c: Circuit, s: Shape, vo1: number): number {
   return c.boost ? vo1 + drop : s.vin1 + drop;
 }
 
+/** Voltage the control switch blocks, for its rating (boost: Vo' + rectifier drop at the peak; buck: Vin + that drop). */
+export function switchStressV(c: Circuit, s: Shape, vo1: number): number {
+  return c.boost ? vo1 + rectifierDrop(c, s.ipk) : c.vinV + rectifierDrop(c, s.ipk);
+}
+
 export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions, meta: PointMeta): OperatingPoint {
   const T = c.periodS;
   const io = c.loadA;
@@ -139,9 +144,7 @@ export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions
       turnOn: { currentA: lo, voltageV: turnOnV, hard: !s.dcm && lo > 0 },
       turnOff: { currentA: hi, voltageV: turnOffV, hard: hi > 0 },
     },
-    stress: c.boost
-      ? { switchV: vo1 + rectifierDrop(c, s.ipk), rectifierV: vo1 }
-      : { switchV: vin + rectifierDrop(c, s.ipk), rectifierV: vin },
+    stress: { switchV: switchStressV(c, s, vo1), rectifierV: c.boost ? vo1 : vin },
     outputRipple: ripple,
     warnings: meta.warnings,
   };

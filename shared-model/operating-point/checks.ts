@@ -19,6 +19,19 @@ import type { OperatingPoint } from './types.ts';
 
 const f4 = (x: number) => (Number.isFinite(x) ? Number(x.toPrecision(4)).toString() : String(x));
 
+/** The fields of an operating point the warnings read (the solver's record, or the ledger's lean summary). */
+export interface CheckedPoint {
+  conditions: { ambientC: number };
+  voutV: number;
+  dutyCycle: number;
+  mode: OperatingPoint['mode'];
+  idleFraction: number;
+  inductor: { averageA: number; peakA: number; valleyA: number };
+  stats: { switch: { peakA: number }; rectifier: { peakA: number; minA: number; averageA: number } };
+  stress: { switchV: number; rectifierV: number };
+  warnings: Warning[];
+}
+
 export interface CheckContext {
   design: Design;
   circuit: Circuit;
@@ -27,7 +40,7 @@ export interface CheckContext {
   powerBalanceFallback: boolean;
 }
 
-function ratingWarnings(design: Design, op: OperatingPoint, out: Warning[]): void {
+function ratingWarnings(design: Design, op: CheckedPoint, out: Warning[]): void {
   const derate = design.margins.voltageDerating;
   const voltage = (role: 'switch' | 'rectifier', stress: number, rating: number, path: string) => {
     if (stress > rating) {
@@ -58,10 +71,11 @@ function ratingWarnings(design: Design, op: OperatingPoint, out: Warning[]): voi
 }
 
 /** Appends the operating point's warnings to op.warnings. */
-export function addWarnings(ctx: CheckContext, op: OperatingPoint): void {
+export function addWarnings(ctx: CheckContext, op: CheckedPoint): void {
   const { design, circuit: c } = ctx;
   const out = op.warnings;
-  const vTarget = f4(c.targetVoutV);
+  // Formatted only when a limit is reached (this runs once per swept point).
+  const vTarget = ctx.limit === 'none' ? '' : f4(c.targetVoutV);
   switch (ctx.limit) {
     case 'duty-limit':
       out.push({ code: 'duty-limit', severity: 'caution', path: 'spec.maxDuty',

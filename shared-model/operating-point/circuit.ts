@@ -55,6 +55,20 @@ export function isSynchronous(design: Design): boolean {
 }
 
 export function circuitOf(design: Design, conditions: Conditions, conduction: ConductionParameters): Circuit {
+  return circuitInto(design, conditions, conduction, newCircuit());
+}
+
+/** An empty circuit record (all fields present) for circuitInto. */
+export function newCircuit(): Circuit {
+  return {
+    boost: false, blocksReverse: false, synchronous: false, senseAt: 'none', vinV: 0, targetVoutV: 0, loadA: 0,
+    periodS: 0, rOnOhm: 0, rOffOhm: 0, esrOhm: 0, vf0V: 0, rRectOhm: 0, rInputSenseOhm: 0, rOutputSenseOhm: 0,
+    inductanceH: 0, rolloffA: 0, rolloffH: 0, outputCapacitanceF: 0,
+  };
+}
+
+/** circuitOf written into `out` (a record reused by the electro-thermal loop); returns out. */
+export function circuitInto(design: Design, conditions: Conditions, conduction: ConductionParameters, out: Circuit): Circuit {
   const { topology, parts, spec } = design;
   const synchronous = isSynchronous(design);
   const where: SenseLocation = parts.senseResistor ? topology.senseLocation : 'none';
@@ -65,27 +79,26 @@ export function circuitOf(design: Design, conditions: Conditions, conduction: Co
   const bank = parts.outputCapacitor;
   const esr = conduction.outputCapacitorEsrOhm ?? bank.part.esrOhm / bank.count;
   const rolloff = parts.inductor.rolloff;
-  return {
-    boost: topology.kind === 'boost',
-    blocksReverse: !synchronous || topology.lightLoad === 'diode-emulation',
-    synchronous,
-    senseAt: where,
-    vinV: conditions.vinV,
-    targetVoutV: spec.voutV,
-    loadA: conditions.loadA,
-    periodS: 1 / conditions.switchingFrequencyHz,
-    rOnOhm: conduction.switchOnOhm + conduction.inductorDcrOhm + rSenseSwitch + rSenseInductor,
-    rOffOhm: rRect + conduction.inductorDcrOhm + rSenseInductor,
-    esrOhm: esr,
-    vf0V: synchronous ? 0 : conduction.diodeVf0V,
-    rRectOhm: rRect,
-    rInputSenseOhm: where === 'input' ? rs : 0,
-    rOutputSenseOhm: where === 'output' ? rs : 0,
-    inductanceH: parts.inductor.inductanceH,
-    rolloffA: rolloff ? rolloff.currentA : 0,
-    rolloffH: rolloff ? rolloff.inductanceH : 0,
-    outputCapacitanceF: bank.part.capacitanceF * bank.count,
-  };
+  out.boost = topology.kind === 'boost';
+  out.blocksReverse = !synchronous || topology.lightLoad === 'diode-emulation';
+  out.synchronous = synchronous;
+  out.senseAt = where;
+  out.vinV = conditions.vinV;
+  out.targetVoutV = spec.voutV;
+  out.loadA = conditions.loadA;
+  out.periodS = 1 / conditions.switchingFrequencyHz;
+  out.rOnOhm = conduction.switchOnOhm + conduction.inductorDcrOhm + rSenseSwitch + rSenseInductor;
+  out.rOffOhm = rRect + conduction.inductorDcrOhm + rSenseInductor;
+  out.esrOhm = esr;
+  out.vf0V = synchronous ? 0 : conduction.diodeVf0V;
+  out.rRectOhm = rRect;
+  out.rInputSenseOhm = where === 'input' ? rs : 0;
+  out.rOutputSenseOhm = where === 'output' ? rs : 0;
+  out.inductanceH = parts.inductor.inductanceH;
+  out.rolloffA = rolloff ? rolloff.currentA : 0;
+  out.rolloffH = rolloff ? rolloff.inductanceH : 0;
+  out.outputCapacitanceF = bank.part.capacitanceF * bank.count;
+  return out;
 }
 
 /**

@@ -33,6 +33,34 @@ export function nominalConditions(design: Design, overrides?: Partial<Conditions
 
 /** Resistive drops and forward voltages of the design's parts at the given part temperatures. */
 export function conductionParameters(design: Design, temps: PartTemps): ConductionParameters {
+  const out: ConductionParameters = {
+    switchOnOhm: 0, rectifierOnOhm: 0, diodeVf0V: 0, diodeRdOhm: 0, inductorDcrOhm: 0, senseOhm: 0,
+  };
+  const t = [temps.switchC, temps.rectifierC, temps.inductorC, temps.senseC];
+  return conductionParametersInto(design, t, PART_TEMPS_ORDER, out);
+}
+
+/** Where each part's temperature sits in an array of temperatures (°C), for conductionParametersInto. */
+export interface PartTempIndex {
+  switch: number;
+  rectifier: number;
+  inductor: number;
+  sense: number;
+}
+
+const PART_TEMPS_ORDER: PartTempIndex = { switch: 0, rectifier: 1, inductor: 2, sense: 3 };
+
+/**
+ * conductionParameters written into `out` (a record reused by the electro-thermal loop), with the part
+ * temperatures read from `temps` at the positions `at` (numbers passed in an array rather than as
+ * arguments, which a call that is not inlined would box on the heap). Leaves `out.outputCapacitorEsrOhm` alone.
+ */
+export function conductionParametersInto(
+  design: Design,
+  temps: ArrayLike<number>,
+  at: PartTempIndex,
+  out: ConductionParameters,
+): ConductionParameters {
   const { parts } = design;
   const rect = parts.rectifier;
   const sync = isSynchronous(design);
@@ -40,20 +68,19 @@ export function conductionParameters(design: Design, temps: PartTemps): Conducti
   let diodeVf0V: number;
   let diodeRdOhm = 0;
   if (rect.kind === 'mosfet') {
-    rectifierOnOhm = sync ? rdsOnAt(rect, temps.rectifierC) : 0;
+    rectifierOnOhm = sync ? rdsOnAt(rect, temps[at.rectifier]!) : 0;
     diodeVf0V = rect.bodyDiodeVsdV;
   } else {
-    diodeVf0V = diodeVf0At(rect, temps.rectifierC);
+    diodeVf0V = diodeVf0At(rect, temps[at.rectifier]!);
     diodeRdOhm = rect.rdOhm;
   }
-  return {
-    switchOnOhm: rdsOnAt(parts.switch, temps.switchC),
-    rectifierOnOhm,
-    diodeVf0V,
-    diodeRdOhm,
-    inductorDcrOhm: copperResistanceAt(parts.inductor.dcr20Ohm, temps.inductorC),
-    senseOhm: parts.senseResistor ? resistorAt(parts.senseResistor, temps.senseC) : 0,
-  };
+  out.switchOnOhm = rdsOnAt(parts.switch, temps[at.switch]!);
+  out.rectifierOnOhm = rectifierOnOhm;
+  out.diodeVf0V = diodeVf0V;
+  out.diodeRdOhm = diodeRdOhm;
+  out.inductorDcrOhm = copperResistanceAt(parts.inductor.dcr20Ohm, temps[at.inductor]!);
+  out.senseOhm = parts.senseResistor ? resistorAt(parts.senseResistor, temps[at.sense]!) : 0;
+  return out;
 }
 
 /** All part temperatures equal (for example the ambient, before any self-heating is known). */

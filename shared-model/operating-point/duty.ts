@@ -59,3 +59,17 @@ export function solveVoltSecond(c: Circuit, dMax: number, s: Shape): DutySolutio
   const d = atLimit ? dMax : dBest;
   return { d, vo: achievableVout(c, d, s), limit: atLimit ? 'duty-limit' : 'conversion-ratio' };
 }
+
+/**
+ * solveVoltSecond(c, dMax, s).limit without the duty itself where it is not needed: the residual at
+ * D = 0 and at Dmax decide it for a regulating point and a buck; only a boost short of its target at Dmax
+ * needs the full search. `s` is left holding some trial shape.
+ */
+export function dutyLimitOf(c: Circuit, dMax: number, s: Shape): DutyLimit {
+  const vo = c.targetVoutV;
+  const r0 = shapeAt(c, 0, vo, s).residualV;
+  if (r0 === 0) return 'none';
+  if (r0 > 0) return 'step-down';
+  if (shapeAt(c, dMax, vo, s).residualV >= 0) return 'none';
+  return c.boost ? solveVoltSecond(c, dMax, s).limit : 'duty-limit';
+}

@@ -41,6 +41,18 @@ export function newShape(): Shape {
 
 /** Fills `s` with the shape at duty d and output voltage vo; returns s. */
 export function shapeAt(c: Circuit, d: number, vo: number, s: Shape): Shape {
+  s.d = d;
+  s.vo = vo;
+  return shapeOfOwn(c, s);
+}
+
+/**
+ * Fills `s` with the shape at its own duty `s.d` and output voltage `s.vo`; returns s. (The hot loop sets
+ * them and calls this: numbers passed as arguments to a call that is not inlined are boxed on the heap.)
+ */
+export function shapeOfOwn(c: Circuit, s: Shape): Shape {
+  const d = s.d;
+  const vo = s.vo;
   const T = c.periodS;
   const io = c.loadA;
   const esr = c.esrOhm;
@@ -49,8 +61,6 @@ export function shapeAt(c: Circuit, d: number, vo: number, s: Shape): Shape {
   const dp = Math.max(1 - d, 1e-12);
   const roff = c.rOffOhm + esr;
   const ron = c.boost ? c.rOnOhm : c.rOnOhm + esr;
-  s.d = d;
-  s.vo = vo;
 
   // CCM attempt.
   let il = c.boost ? io / dp : io;

@@ -8,7 +8,7 @@
 import type { Design } from '../design/schema.ts';
 import { findMaximum } from '../landmarks/search.ts';
 import type { Conditions } from '../operating-point/types.ts';
-import { conditionsFor, evaluatorFor } from './evaluator.ts';
+import { conditionsFor, pointRecorder } from './evaluator.ts';
 import { ColumnBook, lossByMechanism } from './point-record.ts';
 import { axisValues, checkAxis } from './spacing.ts';
 import type { PointEvaluator, OptionProblem, SweepSpacing, SweepColumns, SweepPoint } from './types.ts';
@@ -59,11 +59,11 @@ export function sweepFrequency(design: Design, options: FrequencySweepOptions = 
   const problems = checkFrequencySweepOptions(design, options);
   if (problems.length > 0) throw new RangeError(problems.map((p) => p.message).join(' '));
   const fs = design.spec.switchingFrequencyHz;
-  const evaluator = evaluatorFor(design, options.evaluator);
   const loadA = options.loadA ?? design.spec.ratedLoadA;
   const fixed = conditionsFor(design, { ...options.conditions, loadA });
   const book = new ColumnBook();
-  const at = (hz: number) => book.record(evaluator(design, { ...fixed, switchingFrequencyHz: hz }));
+  const record = pointRecorder(design, book, options.evaluator);
+  const at = (hz: number) => record({ ...fixed, switchingFrequencyHz: hz });
   const freqs = axisValues(options.fromHz ?? fs / 5, options.toHz ?? fs * 5, options.points ?? 61, options.spacing ?? 'log');
   const points = freqs.map(at);
   let best = 0;

@@ -6,7 +6,7 @@
  */
 import type { Design, Role } from '../design/schema.ts';
 import type { Conditions } from '../operating-point/types.ts';
-import { conditionsFor, evaluatorFor } from './evaluator.ts';
+import { conditionsFor, pointSource } from './evaluator.ts';
 import { axisValues, checkAxis } from './spacing.ts';
 import type { PointEvaluator, OptionProblem, SweepSpacing } from './types.ts';
 
@@ -74,7 +74,7 @@ export function sweepGrid(design: Design, options: GridOptions = {}): LoadGrid {
   const problems = checkGridOptions(design, options);
   if (problems.length > 0) throw new RangeError(problems.map((p) => p.message).join(' '));
   const r = resolve(design, options);
-  const evaluator = evaluatorFor(design, options.evaluator);
+  const pointAt = pointSource(design, options.evaluator);
   const fixed = conditionsFor(design, options.conditions);
   const loadsA = axisValues(r.load.from, r.load.to, r.load.points, r.load.spacing);
   const secondValues = axisValues(r.second.from, r.second.to, r.second.points, r.second.spacing);
@@ -87,12 +87,13 @@ export function sweepGrid(design: Design, options: GridOptions = {}): LoadGrid {
     const part: (Role | null)[] = [];
     const ok: boolean[] = [];
     for (const loadA of loadsA) {
-      const e = evaluator(design, { ...base, loadA });
+      const e = pointAt({ ...base, loadA });
       eff.push(e.efficiency);
       loss.push(e.totalLoss);
       let worst: number = Infinity;
       let who: Role | null = null;
-      for (const t of e.temperatures) {
+      for (let k = 0; k < e.temperatures.length; k++) {
+        const t = e.temperatures[k]!;
         if (t.marginK < worst) {
           worst = t.marginK;
           who = t.part;

@@ -1,10 +1,11 @@
 /**
  * Load sweep: the design evaluated, fully electro-thermally, at every load of an axis (default 200 points
  * from 1 % to 120 % of rated load, logarithmic spacing), with the input voltage, ambient and switching
- * frequency held. Each point is reduced to a compact record (see point-record.ts).
+ * frequency held. Each point is reduced to a compact record (see point-record.ts), made from the ledger's
+ * lean evaluation of the point (sweep/evaluator.ts) unless a stand-in evaluator is given.
  */
 import type { Design } from '../design/schema.ts';
-import { conditionsFor, evaluatorFor } from './evaluator.ts';
+import { conditionsFor, pointRecorder } from './evaluator.ts';
 import { ColumnBook } from './point-record.ts';
 import { axisValues, checkAxis } from './spacing.ts';
 import type { LoadSweep, LoadSweepOptions, OptionProblem, SweepSpacing } from './types.ts';
@@ -56,12 +57,10 @@ export function sweepLoad(design: Design, options: LoadSweepOptions = {}): LoadS
   const problems = checkLoadSweepOptions(design, options);
   if (problems.length > 0) throw new RangeError(problems.map((p) => p.message).join(' '));
   const axis = resolveAxis(design, options);
-  const evaluator = evaluatorFor(design, options.evaluator);
   const fixed = conditionsFor(design, options.conditions);
   const book = new ColumnBook();
-  const points = axisValues(axis.from, axis.to, axis.points, axis.spacing).map((loadA) =>
-    book.record(evaluator(design, { ...fixed, loadA })),
-  );
+  const record = pointRecorder(design, book, options.evaluator);
+  const points = axisValues(axis.from, axis.to, axis.points, axis.spacing).map((loadA) => record({ ...fixed, loadA }));
   return {
     designName: design.name,
     ratedLoadA: design.spec.ratedLoadA,

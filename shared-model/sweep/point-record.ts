@@ -1,10 +1,40 @@
 /**
- * Compact per-point records for sweeps: an Evaluation reduced to numbers aligned with shared columns.
+ * Compact per-point records for sweeps: an Evaluation (or the ledger's lean evaluation of the same point,
+ * which carries the same numbers and warnings) reduced to numbers aligned with shared columns.
  * Columns are discovered as points arrive (a mechanism may appear only in some modes); `finish` pads the
  * earlier points so every array has the final column count (an absent loss term is 0 W).
  */
-import type { Evaluation } from '../ledger/types.ts';
+import type { Role, TouchLimitRow } from '../design/schema.ts';
+import type { Mechanism, TemperatureKind } from '../ledger/types.ts';
+import type { Conditions, ConductionMode } from '../operating-point/types.ts';
+import type { Warning } from '../warnings.ts';
 import type { LossColumn, SweepColumns, SweepPoint } from './types.ts';
+
+/** What a sweep point is made from: the fields of an Evaluation it reads (a LeanEvaluation has them too). */
+export interface RecordSource {
+  conditions: Conditions;
+  converged: boolean;
+  efficiency: number;
+  totalLoss: number;
+  inputPower: number;
+  outputPower: number;
+  dutyCycle: number;
+  conductionMode: ConductionMode;
+  losses: readonly { part: Role; partName: string; mechanism: Mechanism; watts: number }[];
+  temperatures: readonly {
+    part: Role;
+    partName: string;
+    kind: TemperatureKind;
+    celsius: number;
+    limit: number;
+    marginK: number;
+    surfaceC: number;
+  }[];
+  hazards: readonly { part: Role; partName: string; row: Pick<TouchLimitRow, 'limitC' | 'id' | 'standard'>; marginK: number }[];
+  heatsinks: readonly { id: string; name: string; celsius: number }[];
+  operatingPoint: { inductor: { peakA: number; rippleA: number } };
+  warnings: Warning[];
+}
 
 export class ColumnBook {
   readonly columns: SweepColumns = { losses: [], temperatures: [], hazards: [], heatsinks: [] };
@@ -49,12 +79,12 @@ export class ColumnBook {
   }
 
   /** Reduces one evaluation to a sweep point (plain loops: this runs once per swept point). */
-  record(e: Evaluation): SweepPoint {
+  record(e: RecordSource): SweepPoint {
     const c = this.columns;
     const ambient = e.conditions.ambientC;
     const losses: number[] = zeros(c.losses.length);
     for (let k = 0; k < e.losses.length; k++) {
-      const term = e.losses[k];
+      const term = e.losses[k]!;
       const i = this.lossColumn(term.part, term.partName, term.mechanism);
       losses[i] = (losses[i] ?? 0) + term.watts;
     }
@@ -132,6 +162,7 @@ export class ColumnBook {
   finish(points: SweepPoint[]): SweepPoint[] {
     const c = this.columns;
     for (const p of points) {
+      if (isComplete(p, c)) continue; // the usual case: no padding callbacks made for it
       // A part missing from a point (never expected) reads as sitting at ambient, with no loss.
       pad(p.losses, c.losses.length, () => 0);
       pad(p.temperaturesC, c.temperatures.length, () => p.ambientC);
@@ -148,6 +179,19 @@ function zeros(n: number): number[] {
   const out = new Array<number>(n);
   for (let i = 0; i < n; i++) out[i] = 0;
   return out;
+}
+
+/** Whether every array of the point already has its column count. */
+function isComplete(p: SweepPoint, c: SweepColumns): boolean {
+  const nT = c.temperatures.length;
+  return (
+    p.losses.length >= c.losses.length &&
+    p.temperaturesC.length >= nT &&
+    p.marginsK.length >= nT &&
+    p.surfacesC.length >= nT &&
+    p.hazardMarginsK.length >= c.hazards.length &&
+    p.heatsinksC.length >= c.heatsinks.length
+  );
 }
 
 function pad(values: number[], length: number, fill: (index: number) => number): void {

@@ -19,6 +19,9 @@
  * Check: P = 2 W·(1 + 0.005/K·(T − 25 °C)), θ 40 K/W, Ta 25 °C → 158.3333 °C, gain 0.4; θ 100 K/W → runaway.
  */
 import { networkTemperatures, type ThermalNetwork } from './network.ts';
+import { ThermalWork } from './work.ts';
+
+export { ThermalWork } from './work.ts';
 
 /** Temperatures above a part's limit by more than this are outside every model: runaway. */
 export const RUNAWAY_BAND_K = 100;
@@ -62,7 +65,8 @@ export interface ElectroThermalSolution {
 export type LossAt = (temps: Float64Array, powers: Float64Array, slopes: Float64Array, residualK: number) => boolean | void;
 
 /**
- * Solves T = Ta + Θ·P(T); `ceilingC[i]` is node i's runaway ceiling (its limit + RUNAWAY_BAND_K).
+ * Solves T = Ta + Θ·P(T); `ceilingC[i]` is node i's runaway ceiling (its limit + RUNAWAY_BAND_K). With a
+ * reused `work` (work.ts), the solution and its arrays are the workspace's, valid until its next solve.
  */
 export function solveElectroThermal(
   net: ThermalNetwork,
@@ -70,26 +74,19 @@ export function solveElectroThermal(
   ceilingC: Float64Array,
   lossAt: LossAt,
   options: ElectroThermalOptions = {},
+  work: ThermalWork = new ThermalWork(net.size, net.sinkKPerW.length),
 ): ElectroThermalSolution {
   const n = net.size;
   const m = net.sinkKPerW.length;
   const tol = options.toleranceK ?? 1e-6;
   const maxIterations = Math.max(2, options.maxIterations ?? 60);
-  const T = new Float64Array(n).fill(ambientC);
-  const P = new Float64Array(n);
-  const image = new Float64Array(n);
-  const sinkT = new Float64Array(m);
-  const F = new Float64Array(n);
-  const g = new Float64Array(n);
-  const d = new Float64Array(n);
-  const prevT = new Float64Array(n);
-  const prevP = new Float64Array(n);
-  const gain = new Float64Array(n);
-  const groupSum = new Float64Array(m);
-  const groupF = new Float64Array(m);
-  const groupDet = new Float64Array(m);
-  const slopes = new Float64Array(n);
-  const tangent = new Uint8Array(n);
+  const { T, P, image, sinkT, F, g, d, prevT, prevP, gain, groupSum, groupF, groupDet, slopes, tangent } = work;
+  // A fresh workspace is all zeros; a reused one is reset to exactly that state.
+  T.fill(ambientC);
+  P.fill(0);
+  g.fill(0);
+  prevT.fill(0);
+  prevP.fill(0);
   let suspect = -1;
   let innerOk = true;
   let iterations = 0;
@@ -197,7 +194,7 @@ export function solveElectroThermal(
     iterations++;
   }
 
-  const temperatures = new Float64Array(n);
+  const temperatures = work.temperatures;
   if (runawayNode >= 0) {
     networkTemperatures(net, ambientC, P, temperatures, sinkT);
     for (let i = 0; i < n; i++) temperatures[i] = Math.min(temperatures[i]!, ceilingC[i]!);
@@ -205,18 +202,13 @@ export function solveElectroThermal(
   } else {
     networkTemperatures(net, ambientC, P, temperatures, sinkT);
   }
-  return {
-    converged: converged && runawayNode < 0,
-    iterations,
-    evaluatedC: T,
-    powersW: P,
-    temperaturesC: temperatures,
-    sinkTemperaturesC: sinkT,
-    residualK: residual,
-    loopGain: gain,
-    runawayNode,
-    runawayReason,
-  };
+  const sol = work.solution;
+  sol.converged = converged && runawayNode < 0;
+  sol.iterations = iterations;
+  sol.residualK = residual;
+  sol.runawayNode = runawayNode;
+  sol.runawayReason = runawayReason;
+  return sol;
 }
 
 function argMaxAbs(x: Float64Array): number {

@@ -72,3 +72,11 @@ export function surfaceTemperature(net: ThermalNetwork, i: number, tempC: number
   if (s >= 0) return sinkTemps[s]!;
   return tempC - net.surfaceDropKPerW[i]! * powerW;
 }
+
+/**
+ * surfaceTemperature of node i with its temperature and dissipation read from the network's arrays
+ * (numbers stay in the arrays: no call boundary to box them on the heap in a loop over many points).
+ */
+export function surfaceTemperatureAt(net: ThermalNetwork, i: number, temps: Float64Array, powers: Float64Array, sinkTemps: Float64Array): number {
+  return surfaceTemperature(net, i, temps[i]!, powers[i]!, sinkTemps);
+}

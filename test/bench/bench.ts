@@ -9,6 +9,12 @@
  *      fixed at the converged temperatures, against (a) the cycle-by-cycle simulation
  *      (test/reference/cycle-by-cycle.ts, the target's reference) and (b) the shooting steady state
  *      (test/reference/steady-state.ts), both driven at the analytic duty, rated load
+ *   5. ms per 200-point load sweep with every landmark refined on the engine (one keystroke's engine work,
+ *      issue 5), in this process and in a child with a 1 MB semi-space (node --max-semi-space-size=1, the
+ *      garbage-collection cost headless Chromium showed)                    target ≤ 5 ms each
+ *   6. KB allocated per swept point and per sweep+landmarks (V8 sampling heap profiler, see
+ *      sweep-budget.ts)                            target ≤ 4 KB per point (a sweep+landmarks of about 260
+ *      evaluations then allocates less than the child's 1 MB semi-space: at most one scavenge per keystroke)
  * Extra lines: landmark refinement cost, and per-design point times. A benchmark, not a timed test.
  * Options: --quick (fewer runs), --wall (rank by wall-clock time instead of CPU time).
  * `npm run bench` bundles this file with esbuild and runs it with plain node: tsx's on-the-fly transform
@@ -31,6 +37,13 @@ import type { Design } from '../../shared-model/index.ts';
 import { engineConductionLosses } from '../reference/compare.ts';
 import { simulateCycles } from '../reference/cycle-by-cycle.ts';
 import { referenceSteadyState, type ReferenceResult } from '../reference/steady-state.ts';
+import {
+  CHILD_SEMI_SPACE_MB,
+  sampledBytesPerCall,
+  sweepWithLandmarks,
+  timeInSmallYoungGeneration,
+  YOUNG_CHILD_FLAG,
+} from './sweep-budget.ts';
 
 const quick = process.argv.includes('--quick');
 const wallClock = process.argv.includes('--wall');
@@ -84,6 +97,15 @@ const line = (text: string) => console.log(text);
 
 const ids = DEMO_DESIGNS.map((d) => d.id);
 const main = design('synchronous-buck');
+/** Calls per timed run of a sweep+landmarks: its time varies with the scavenges that fall in it. */
+const KEYSTROKE_REPEAT = 10;
+
+// The child of line 5 (small young generation): time the sweep+landmarks only, print it and stop.
+if (process.argv.includes(YOUNG_CHILD_FLAG)) {
+  const t = time(() => sweepWithLandmarks(main), RUNS, KEYSTROKE_REPEAT);
+  console.log(`young-child:${JSON.stringify({ cpuMs: t.cpuMs, wallMs: t.wallMs })}`);
+  process.exit(0);
+}
 const loads = Array.from({ length: 100 }, (_, i) => main.spec.ratedLoadA * (0.1 + (1.1 * i) / 99));
 
 // 1. One converged point.
@@ -208,5 +230,33 @@ if (!Number.isFinite(sink)) line('(sink)');
 const sweep = sweepLoad(main);
 const landmarkT = time(() => void findLandmarks(sweep, { design: main }), RUNS);
 line(`landmarks: ${both(landmarkT, 1, 'ms', 2)} to refine all landmarks of a 200-point sweep on the engine (synchronous-buck)`);
+
+// 5. One keystroke's engine work: sweep + refined landmarks, here and with a 1 MB semi-space.
+const keystroke = time(() => sweepWithLandmarks(main), RUNS, KEYSTROKE_REPEAT);
+line(
+  `sweep+landmarks: ${both(keystroke, 1, 'ms', 2)} per 200-point load sweep with every landmark refined (synchronous-buck, ` +
+    `mean of ${KEYSTROKE_REPEAT} calls, median of ${RUNS} runs; target ≤ 5 ms: ${verdict(keystroke.ms <= 5)})`,
+);
+const child = timeInSmallYoungGeneration(process.argv[1]!, process.argv.slice(2));
+if (typeof child === 'string') line(`sweep+landmarks, small young generation: ${child}`);
+else {
+  const ms = wallClock ? child.wallMs : child.cpuMs;
+  line(
+    `sweep+landmarks, small young generation: ${ms.toFixed(2)} ms (${wallClock ? 'wall' : 'CPU'}; ${wallClock ? 'CPU' : 'wall'} ` +
+      `${(wallClock ? child.cpuMs : child.wallMs).toFixed(2)} ms) in a child node --max-semi-space-size=${CHILD_SEMI_SPACE_MB} ` +
+      `(same figure; target ≤ 5 ms: ${verdict(ms <= 5)})`,
+  );
+}
+
+// 6. Allocation.
+const sweepBytes = await sampledBytesPerCall(() => void sweepLoad(main), quick ? 5 : 40);
+const keystrokeBytes = await sampledBytesPerCall(() => sweepWithLandmarks(main), quick ? 5 : 40);
+const perPointKB = sweepBytes / 200 / 1024;
+line(
+  `allocation: ${perPointKB.toFixed(2)} KB per swept point (200-point sweep ${(sweepBytes / 1024).toFixed(0)} KB), ` +
+    `${(keystrokeBytes / 1024).toFixed(0)} KB per sweep+landmarks (synchronous-buck; V8 sampling heap profiler, 64 B interval, ` +
+    `objects collected by minor and major GC included: an estimate; target ≤ 4 KB per point: ${verdict(perPointKB <= 4)})`,
+);
+
 const loadAverage = (await import('node:os')).loadavg()[0];
 line(`machine: load average ${loadAverage.toFixed(1)} on ${(await import('node:os')).cpus().length} cores while measuring (CPU time is the figure; wall time shows the contention)`);

@@ -9,7 +9,7 @@ import { describe, expect, it } from 'vitest';
 import { nominalConditions, solveOperatingPoint, validateDesign } from '../../../shared-model/index.ts';
 import { conductionAt, fillLosses, ledgerContext } from '../../../shared-model/ledger/kernel.ts';
 import { jointLoop } from '../../../shared-model/ledger/joint-loop.ts';
-import { leanPointAt, newLeanPoint, rippleSquaresOf, rippleSquaresOfLean } from '../../../shared-model/ledger/point-view.ts';
+import { leanPointAt, newLeanPoint, newRippleSquares, rippleSquaresOf, rippleSquaresOfLean } from '../../../shared-model/ledger/point-view.ts';
 import { circuitOf } from '../../../shared-model/operating-point/circuit.ts';
 import { newShape, shapeAt } from '../../../shared-model/operating-point/shape.ts';
 import { buildOperatingPoint } from '../../../shared-model/operating-point/assemble.ts';
@@ -45,8 +45,8 @@ describe('lean point view', () => {
           closeTo(lean.stats[b].rmsA, op.stats[b].rmsA, 1e-12, 1e-13 * scale, { branch: b }); // same exact segment integrals (waveform/stats.ts)
         }
         closeTo(lean.stats.rectifier.averageA, op.stats.rectifier.averageA, 1e-12, 1e-13 * scale);
-        const a = rippleSquaresOfLean(lean, { switch: 0, rectifier: 0, inductor: 0, inputCapacitor: 0, outputCapacitor: 0, sense: 0 });
-        const b = rippleSquaresOf(op, { switch: 0, rectifier: 0, inductor: 0, inputCapacitor: 0, outputCapacitor: 0, sense: 0 });
+        const a = rippleSquaresOfLean(lean, newRippleSquares());
+        const b = rippleSquaresOf(op, newRippleSquares());
         for (const k of Object.keys(a) as (keyof typeof a)[]) closeTo(a[k], b[k], 1e-12, 1e-15 * scale * scale, { branch: k });
       }),
       { seed: SEED, numRuns: 150 },

@@ -1,0 +1,133 @@
+/**
+ * The steps every evaluation shares, whether it builds the full Evaluation record (evaluate.ts) or a
+ * sweep's lean record (lean-evaluate.ts):
+ *   solvePoint: conditions checked, the electro-thermal fixed point solved by the joint loop, the final
+ *     point filled (the solver's record, or its lean summary), node temperatures recomputed from exactly
+ *     the losses the ledger shows (they differ from the loop's by rounding only);
+ *   settlePoint: Σ terms, input power (Vin · source current; where the solver could not balance power,
+ *     output + Σ terms with a model-limit warning), and every warning in its order — operating point,
+ *     network, power balance, runaway or not converged, ratings, burn hazards, model notes.
+ * The two records differ only in what they keep, never in a number or a warning (test:
+ * test/shared-model/sweep/lean-point.test.ts).
+ */
+import type { Conditions } from '../operating-point/types.ts';
+import type { Warning } from '../warnings.ts';
+import { nominalConditions } from '../operating-point/conditions.ts';
+import { solveElectroThermal, type ElectroThermalOptions, type ElectroThermalSolution } from '../thermal/fixed-point.ts';
+import { networkTemperatures } from '../thermal/network.ts';
+import type { LedgerContext } from './kernel.ts';
+import { jointLoop, type JointLoop } from './joint-loop.ts';
+import { burnHazards, touchPicks, type TouchPick } from './hazards.ts';
+import { ratingChecks } from './checks.ts';
+import { modelNotes, runawayWarning } from './notes.ts';
+import type { PointSummary } from './point-view.ts';
+import type { Hazard, PartTemperature, RatingCheck } from './types.ts';
+
+/** Electro-thermal convergence: |Ta + Θ·P(T) − T| ≤ this for every part, K (reported temperatures are Ta + Θ·P exactly). */
+export const DEFAULT_TOLERANCE_K = 1e-4;
+
+/** Relative tolerance of the power balance the record promises. */
+export const POWER_BALANCE_RTOL = 1e-9;
+
+/** Impossible conditions are a programmer error (the caller validates user input): RangeError, as the solver. */
+function checkConditions(c: Conditions): void {
+  const bad = (name: string, value: number, rule: string) => {
+    throw new RangeError(`conditions.${name} = ${value}: must be a finite number ${rule}`);
+  };
+  if (!(Number.isFinite(c.vinV) && c.vinV > 0)) bad('vinV', c.vinV, '> 0');
+  if (!(Number.isFinite(c.loadA) && c.loadA >= 0)) bad('loadA', c.loadA, '≥ 0');
+  if (!(Number.isFinite(c.switchingFrequencyHz) && c.switchingFrequencyHz > 0)) bad('switchingFrequencyHz', c.switchingFrequencyHz, '> 0');
+  if (!(Number.isFinite(c.ambientC) && c.ambientC >= -273.15)) bad('ambientC', c.ambientC, '≥ −273.15');
+}
+
+export interface SolvedPoint<P extends PointSummary> {
+  cond: Conditions;
+  /** The context's thermal workspace: valid until the context's next evaluation. */
+  sol: ElectroThermalSolution;
+  op: P;
+}
+
+/**
+ * Solves the point at `conditions` (nominal with overrides) and fills its final point with `final`
+ * (the loop's finalPoint for the record, finalSummary for a sweep); see the header.
+ */
+export function solvePoint<P extends PointSummary>(
+  ctx: LedgerContext,
+  conditions: Partial<Conditions> | undefined,
+  options: ElectroThermalOptions | undefined,
+  final: (loop: JointLoop, T: Float64Array) => P,
+): SolvedPoint<P> {
+  const cond = nominalConditions(ctx.design, conditions);
+  checkConditions(cond);
+  ctx.vinV = cond.vinV;
+  ctx.frequencyHz = cond.switchingFrequencyHz;
+  const net = ctx.net;
+  const loop = jointLoop(ctx, cond);
+  const tolerance = { toleranceK: options?.toleranceK ?? DEFAULT_TOLERANCE_K, maxIterations: options?.maxIterations };
+  const sol = solveElectroThermal(net.network, cond.ambientC, ctx.ceilingC, loop.lossAt, tolerance, ctx.work.thermal);
+  // The final point at the final temperatures; the kernel is refilled on it, so the temperatures are
+  // recomputed from exactly the losses the ledger shows (they differ from the loop's by rounding only).
+  const op = final(loop, sol.evaluatedC);
+  sol.powersW.set(ctx.nodePowerW);
+  if (sol.runawayNode < 0) networkTemperatures(net.network, cond.ambientC, sol.powersW, sol.temperaturesC, sol.sinkTemperaturesC);
+  return { cond, sol, op };
+}
+
+/** The touch-limit rows of the context's design (made once per context). */
+export function picksOf(ctx: LedgerContext): TouchPick[] {
+  ctx.touchPicks ??= touchPicks(ctx.design, ctx.net);
+  return ctx.touchPicks;
+}
+
+/** What settlePoint keeps: the full record's lists, or (a sweep) only the hazard margins. */
+export interface SettleTarget {
+  totalLoss: number;
+  inputPower: number;
+  /** The full record's rating checks and hazards, or null (a sweep: warnings only). */
+  checks: RatingCheck[] | null;
+  hazards: Hazard[] | null;
+  /** With hazards null: one record per touch pick receiving its margin, and a scratch check record. */
+  hazardMargins?: { marginK: number }[];
+  scratch?: RatingCheck;
+}
+
+/**
+ * Σ terms, input power and the warnings after the operating point's own (see header), appended to
+ * `warnings`; temps: the point's PartTemperature records (node order).
+ */
+export function settlePoint(
+  ctx: LedgerContext,
+  point: SolvedPoint<PointSummary>,
+  temps: readonly PartTemperature[],
+  warnings: Warning[],
+  into: SettleTarget,
+): void {
+  const { cond, sol, op } = point;
+  const net = ctx.net;
+  // The network's warnings belong to the context (shared by its evaluations): copied into each record.
+  for (let i = 0; i < net.warnings.length; i++) warnings.push({ ...net.warnings[i]! });
+  const slots = ctx.slots.all;
+  let totalLoss = 0;
+  for (let i = 0; i < slots.length; i++) totalLoss += slots[i]!.watts;
+  const outputPower = op.outputPowerW;
+  let inputPower = cond.vinV * op.waveforms.inputA;
+  if (!(Math.abs(inputPower - (outputPower + totalLoss)) <= POWER_BALANCE_RTOL * Math.max(inputPower, 1e-300))) {
+    inputPower = outputPower + totalLoss;
+    warnings.push({
+      code: 'model-limit', severity: 'caution',
+      message: 'The operating point could not balance power at this duty cycle (see the regulation warnings); the input power shown is output power plus the ledger\'s losses.',
+    });
+  }
+  if (sol.runawayNode >= 0) warnings.push(runawayWarning(net, sol));
+  else if (!sol.converged) {
+    warnings.push({
+      code: 'not-converged', severity: 'caution',
+      message: `The electro-thermal iteration stopped after ${sol.iterations} steps ${sol.residualK.toPrecision(2)} K from a fixed point; treat the temperatures as approximate.`,
+    });
+  }
+  ratingChecks(ctx.design, op, temps, warnings, into.checks, into.scratch);
+  burnHazards(picksOf(ctx), temps, warnings, into.hazards, into.hazardMargins);
+  modelNotes(ctx, warnings);
+  into.totalLoss = totalLoss;
+  into.inputPower = inputPower;
+}
