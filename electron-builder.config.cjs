@@ -10,6 +10,7 @@ module.exports = {
   productName: 'WattLedger',
   copyright: 'Copyright © WattLedger founding engineers',
   electronVersion: devDependencies.electron,
+  // assets/build/icon.png (1024 px, rendered from icon.svg by `npm run icon`) is the icon for every target.
   directories: { output: 'dist', buildResources: 'assets/build' },
   files: ['out/**/*', '!out/**/*.map', 'package.json'],
   extraMetadata: { main: 'out/main/main.cjs' },

@@ -176,7 +176,7 @@ export {
 export type * from './report/types.ts';
 export { REPORT_FORMAT, REPORT_VERSION } from './report/types.ts';
 export type { ReportInput } from './report/build.ts';
-export { buildReport, DEFAULT_FAMILY_POINTS } from './report/build.ts';
+export { buildReport, DEFAULT_FAMILY_POINTS, titleBlock } from './report/build.ts';
 export type { MethodSelection } from './report/methods.ts';
 export { METHOD_CATALOGUE, methodsFor } from './report/methods.ts';
 export { REPORT_CAUTIONS, SHORT_CAUTION } from './report/cautions.ts';

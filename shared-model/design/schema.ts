@@ -151,6 +151,8 @@ export const designSchema = z.object({
   format: z.literal(DESIGN_FORMAT),
   version: z.literal(DESIGN_VERSION),
   name: z.string().min(1).max(120),
+  /** The project the design belongs to (shown in the report's title block); optional. */
+  project: z.string().max(120).optional(),
   revision: z.string().max(40),
   author: z.string().max(120),
   notes: z.string().max(10000),

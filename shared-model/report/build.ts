@@ -45,6 +45,7 @@ export interface ReportInput {
   date: string;
   /** WattLedger version, supplied by the caller. */
   appVersion: string;
+  /** The project for the title block; when absent or blank, the design's own `project` field. */
   project?: string | null;
   /** Load sweep points and spacing (defaults: the engine's sweep defaults). */
   sweepPoints?: number;
@@ -62,7 +63,7 @@ export const DEFAULT_FAMILY_POINTS = 60;
 export function titleBlock(input: Pick<ReportInput, 'design' | 'documentText' | 'unsaved' | 'date' | 'appVersion' | 'project'>): TitleBlock {
   const d = input.design;
   return {
-    project: input.project?.trim() ? input.project.trim() : null,
+    project: input.project?.trim() || d.project?.trim() || null,
     designName: d.name,
     revision: d.revision,
     author: d.author,

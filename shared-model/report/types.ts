@@ -18,7 +18,7 @@ export const REPORT_FORMAT = 'wattledger.report';
 export const REPORT_VERSION = 1;
 
 export interface TitleBlock {
-  /** The project the design belongs to (given by the user; null when not stated). */
+  /** The project the design belongs to (the design's `project` field or the caller's; null when not stated). */
   project: string | null;
   designName: string;
   revision: string;

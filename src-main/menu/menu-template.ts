@@ -99,7 +99,7 @@ export function menuTemplate(options: MenuOptions): MenuNode[] {
       command('Save', 'save', 'CmdOrCtrl+S'),
       command('Save As…', 'save-as', 'CmdOrCtrl+Shift+S'),
       separator,
-      command('Export Report…', 'export-report', 'CmdOrCtrl+Shift+E'),
+      command('Export Report as HTML…', 'export-report', 'CmdOrCtrl+Shift+E'),
       command('Print Report to PDF…', 'print-report', 'CmdOrCtrl+P'),
       separator,
       ...(mac ? [{ label: 'Close Window', role: 'close', accelerator: 'Command+W' } satisfies MenuNode] : [quitItem]),

@@ -3,7 +3,8 @@
  * screen, then updated in place (`chart.update('none')`, never re-created) on every change of its
  * inputs while on screen; a chart scrolled out of view keeps only its newest configuration and draws
  * it when it comes back (or when the page prints). Recoloured when the theme changes; destroyed with
- * the component.
+ * the component. An `eager` chart (the one at the top of the first screen) draws its first configuration
+ * at once instead of waiting a frame for the visibility check, which puts it on screen sooner at start-up.
  */
 import { onDestroy } from 'svelte';
 import type { Chart as ChartJs, ChartConfiguration } from 'chart.js';
@@ -16,7 +17,11 @@ export interface ChartHandle {
   png(): Promise<Blob> | null;
 }
 
-export function useChart(canvas: () => HTMLCanvasElement | undefined, build: (palette: ChartPalette) => ChartConfiguration): ChartHandle {
+export function useChart(
+  canvas: () => HTMLCanvasElement | undefined,
+  build: (palette: ChartPalette) => ChartConfiguration,
+  eager = false,
+): ChartHandle {
   let chart: ChartJs | null = null;
   let pending: ChartConfiguration | null = null;
   let onScreen = false;
@@ -52,7 +57,7 @@ export function useChart(canvas: () => HTMLCanvasElement | undefined, build: (pa
       });
       observer.observe(target);
     }
-    if (onScreen || !observer) {
+    if (onScreen || !observer || (eager && !chart)) {
       pending = null;
       draw(target, config);
     } else pending = config;

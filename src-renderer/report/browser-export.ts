@@ -10,7 +10,7 @@ export function fileStem(name: string): string {
 }
 
 export async function browserExport(request: ExportRequest): Promise<SaveOutcome> {
-  const type = request.extensions.includes('png') ? 'image/png' : request.extensions.includes('csv') ? 'text/csv' : 'text/plain';
+  const type = request.extensions.includes('png') ? 'image/png' : request.extensions.includes('csv') ? 'text/csv' : request.extensions.includes('html') ? 'text/html' : 'text/plain';
   const body = request.encoding === 'base64' ? Uint8Array.from(atob(request.content), (c) => c.charCodeAt(0)) : request.content;
   const url = URL.createObjectURL(new Blob([body], { type }));
   try {

@@ -1,9 +1,9 @@
 /**
  * Everything the results area computes for the last valid design at the chosen load and Vin:
  * - the full evaluation at that point, synchronously on every change (the engine's evaluate);
- * - the 200-point load sweep with its landmarks: synchronously while that stays inside the speed
- *   budget, otherwise in the engine worker; the measured time of the single evaluation, of each worker
- *   sweep and of each sweep done here decide which; newest request wins;
+ * - the 200-point load sweep with its landmarks: here, in the keystroke's own task, while the median of
+ *   the last three sweeps stays within SYNC_SWEEP_BUDGET_MS, otherwise in the engine worker (the rule is
+ *   in sweep-pace.ts); newest request wins;
  * - the Vin family, frequency sweep, load × Vin (or × fs) grid, worst-case corners, Monte Carlo and
  *   part comparison, always in a worker, and only while the section that shows them is on screen (or
  *   on request). Two workers: the load sweep never waits behind a grid or a Monte Carlo.
@@ -15,6 +15,7 @@ import {
   DEFAULT_MONTE_CARLO_SAMPLES,
   DEFAULT_MONTE_CARLO_SEED,
   evaluate,
+  evaluatorFor,
   findLandmarks,
   partInRole,
   sweepLoad,
@@ -42,11 +43,17 @@ import type { Workspace } from '../state/workspace.svelte.ts';
 import { startEngineWorker, type EngineClient } from '../workers/engine-client.ts';
 import type { GridQuantity } from './frequency-data.ts';
 import { JobSlot } from './job-slot.svelte.ts';
+import { SweepPace } from './sweep-pace.ts';
 
-/** A sweep computed here must finish within this time to keep the keystroke-to-chart path under 50 ms. */
-export const SYNC_SWEEP_BUDGET_MS = 20;
-/** Evaluations in one sweep with its landmarks: 200 points and about 60 for the refined searches. */
-const SWEEP_EVALUATIONS = 260;
+/**
+ * Sweeps run here while their recent median stays within this time. Here, the chart follows a keystroke
+ * in the same task; through the worker it waits for the round trip and for the page's own work on the
+ * keystroke (50–100 ms measured on a 2-core machine), so the worker is only for sweeps too long to run
+ * here without holding up typing.
+ */
+export const SYNC_SWEEP_BUDGET_MS = 40;
+/** Sweeps run after start-up to compile the engine and chart code before the first keystroke. */
+export const WARM_UP_ROUNDS = 4;
 
 export type EvaluationOutcome = { ok: true; evaluation: Evaluation; ms: number } | { ok: false; message: string };
 export interface SweepResult {
@@ -77,6 +84,8 @@ export class LiveResults {
   distribution: MonteCarloDistribution = $state('uniform');
   compareRole: Role = $state('switch');
   compareParts: string[] = $state.raw([]);
+  /** Milliseconds the page's first load sweep took (cold: the engine code not yet compiled), for the speed note. */
+  firstSweepMs: number | null = $state(null);
   /** How the last load sweep was computed, for the speed note. */
   sweepMode: 'worker' | 'here' = $state('worker');
 
@@ -92,6 +101,8 @@ export class LiveResults {
 
   design: Design = $derived(this.#workspace().doc.lastValid);
   conditions = $derived(conditionsFor(this.design, { loadA: this.#workspace().results.loadA, vinV: this.#workspace().results.vinV }));
+  /** The chosen load as a number: charts that mark it redraw only when it moves, not on every edit. */
+  chosenLoadA = $derived(this.conditions.loadA);
   evaluation: EvaluationOutcome = $derived.by(() => {
     const t0 = performance.now();
     try {
@@ -103,7 +114,8 @@ export class LiveResults {
 
   #quick: EngineClient | null = null;
   #heavy: EngineClient | null = null;
-  #syncSweep = false;
+  #pace = new SweepPace(SYNC_SWEEP_BUDGET_MS);
+  #warmed = false;
 
   constructor(ws: Workspace) {
     this.ws = ws;
@@ -140,18 +152,18 @@ export class LiveResults {
   requestSweep(): void {
     const key: SweepKey = { design: this.design, vinV: this.conditions.vinV, spacing: this.loadScale, knee: this.kneeThresholdPoints };
     const options = this.sweepOptions();
-    // The evaluation at the chosen load was just timed: if 260 of them fit the budget, sweep here.
-    const single = untrack(() => this.evaluation);
-    if (!this.#syncSweep && single.ok && single.ms * SWEEP_EVALUATIONS <= SYNC_SWEEP_BUDGET_MS) this.#syncSweep = true;
-    if (this.#syncSweep) {
+    if (this.#pace.here()) {
       const t0 = performance.now();
       try {
-        const sweep = sweepLoad(key.design, options);
-        const landmarks = findLandmarks(sweep, { kneeThresholdPoints: key.knee, design: key.design });
+        // One per-design set-up serves the sweep and the landmark searches.
+        const evaluator = evaluatorFor(key.design);
+        const sweep = sweepLoad(key.design, { ...options, evaluator });
+        const landmarks = findLandmarks(sweep, { kneeThresholdPoints: key.knee, design: key.design, evaluator });
         const ms = performance.now() - t0;
         this.sweep.set(key, { sweep, landmarks }, ms);
-        // Back to the worker only when clearly over budget (not on one slow sweep near the line).
-        if (ms > 1.5 * SYNC_SWEEP_BUDGET_MS) this.#syncSweep = false;
+        // The page's first sweep also compiles the engine: it says nothing about the speed of the next.
+        if (this.firstSweepMs === null) this.firstSweepMs = ms;
+        else this.#pace.record(ms, 'here');
         this.sweepMode = 'here';
       } catch (error) {
         this.sweep.fail(`The load sweep failed: ${(error as Error).message}`);
@@ -163,9 +175,26 @@ export class LiveResults {
       .then((outcome) => {
         if (outcome?.status !== 'done') return;
         this.sweepMode = 'worker';
-        // The worker's own time decides whether the next sweep may run here.
-        if (outcome.elapsedMs <= SYNC_SWEEP_BUDGET_MS) this.#syncSweep = true;
+        this.#pace.record(outcome.elapsedMs, 'worker');
       });
+  }
+
+  /**
+   * Runs the live sweep (and so the efficiency chart's update) a few more times while the page is idle
+   * after start-up: the first runs of any JavaScript are several times slower than later ones, and
+   * without this the first keystrokes would pay for compiling the engine and the chart code. Each round
+   * waits for an idle moment, so typing is never held up; once per page.
+   */
+  warmUp(rounds = WARM_UP_ROUNDS): void {
+    if (this.#warmed) return;
+    this.#warmed = true;
+    const idle = (next: () => void) => (typeof requestIdleCallback === 'function' ? requestIdleCallback(next, { timeout: 1000 }) : setTimeout(next, 30));
+    const round = (left: number) => {
+      if (left <= 0 || !this.#pace.here()) return;
+      untrack(() => this.requestSweep());
+      idle(() => round(left - 1));
+    };
+    idle(() => round(rounds));
   }
 
   /** At the design's nominal conditions (the worker's figures job takes the design only). */

@@ -57,12 +57,14 @@ export function connectShell(ws: Workspace, isMac: boolean, onDragState: (draggi
 }
 
 /**
- * A menu command or shortcut. Both report commands show the report screen and print it there (a PDF file
- * through DesktopApi.printToPdf in Electron, the browser's print dialog otherwise): the report screen is
- * what prints, since its print rules hide the rest of the app.
+ * A menu command or shortcut. The report commands show the report screen and act there once the report
+ * is built: "print" prints it (a PDF file through DesktopApi.printToPdf in Electron, the browser's print
+ * dialog otherwise — the report screen's print rules hide the rest of the app); "export" saves it as one
+ * self-contained HTML file.
  */
 function dispatch(ws: Workspace, command: MenuCommand): void {
-  if (command === 'print-report' || command === 'export-report') ws.requestReportPrint();
+  if (command === 'print-report') ws.requestReport('print');
+  else if (command === 'export-report') ws.requestReport('html');
   else void runCommand(ws, command);
 }
 

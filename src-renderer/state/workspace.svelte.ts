@@ -21,6 +21,9 @@ export interface RecoveryOffer {
   savedAt: string;
 }
 
+/** What a menu report command asks of the report screen. */
+export type ReportRequest = 'print' | 'html';
+
 export class Workspace {
   readonly files: FileAccess;
   readonly demoDesign: Design;
@@ -31,8 +34,8 @@ export class Workspace {
   readonly theme = new ThemeState();
   screen: Screen = $state('design');
   recoveryOffer: RecoveryOffer | null = $state(null);
-  /** Set by the menu's print/export report commands; the report screen prints once its report is shown. */
-  reportPrintPending = $state(false);
+  /** Set by the menu's report commands; the report screen prints or saves once its report is shown. */
+  reportRequest: ReportRequest | null = $state(null);
   /** Parts set aside by rectifier or sense-resistor switches, restored when switching back. */
   stash: PartStash = {};
 
@@ -44,10 +47,13 @@ export class Workspace {
     this.library = new PartLibrary(demoParts);
   }
 
-  /** Shows the report screen and asks it to print the report (to a PDF in Electron) once it is built. */
-  requestReportPrint(): void {
+  /**
+   * Shows the report screen and asks it, once the report is built, to print it (to a PDF in Electron,
+   * the print dialog in a browser) or to save it as one self-contained HTML file.
+   */
+  requestReport(request: ReportRequest): void {
     this.screen = 'report';
-    this.reportPrintPending = true;
+    this.reportRequest = request;
   }
 }
 

@@ -10,6 +10,7 @@ import {
   checkTolerances,
   compareParts,
   figuresOfMerit,
+  evaluatorFor,
   findLandmarks,
   rankParts,
   sweepFamilies,
@@ -35,8 +36,10 @@ export function runJob(request: Extract<EngineRequest, { type: 'run' }>): JobRes
         const { design, options = {}, landmarks = {} } = request.input;
         const problems = checkLoadSweepOptions(design, options);
         if (problems.length > 0) return refused(problems);
-        const sweep = sweepLoad(design, options);
-        return { ok: true, output: { sweep, landmarks: findLandmarks(sweep, { ...landmarks, design }) } };
+        // One per-design set-up serves the sweep and the landmark searches.
+        const evaluator = evaluatorFor(design);
+        const sweep = sweepLoad(design, { ...options, evaluator });
+        return { ok: true, output: { sweep, landmarks: findLandmarks(sweep, { ...landmarks, design, evaluator }) } };
       }
       case 'families': {
         const { design, options = {} } = request.input;

@@ -9,7 +9,7 @@
  * CSP violation.
  */
 import { execFileSync } from 'node:child_process';
-import { mkdirSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
@@ -119,6 +119,49 @@ describe('the design-review report from the app', () => {
       { initScript: FAKE_DESKTOP_API, readySelector: 'nav[aria-label="Screens"]' },
     ));
 
+  it('saves the report as one HTML file with no script, the charts as images and the engine\'s efficiency', () =>
+    suite.run(
+      async ({ page }) => {
+        await page.getByRole('navigation', { name: 'Screens' }).getByRole('button', { name: 'Report', exact: true }).click();
+        await waitForReport(page);
+        const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Save as HTML…' }).click()]);
+        expect(download.suggestedFilename()).toMatch(/-review\.html$/);
+        const html = readFileSync(await download.path(), 'utf8');
+        mkdirSync(OUT, { recursive: true });
+        writeFileSync(join(OUT, 'app-synchronous-buck.html'), html);
+        expect(html).not.toMatch(/<script/i); // a frozen page: nothing runs when it is opened
+        expect(html).toContain(`content="default-src 'none'; img-src data:; style-src 'unsafe-inline'"`); // and its own CSP forbids scripts and outside requests
+        expect(html).not.toMatch(/<canvas/i);
+        const charts = await page.locator('.wl-report canvas').count();
+        expect(charts).toBeGreaterThan(0);
+        expect(html.match(/<img [^>]*src="data:image\/png;base64,/g)?.length).toBe(charts); // every chart of the report became an image
+        expect(html).not.toMatch(/<button/i);
+
+        // Opened on its own (no app, no server): the headings and the engine's efficiency read as in the app.
+        const view = await page.context().newPage();
+        await view.setContent(html);
+        const text = (await view.locator('body').innerText()).replace(/\s+/g, ' ');
+        const design = demoDesign();
+        expectInOrder(text, [design.name, ...HEADINGS], 'sections of the saved HTML');
+        expectInOrder(text, ['Efficiency at rated load, Vin nom', formatPercent(evaluate(design).efficiency)], 'rated efficiency in the saved HTML'); // engine evaluate() in Node, the report's own formatter
+        for (const chrome of CHROME) expect(compact(text), `app chrome "${chrome}" in the saved HTML`).not.toContain(compact(chrome));
+        await view.close();
+      },
+      { readySelector: 'nav[aria-label="Screens"]' },
+    ));
+
+  it('saves the HTML through the desktop API when the menu asks for the export, once the report is on the page', () =>
+    suite.run(
+      async ({ page }) => {
+        await page.evaluate(() => (window as unknown as { sendMenu(c: string): void }).sendMenu('export-report'));
+        await page.waitForFunction(() => (window as unknown as { exportRequests: unknown[] }).exportRequests.length > 0, null, { timeout: BUILD_TIMEOUT });
+        const requests = await page.evaluate(() => (window as unknown as { exportRequests: { suggestedName: string; extensions: string[]; encoding: string; html: boolean; reportShown: boolean }[] }).exportRequests);
+        expect(requests).toEqual([{ suggestedName: expect.stringMatching(/-review\.html$/), extensions: ['html'], encoding: 'utf8', html: true, reportShown: true }]); // one save, after .wl-report exists
+        expect(await page.evaluate(() => (window as unknown as { pdfRequests: unknown[] }).pdfRequests)).toEqual([]); // the export does not print
+      },
+      { initScript: FAKE_DESKTOP_API, readySelector: 'nav[aria-label="Screens"]' },
+    ));
+
   it('prints with the browser\'s print dialog on Ctrl+P in browser mode, once the report is on the page', () =>
     suite.run(
       async ({ page }) => {
@@ -136,6 +179,7 @@ const FAKE_DESKTOP_API = `
   (() => {
     const menu = [];
     window.pdfRequests = [];
+    window.exportRequests = [];
     window.sendMenu = (command) => menu.forEach((listener) => listener(command));
     const saved = (name) => Promise.resolve({ ok: true, path: '/fake/' + name, name });
     window.wattledger = {
@@ -144,7 +188,10 @@ const FAKE_DESKTOP_API = `
       openRecent: () => Promise.resolve({ error: 'none' }),
       listRecent: () => Promise.resolve([]),
       saveDesign: (r) => saved(r.suggestedName),
-      exportFile: (r) => saved(r.suggestedName),
+      exportFile: (r) => {
+        window.exportRequests.push({ suggestedName: r.suggestedName, extensions: r.extensions, encoding: r.encoding, html: r.content.startsWith('<!doctype html>'), reportShown: document.querySelector('.wl-report') !== null });
+        return saved(r.suggestedName);
+      },
       printToPdf: (r) => {
         window.pdfRequests.push({ ...r, reportShown: document.querySelector('.wl-report') !== null });
         return saved(r.suggestedName);

@@ -2,6 +2,7 @@
  * electron-builder.config.cjs cannot be exercised here (packaging downloads Electron), so it is loaded
  * and validated against electron-builder's own JSON schema, and its essential fields are checked.
  */
+import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
 
@@ -38,6 +39,14 @@ describe('electron-builder.config.cjs', () => {
     expect(config.extraMetadata.main).toBe(pkg.main);
     expect(config['electronVersion']).toBe(pkg.devDependencies['electron']);
     expect(pkg.scripts['dist']).toContain('electron-builder --config electron-builder.config.cjs');
+  });
+
+  it('has an application icon where electron-builder looks for it, large enough for every platform', () => {
+    const dir = (config['directories'] as { buildResources: string }).buildResources;
+    const png = readFileSync(new URL(`../../${dir}/icon.png`, import.meta.url));
+    expect(png.subarray(1, 4).toString('latin1')).toBe('PNG'); // PNG signature (ISO/IEC 15948 §5.2)
+    // IHDR width and height, big-endian at bytes 16 and 20 (ISO/IEC 15948 §11.2.2); electron-builder asks for ≥ 512 px (macOS) [from memory]
+    expect([png.readUInt32BE(16), png.readUInt32BE(20)]).toEqual([1024, 1024]);
   });
 
   it('switches off the fuses an attacker could use', () => {

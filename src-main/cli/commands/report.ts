@@ -77,7 +77,7 @@ export const reportCommand: Command = {
       check: (v) => (v === 'A4' || v === 'Letter' ? null : `must be A4 or Letter; got "${v}".`),
     },
     { name: 'csv', kind: 'switch', help: 'Also write FILE-sweep.csv and FILE-ledger.csv.' },
-    { name: 'project', kind: 'text', placeholder: 'TEXT', help: 'Project name for the title block.' },
+    { name: 'project', kind: 'text', placeholder: 'TEXT', help: 'Project name for the title block (default: the design\'s own project field).' },
     {
       name: 'date', kind: 'text', placeholder: 'YYYY-MM-DD', help: 'Date printed on the report (default: today).',
       check: (v) => (ISO_DATE.test(v) ? null : `must be a date written YYYY-MM-DD; got "${v}".`),

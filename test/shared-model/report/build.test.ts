@@ -14,6 +14,7 @@ import {
   monteCarlo,
   partsOfKind,
   sweepLoad,
+  titleBlock,
   validatePartsLibrary,
   worstCase,
 } from '../../../shared-model/index.ts';
@@ -94,6 +95,15 @@ describe('buildReport title block', () => {
     expect(title.designHash).toBe(createHash('sha256').update(text, 'utf8').digest('hex')); // Node crypto (OpenSSL) reference
     expect([title.date, title.appVersion, title.project, title.designName, title.revision]).toEqual(['2031-01-15', '9.9.9', 'Bench kit', design.name, design.revision]);
   }, SLOW);
+
+  it('takes the project from the design when the caller gives none, the caller\'s when both do, and null when neither does', () => {
+    const design = { ...demoDesign('hot-fin-buck'), project: ' Bench kit ' };
+    const input = { documentText: '', date: '2031-01-15', appVersion: '9.9.9' };
+    expect(titleBlock({ ...input, design }).project).toBe('Bench kit'); // the design's own field, trimmed
+    expect(titleBlock({ ...input, design, project: 'Field unit' }).project).toBe('Field unit'); // the caller (the report command's --project) wins
+    expect(titleBlock({ ...input, design: { ...design, project: '   ' } }).project).toBeNull(); // blank is "not stated"
+    expect(titleBlock({ ...input, design: demoDesign('hot-fin-buck') }).project).toBeNull(); // absent (every v1 file before the field existed)
+  });
 });
 
 describe('buildReport on a design with a touch hazard', () => {
