@@ -115,6 +115,8 @@ export type {
 } from './landmarks/types.ts';
 export type { LandmarkOptions } from './landmarks/find-landmarks.ts';
 export { findLandmarks, loadProbe } from './landmarks/find-landmarks.ts';
+export type { SweepLandmarkOptions, SweepWithLandmarks } from './landmarks/sweep-with-landmarks.ts';
+export { sweepWithLandmarks } from './landmarks/sweep-with-landmarks.ts';
 export type { PeakResult } from './landmarks/peak.ts';
 export { findPeak } from './landmarks/peak.ts';
 export { DEFAULT_KNEE_THRESHOLD_POINTS, findKnee, kneeDefinition } from './landmarks/knee.ts';

@@ -14,10 +14,10 @@ import type { Design } from '../design/schema.ts';
 import { evaluate } from '../ledger/evaluate.ts';
 import type { Evaluation, Mechanism } from '../ledger/types.ts';
 import type { Comparison } from '../compare/compare-parts.ts';
-import { findLandmarks } from '../landmarks/find-landmarks.ts';
+import { sweepWithLandmarks } from '../landmarks/sweep-with-landmarks.ts';
+import type { Landmarks } from '../landmarks/types.ts';
 import { regulationCause } from '../landmarks/regulation-limit.ts';
 import { figuresOfMerit } from '../sweep/figures-of-merit.ts';
-import { sweepLoad } from '../sweep/load-sweep.ts';
 import type { LoadSweep, SweepSpacing } from '../sweep/types.ts';
 import type { MonteCarlo } from '../tolerance/monte-carlo.ts';
 import type { WorstCase } from '../tolerance/worst-case.ts';
@@ -78,7 +78,7 @@ export function titleBlock(input: Pick<ReportInput, 'design' | 'documentText' | 
 
 const usablePoint = (p: LoadSweep['points'][number]): boolean => p.converged && regulationCause(p) === null;
 
-function familyCurve(label: string, sweep: LoadSweep, landmarks: ReturnType<typeof findLandmarks>): FamilyCurve {
+function familyCurve(label: string, sweep: LoadSweep, landmarks: Landmarks): FamilyCurve {
   return {
     label,
     vinV: sweep.vinV,
@@ -137,14 +137,13 @@ export function buildReport(input: ReportInput): ReportModel {
   ];
 
   const axis = { points: input.sweepPoints, spacing: input.sweepSpacing };
-  const sweep = sweepLoad(design, { ...axis, conditions: { vinV: s.vinNomV } });
-  const landmarks = findLandmarks(sweep, { design, kneeThresholdPoints: input.kneeThresholdPoints });
+  const { sweep, landmarks } = sweepWithLandmarks(design, { ...axis, conditions: { vinV: s.vinNomV } }, { kneeThresholdPoints: input.kneeThresholdPoints });
   const figures = figuresOfMerit(design, { conditions: { vinV: s.vinNomV } });
 
   const familyPoints = input.familyPoints ?? DEFAULT_FAMILY_POINTS;
   const familyAt = (label: string, vinV: number): FamilyCurve => {
-    const member = sweepLoad(design, { points: familyPoints, spacing: input.sweepSpacing, conditions: { vinV } });
-    return familyCurve(`${label} ${vinV} V`, member, findLandmarks(member, { kneeThresholdPoints: input.kneeThresholdPoints }));
+    const member = sweepWithLandmarks(design, { points: familyPoints, spacing: input.sweepSpacing, conditions: { vinV } }, { kneeThresholdPoints: input.kneeThresholdPoints, refine: false });
+    return familyCurve(`${label} ${vinV} V`, member.sweep, member.landmarks);
   };
   const vinFamily = [
     familyAt('Vin min', s.vinMinV),

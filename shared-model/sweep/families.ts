@@ -4,10 +4,9 @@
  * Default ambients: the design's ambient and 25 K hotter — set your own.
  */
 import type { Design } from '../design/schema.ts';
-import { findLandmarks } from '../landmarks/find-landmarks.ts';
+import { sweepWithLandmarks } from '../landmarks/sweep-with-landmarks.ts';
 import type { Landmarks } from '../landmarks/types.ts';
 import { evaluatorFor } from './evaluator.ts';
-import { sweepLoad } from './load-sweep.ts';
 import type { LoadSweep, LoadSweepOptions } from './types.ts';
 
 export interface FamilyMember {
@@ -36,15 +35,10 @@ export function sweepFamilies(design: Design, options: FamilyOptions = {}): Swee
   const { ambientsC, kneeThresholdPoints, refineLandmarks = true, ...sweepOptions } = options;
   // One set-up of the design serves every sweep of the family and every landmark refinement.
   const evaluator = evaluatorFor(design, sweepOptions.evaluator);
-  const member = (label: string, conditions: LoadSweepOptions['conditions']): FamilyMember => {
-    const sweep = sweepLoad(design, { ...sweepOptions, conditions, evaluator });
-    const landmarks = findLandmarks(sweep, {
-      kneeThresholdPoints,
-      design: refineLandmarks ? design : undefined,
-      evaluator,
-    });
-    return { label, sweep, landmarks };
-  };
+  const member = (label: string, conditions: LoadSweepOptions['conditions']): FamilyMember => ({
+    label,
+    ...sweepWithLandmarks(design, { ...sweepOptions, conditions, evaluator }, { kneeThresholdPoints, refine: refineLandmarks }),
+  });
   const s = design.spec;
   const byInputVoltage = [
     member(`Vin min ${s.vinMinV} V`, { vinV: s.vinMinV }),

@@ -15,10 +15,8 @@ import {
   DEFAULT_MONTE_CARLO_SAMPLES,
   DEFAULT_MONTE_CARLO_SEED,
   evaluate,
-  evaluatorFor,
-  findLandmarks,
   partInRole,
-  sweepLoad,
+  sweepWithLandmarks,
 } from '../../shared-model/index.ts';
 import type {
   Comparison,
@@ -27,14 +25,13 @@ import type {
   FiguresOfMerit,
   FrequencySweep,
   GridAxis,
-  Landmarks,
   LoadGrid,
-  LoadSweep,
   LoadSweepOptions,
   MonteCarlo,
   MonteCarloDistribution,
   Role,
   SweepFamilies,
+  SweepWithLandmarks,
   Tolerances,
   WorstCase,
 } from '../../shared-model/index.ts';
@@ -56,10 +53,8 @@ export const SYNC_SWEEP_BUDGET_MS = 40;
 export const WARM_UP_ROUNDS = 4;
 
 export type EvaluationOutcome = { ok: true; evaluation: Evaluation; ms: number } | { ok: false; message: string };
-export interface SweepResult {
-  sweep: LoadSweep;
-  landmarks: Landmarks;
-}
+/** The live load sweep with its landmarks (the engine's record). */
+export type SweepResult = SweepWithLandmarks;
 type SweepKey = {
   design: Design;
   vinV: number;
@@ -155,12 +150,9 @@ export class LiveResults {
     if (this.#pace.here()) {
       const t0 = performance.now();
       try {
-        // One per-design set-up serves the sweep and the landmark searches.
-        const evaluator = evaluatorFor(key.design);
-        const sweep = sweepLoad(key.design, { ...options, evaluator });
-        const landmarks = findLandmarks(sweep, { kneeThresholdPoints: key.knee, design: key.design, evaluator });
+        const result = sweepWithLandmarks(key.design, options, { kneeThresholdPoints: key.knee });
         const ms = performance.now() - t0;
-        this.sweep.set(key, { sweep, landmarks }, ms);
+        this.sweep.set(key, result, ms);
         // The page's first sweep also compiles the engine: it says nothing about the speed of the next.
         if (this.firstSweepMs === null) this.firstSweepMs = ms;
         else this.#pace.record(ms, 'here');

@@ -10,13 +10,11 @@ import {
   checkTolerances,
   compareParts,
   figuresOfMerit,
-  evaluatorFor,
-  findLandmarks,
   rankParts,
   sweepFamilies,
   sweepFrequency,
   sweepGrid,
-  sweepLoad,
+  sweepWithLandmarks,
   worstCase,
   monteCarlo,
 } from '../../shared-model/index.ts';
@@ -36,10 +34,7 @@ export function runJob(request: Extract<EngineRequest, { type: 'run' }>): JobRes
         const { design, options = {}, landmarks = {} } = request.input;
         const problems = checkLoadSweepOptions(design, options);
         if (problems.length > 0) return refused(problems);
-        // One per-design set-up serves the sweep and the landmark searches.
-        const evaluator = evaluatorFor(design);
-        const sweep = sweepLoad(design, { ...options, evaluator });
-        return { ok: true, output: { sweep, landmarks: findLandmarks(sweep, { ...landmarks, design, evaluator }) } };
+        return { ok: true, output: sweepWithLandmarks(design, options, landmarks) };
       }
       case 'families': {
         const { design, options = {} } = request.input;

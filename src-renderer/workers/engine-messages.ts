@@ -12,10 +12,7 @@ import type {
   FrequencySweep,
   FrequencySweepOptions,
   GridOptions,
-  LandmarkOptions,
-  Landmarks,
   LoadGrid,
-  LoadSweep,
   LoadSweepOptions,
   MonteCarlo,
   MonteCarloOptions,
@@ -23,6 +20,8 @@ import type {
   Ranking,
   RankOptions,
   SweepFamilies,
+  SweepLandmarkOptions,
+  SweepWithLandmarks,
   WorstCase,
   WorstCaseOptions,
 } from '../../shared-model/index.ts';
@@ -32,8 +31,8 @@ type Plain<T> = Omit<T, 'evaluator'>;
 /** Input and output of every job the worker runs. */
 export interface EngineJobs {
   sweep: {
-    input: { design: Design; options?: Plain<LoadSweepOptions>; landmarks?: Pick<LandmarkOptions, 'kneeThresholdPoints'> };
-    output: { sweep: LoadSweep; landmarks: Landmarks };
+    input: { design: Design; options?: Plain<LoadSweepOptions>; landmarks?: Pick<SweepLandmarkOptions, 'kneeThresholdPoints'> };
+    output: SweepWithLandmarks;
   };
   families: { input: { design: Design; options?: Plain<FamilyOptions> }; output: SweepFamilies };
   frequency: { input: { design: Design; options?: Plain<FrequencySweepOptions> }; output: FrequencySweep };

@@ -5,7 +5,7 @@
  * CCM/DCM boundary, thermal ceiling, regulation limit — and the average-efficiency figures of merit.
  * In CSV mode the cautions go to stderr so the table stays clean.
  */
-import { checkLoadSweepOptions, figuresOfMerit, findLandmarks, formatEngineering, sweepLoad } from '../../../shared-model/index.ts';
+import { checkLoadSweepOptions, figuresOfMerit, formatEngineering, sweepWithLandmarks } from '../../../shared-model/index.ts';
 import type { LoadSweepOptions, SweepSpacing } from '../../../shared-model/index.ts';
 import { CAUTION_LINE } from '../cautions.ts';
 import type { Command } from '../command.ts';
@@ -75,8 +75,7 @@ export const sweepCommand: Command = {
       io.err(`wattledger sweep: ${problems.map((p) => `${flag(p.path)} ${JSON.stringify(p.value)} is not allowed (allowed: ${p.allowed}). ${p.message}`).join(' ')}`);
       return EXIT.usage;
     }
-    const sweep = sweepLoad(design, options);
-    const landmarks = findLandmarks(sweep, { design, kneeThresholdPoints: args.numbers['knee-points'] });
+    const { sweep, landmarks } = sweepWithLandmarks(design, options, { kneeThresholdPoints: args.numbers['knee-points'] });
     const fixed = { vinV: sweep.vinV, ambientC: sweep.ambientC };
     if (args.switches.has('csv')) {
       io.out(sweepCsv(sweep));
