@@ -8,13 +8,13 @@ import { SweepPace } from '../../../src-renderer/results/sweep-pace.ts';
 
 describe('SweepPace', () => {
   it('starts here, on the page thread', () => {
-    expect(new SweepPace(40).here()).toBe(true);
+    expect(new SweepPace(40).here()).toBe(true); // sweep-pace.ts header: our own rule (no outside source)
   });
 
   it('one slow sweep among fast ones does not move the sweep to the worker (median of three)', () => {
     const pace = new SweepPace(40);
     for (const ms of [10, 120, 12, 11, 300, 9]) pace.record(ms, 'here');
-    expect(pace.place).toBe('here');
+    expect(pace.place).toBe('here'); // sweep-pace.ts header: our own rule (no outside source)
   });
 
   it('moves to the worker when the median of the last three sweeps here exceeds the budget', () => {
@@ -37,7 +37,7 @@ describe('SweepPace', () => {
   it('comes back only when the worker is clearly fast (≤ 3/4 of the budget), not just under it', () => {
     const pace = new SweepPace(40);
     for (const ms of [80, 80, 80]) pace.record(ms, 'here');
-    expect(pace.place).toBe('worker');
+    expect(pace.place).toBe('worker'); // sweep-pace.ts header: our own rule (no outside source)
     pace.record(35, 'worker');
     expect(pace.place).toBe('worker'); // under the budget but inside the gap
     pace.record(20, 'worker');
@@ -49,10 +49,10 @@ describe('SweepPace', () => {
     const pace = new SweepPace(40);
     pace.record(5, 'worker'); // a worker answer while sweeping here says nothing about here
     for (const ms of [Number.NaN, -1, Number.POSITIVE_INFINITY]) pace.record(ms, 'here');
-    expect(pace.place).toBe('here');
+    expect(pace.place).toBe('here'); // sweep-pace.ts header: our own rule (no outside source)
     for (const ms of [90, 90, 90]) pace.record(ms, 'here');
-    expect(pace.place).toBe('worker');
+    expect(pace.place).toBe('worker'); // sweep-pace.ts header: our own rule (no outside source)
     pace.record(1, 'here'); // a sweep that finished here after the move
-    expect(pace.place).toBe('worker');
+    expect(pace.place).toBe('worker'); // sweep-pace.ts header: our own rule (no outside source)
   });
 });
