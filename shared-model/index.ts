@@ -182,7 +182,11 @@ export { buildReport, DEFAULT_FAMILY_POINTS, titleBlock } from './report/build.t
 export type { MethodSelection } from './report/methods.ts';
 export { METHOD_CATALOGUE, methodsFor } from './report/methods.ts';
 export { REPORT_CAUTIONS, SHORT_CAUTION } from './report/cautions.ts';
-export { csvField, ledgerCsv, sweepCsv } from './report/csv.ts';
+export { ledgerCsv, sweepCsv } from './report/csv.ts';
+export type { CsvCell } from './csv/write.ts';
+export { csvLines, csvNumber, csvText } from './csv/write.ts';
+export type { CsvReadProblem, CsvRow, CsvTable } from './csv/read.ts';
+export { readCsv } from './csv/read.ts';
 export { sha256, sha256Hex, utf8Bytes } from './report/sha256.ts';
 export { CHECK_LABELS, CONTACT_LABELS, describePath, ROLE_LABELS, roleLabel } from './report/labels.ts';
 export {

@@ -1,7 +1,7 @@
 /**
  * Cross-field rules of the part records.
  *   MOSFET gate charge: the plateau lies above the threshold (Vth < Vplateau) and below the drive voltage,
- *   else the gate-charge method has no gate current to switch with (Ig = (Vdrv − Vpl)/R, METHODS.md §4);
+ *   else the gate-charge method has no gate current to switch with (Ig = (Vdrv − Vpl)/R, docs/methods.md §4);
  *   Qgs + Qgd ≤ Qg and Qgs2 ≤ Qgs (Qgs2 is the part of Qgs after the threshold); one of Qgs2 or Qgs is
  *   needed to estimate the current-rise time [common practice: datasheet gate-charge curve].
  *   A two-point RDS(on) law needs its hot point above 25 °C.

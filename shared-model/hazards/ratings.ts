@@ -9,7 +9,7 @@
  * - resistor-power: dissipation ≤ derated rating · resistor derating, the rating falling linearly from
  *   full power at deratingStartC to zero at zeroPowerC (common practice, datasheet derating curve).
  * - capacitor-life: electrolytic life L = L0 · 2^((T0 − T)/10 K) at the hot-spot temperature
- *   [common practice, "10 K rule"] ≥ the required hours (METHODS.md §9: 2000 h at 105 °C → 32 000 h at
+ *   [common practice, "10 K rule"] ≥ the required hours (docs/methods.md §9: 2000 h at 105 °C → 32 000 h at
  *   65 °C). For this check the margin is (value − limit)/limit (more life is better); for all others
  *   (limit − value)/limit.
  * Each check returns a new record, or refills `into` when given (a caller that needs only the verdict of

@@ -6,7 +6,7 @@
  * any material (conservative, and the caution says so); if it has none for that contact, the strictest
  * row of the whole table. Margin = limit − surface temperature (negative: too hot to touch).
  * The table is the user's `design.thermal.customTouchLimits` when it is not empty, else the shipped one.
- * Source: METHODS.md §11 (default to the strictest row that fits the chosen contact).
+ * Source: docs/methods.md §11 (default to the strictest row that fits the chosen contact).
  */
 import type { Contact, Role, SurfaceMaterial, TouchLimitRow } from '../design/schema.ts';
 import type { Hazard } from '../ledger/types.ts';

@@ -1,7 +1,7 @@
 /**
  * The shipped table of touch-temperature limits (data the user can see, pick from and replace).
  *
- * Every value below is RECALLED, not confirmed against the printed standards (METHODS.md §11, "numbers
+ * Every value below is RECALLED, not confirmed against the printed standards (docs/methods.md §11, "numbers
  * with low confidence"): each row says so (`recalled: true`) and names its standard and clause. Users
  * must confirm the limit against the current edition of the standard that applies to their product.
  * Contact assumptions (design.thermal.contact):
@@ -12,7 +12,7 @@
  *   'surface-8h'    — up to 8 hours.
  * Sources: ISO 13732-1:2006 (burn thresholds for contact of 0.5 s and longer); IEC 60950-1 Table 4C
  * (withdrawn, superseded by IEC 62368-1); IEC 62368-1 Table 38 (TS1 touch-temperature limits, from IEC
- * Guide 117). Values from METHODS.md §11 [memory] unless the row's note says otherwise.
+ * Guide 117). Values from docs/methods.md §11 [memory] unless the row's note says otherwise.
  */
 import type { Contact, SurfaceMaterial, TouchLimitRow } from '../design/schema.ts';
 
@@ -22,9 +22,9 @@ const IEC60950 = 'IEC 60950-1 (withdrawn)';
 const T4C = 'Table 4C';
 const IEC62368 = 'IEC 62368-1';
 const T38 = 'Table 38 (TS1)';
-const FROM_METHODS = 'Recalled value (METHODS.md §11 [memory]); confirm against the current edition.';
+const FROM_METHODS = 'Recalled value (WattLedger methods §11, from memory); confirm against the current edition.';
 const FROM_MEMORY =
-  'Recalled by the WattLedger team, not listed in METHODS.md: low confidence; confirm against the current edition.';
+  'Recalled by the WattLedger team, not listed in the WattLedger methods (docs/methods.md): low confidence; confirm against the current edition.';
 
 function row(
   id: string,
@@ -39,7 +39,7 @@ function row(
 }
 
 export const TOUCH_LIMITS: readonly TouchLimitRow[] = Object.freeze([
-  // ISO 13732-1 long contact (METHODS.md §11).
+  // ISO 13732-1 long contact (docs/methods.md §11).
   row('iso13732-metal-1min', ISO, ISO_CLAUSE, 'metal', 'surface-1min', 51, FROM_METHODS),
   row('iso13732-metal-10min', ISO, ISO_CLAUSE, 'metal', 'surface-10min', 48, FROM_METHODS),
   row('iso13732-metal-8h', ISO, ISO_CLAUSE, 'metal', 'surface-8h', 43, FROM_METHODS),
@@ -49,7 +49,7 @@ export const TOUCH_LIMITS: readonly TouchLimitRow[] = Object.freeze([
   row('iso13732-plastic-8h', ISO, ISO_CLAUSE, 'plastic', 'surface-8h', 43, FROM_MEMORY),
   row('iso13732-glass-10min', ISO, ISO_CLAUSE, 'glass', 'surface-10min', 48, FROM_MEMORY),
   row('iso13732-glass-8h', ISO, ISO_CLAUSE, 'glass', 'surface-8h', 43, FROM_MEMORY),
-  // IEC 60950-1 Table 4C (METHODS.md §11): handles held briefly, held continuously, external surfaces.
+  // IEC 60950-1 Table 4C (docs/methods.md §11): handles held briefly, held continuously, external surfaces.
   row('iec60950-metal-handle-brief', IEC60950, `${T4C}, handles held or touched for short periods`, 'metal', 'brief', 60, FROM_METHODS),
   row('iec60950-glass-handle-brief', IEC60950, `${T4C}, handles held or touched for short periods`, 'glass', 'brief', 70, FROM_METHODS),
   row('iec60950-plastic-handle-brief', IEC60950, `${T4C}, handles held or touched for short periods`, 'plastic', 'brief', 85, FROM_METHODS),

@@ -6,7 +6,7 @@
  * Why this definition: it answers the question an engineer asks of a light-load curve ("from which load
  * up am I close to my best?"), uses only efficiency values (no derivative, so it is insensitive to point
  * spacing, log or linear axes and numerical noise), and has a closed form for the loss model of
- * METHODS.md §12: with P(Io) = P0 + a·Io + b·Io² and target ηt = η* − X/100, the knee is the smaller
+ * docs/methods.md §12: with P(Io) = P0 + a·Io + b·Io² and target ηt = η* − X/100, the knee is the smaller
  * root of b·Io² + (a − Vo·(1 − ηt)/ηt)·Io + P0 = 0.
  * Method: the first sampled point at or above the target brackets the crossing with the point before it;
  * the crossing is then found on the engine (Illinois regula falsi) or by straight-line interpolation.

@@ -2,7 +2,7 @@
  * The CCM/DCM boundary: the load below which the inductor current falls to zero for part of each period.
  *
  * In an ideal converter it lies where the mean inductor current equals half the ripple, K = Kcrit
- * (Erickson & Maksimović, 2nd ed., ch. 5 [memory for numbering]; METHODS.md §2): for a buck
+ * (Erickson & Maksimović, 2nd ed., ch. 5 [memory for numbering]; docs/methods.md §2): for a buck
  * Io,crit = ΔI/2. The engine reports the mode of every point; the boundary is the first change of mode
  * between neighbouring points, placed by bisection on the engine or at the midpoint of the two points.
  * A synchronous converter in forced PWM never enters DCM: its inductor current reverses instead, and the

@@ -5,7 +5,7 @@
  * peak is then found by golden-section search in that bracket, otherwise by the vertex of the parabola
  * through the three points. A peak at the first or last point is reported with a note: the true peak may
  * lie outside the swept range.
- * Check (METHODS.md §12): loss P0 + a·Io + b·Io² has its peak at Io* = √(P0/b), η* = Vo/(Vo + a + 2√(P0·b)).
+ * Check (docs/methods.md §12): loss P0 + a·Io + b·Io² has its peak at Io* = √(P0/b), η* = Vo/(Vo + a + 2√(P0·b)).
  */
 import { findMaximum, parabolaVertex } from './search.ts';
 import type { Landmark } from './types.ts';

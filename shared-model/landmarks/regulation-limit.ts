@@ -1,7 +1,7 @@
 /**
  * The regulation limit: the lightest load beyond which the converter cannot hold its output — the duty
  * cycle reaches the controller's maximum, the output cannot be reached at any duty (boost: the ratio
- * falls past its maximum, METHODS.md §3), or the electro-thermal loop runs away. (A point whose iteration
+ * falls past its maximum, docs/methods.md §3), or the electro-thermal loop runs away. (A point whose iteration
  * merely stopped short of its fixed point is left out of the peak search but is no regulation limit.) Found as the first swept point carrying one of these warnings, then by bisection on the
  * engine (or at the midpoint of the two points). Value: the duty cycle at the last regulating point.
  */

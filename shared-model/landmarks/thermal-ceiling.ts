@@ -7,7 +7,7 @@
  * crossing with the point before it. The crossing is then found on the engine (Illinois regula falsi on
  * the margin) or by straight-line interpolation of the margin.
  * Hand check: a part whose loss is I²·R(T) with R(T) = R0·(1 + α·(T − T0)) and a thermal resistance θ
- * reaches T_lim at I = √((T_lim − Ta)/(θ·R(T_lim))) (METHODS.md §10, fixed point T = Ta + θ·P(T)).
+ * reaches T_lim at I = √((T_lim − Ta)/(θ·R(T_lim))) (docs/methods.md §10, fixed point T = Ta + θ·P(T)).
  */
 import type { SweepColumns, SweepPoint } from '../sweep/types.ts';
 import { findEdge, findRoot, interpolateCrossing } from './search.ts';

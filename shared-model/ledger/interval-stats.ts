@@ -13,7 +13,7 @@
  *     waveform/stats.ts applies to the record's idle segment — so the final point of a sweep carries the
  *     very bits of the OperatingPoint record (the two forms can differ in the last bit).
  * Peak and minimum: the largest and smallest segment end, compared in segment order as waveform/stats.ts.
- * Source: elementary integration of a linear function; METHODS.md §1 (exact RMS of straight-line pieces).
+ * Source: elementary integration of a linear function; docs/methods.md §1 (exact RMS of straight-line pieces).
  */
 
 export interface IntervalStats {

@@ -10,7 +10,7 @@
  * Filled `asRecord` it is also the final point of a sweep (`PointSummary`): the numbers of the solver's
  * OperatingPoint record to the last bit (the record's idle-interval formula, interval-stats.ts), without the
  * record's waveforms. test/shared-model/ledger/joint-loop.test.ts checks both against the solver's record.
- * Source: METHODS.md §1 (exact RMS of straight-line pieces).
+ * Source: docs/methods.md §1 (exact RMS of straight-line pieces).
  */
 import type { Circuit } from '../operating-point/circuit.ts';
 import { switchStressV, turnOffVoltageV, turnOnVoltageV } from '../operating-point/assemble.ts';

@@ -3,7 +3,7 @@
  * ī² + Δi²/12; Σ (t/T)·Δi²/12 over a branch's segments is the part the kernel prices as a loss paid by the
  * source at an unchanged duty (ledger/slots.ts), from the solver's record or from a lean point (which
  * computed it with its statistics, interval-stats.ts).
- * Source: elementary integration of a linear function; METHODS.md §1.
+ * Source: elementary integration of a linear function; docs/methods.md §1.
  */
 import type { OperatingPoint, Segment } from '../operating-point/types.ts';
 import type { LeanPoint } from './point-view.ts';

@@ -4,7 +4,7 @@
  * Formula: P = ESR(T) · Irms² / n for n equal capacitors sharing the bank's RMS current Irms equally
  * (each carries Irms/n and dissipates ESR·(Irms/n)²); ESR(T) = ESR · (1 + c·(T − 25 °C)), floored at 0.
  * Assumptions: ESR at the switching frequency applies to the whole ripple spectrum; equal sharing.
- * Source: METHODS.md §9 and §1 (exact RMS currents) [common practice].
+ * Source: docs/methods.md §9 and §1 (exact RMS currents) [common practice].
  */
 import { input, nonNegativeFinite, type LossModel } from './model.ts';
 

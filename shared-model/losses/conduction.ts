@@ -6,7 +6,7 @@
  * Assumptions: the channel is a linear resistor while on (no dependence on drain current or gate drive
  * beyond the datasheet value); reverse conduction through the channel uses the same RDS(on).
  * Source: Erickson & Maksimović, Fundamentals of Power Electronics, 2nd ed., ch. 3–4 [memory for chapter];
- * METHODS.md §1 (exact RMS) and §5 (RDS(on) versus temperature).
+ * docs/methods.md §1 (exact RMS) and §5 (RDS(on) versus temperature).
  */
 import { input, nonNegativeFinite, type LossModel } from './model.ts';
 

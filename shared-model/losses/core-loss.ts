@@ -7,7 +7,7 @@
  * For a CCM triangle rising for D·T this reduces to Pv = ki · ΔB^β · f^α · (D^(1−α) + D'^(1−α)).
  * Assumptions: Steinmetz constants at one temperature (no temperature dependence); no relaxation loss
  * after the DCM idle interval (i²GSE not modelled); no DC-bias dependence; L at the operating current.
- * Source: Venkatachalam et al., COMPEL 2002 (DOI 10.1109/CIPE.2002.1196712); METHODS.md §7.
+ * Source: Venkatachalam et al., COMPEL 2002 (DOI 10.1109/CIPE.2002.1196712); docs/methods.md §7.
  */
 import type { Segment } from '../operating-point/types.ts';
 import { input, nonNegativeFinite, type LossModel } from './model.ts';

@@ -8,7 +8,7 @@
  * 0. Assumptions: the current is constant over each dead time; the body diode drop is VSD (datasheet),
  * independent of current and temperature; the channel's conduction over the same interval is not
  * subtracted from the rectifier's RMS loss (a small overestimate).
- * Source: METHODS.md §4 (0.16 W check value); Erickson & Maksimović 2nd ed. ch. 4 [memory].
+ * Source: docs/methods.md §4 (0.16 W check value); Erickson & Maksimović 2nd ed. ch. 4 [memory].
  */
 import { input, nonNegativeFinite, type LossModel } from './model.ts';
 

@@ -4,7 +4,7 @@
  * Formula: P = Vf0(Tj) · Iavg + Rd · Irms², with the piecewise-linear forward model v = Vf0 + Rd·i and
  * Vf0(Tj) = Vf0 + (dVf0/dT)·(Tj − 25 °C) (falls about 1–2 mV/K).
  * Assumptions: the forward model holds over the current range; Rd does not change with temperature.
- * Source: METHODS.md §6 (0.717831 W check value); Erickson & Maksimović 2nd ed. ch. 3 [memory].
+ * Source: docs/methods.md §6 (0.717831 W check value); Erickson & Maksimović 2nd ed. ch. 3 [memory].
  */
 import { input, nonNegativeFinite, type LossModel } from './model.ts';
 

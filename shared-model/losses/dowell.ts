@@ -10,7 +10,7 @@
  * sum over n is the AC RMS², ΔI²/12 for a triangle). Effective factor over the first HARMONICS harmonics,
  * the remainder of the AC power taken at the last harmonic's factor:
  *   F_eff = (Σ_n F_R(Δ·√n)·I_n² + F_R(Δ·√N)·(Iac² − Σ_n I_n²)) / Iac².
- * Source: Dowell 1966; METHODS.md §8 (δ 0.208981 mm at 100 kHz, F_R(1, 1) = 1.085636).
+ * Source: Dowell 1966; docs/methods.md §8 (δ 0.208981 mm at 100 kHz, F_R(1, 1) = 1.085636).
  */
 import type { Segment } from '../operating-point/types.ts';
 

@@ -5,7 +5,7 @@
  * Formula: P = ΣQg · Vsupply · fs − P(inside the FETs), with Vsupply = Vin when the drive rail comes from
  * Vin through a linear regulator (the input pays Vin·Qg·fs), otherwise Vdrv (the rail is assumed to be made
  * from the input without further loss, so the input pays Qg·Vdrv·fs).
- * Source: METHODS.md §4 (gate drive 30 mW, 72 mW from a 12 V linear rail — check values).
+ * Source: docs/methods.md §4 (gate drive 30 mW, 72 mW from a 12 V linear rail — check values).
  */
 import { input, nonNegativeFinite, type LossModel } from './model.ts';
 

@@ -8,7 +8,7 @@
  * nor Qgs is given: Qgs ≈ (Qg − Qgd)·Vpl/Vdrv (the non-Miller charge spread evenly over the gate swing),
  * then the same split. Both are estimates; the ledger says so.
  * Source: Erickson & Maksimović 2nd ed. ch. 4; Mohan, Undeland & Robbins, Power Electronics, ch. 22
- * [memory for chapters]; METHODS.md §4.
+ * [memory for chapters]; docs/methods.md §4.
  */
 import type { Mosfet } from '../design/parts.ts';
 

@@ -8,7 +8,7 @@
  * The rest (and, for a linear rail made from Vin, (Vin − Vdrv)·Qg·fs) heats the controller — see
  * driver-supply.ts. Assumptions: Qg at the drive voltage (datasheet); the even charge/discharge split is
  * exact for a linear gate capacitance; a zero Rg puts nothing inside the FET.
- * Source: METHODS.md §4 (Qg·Vdrv·fs, share Rg/(Rg + Rdrv)); Erickson & Maksimović 2nd ed. ch. 4 [memory].
+ * Source: docs/methods.md §4 (Qg·Vdrv·fs, share Rg/(Rg + Rdrv)); Erickson & Maksimović 2nd ed. ch. 4 [memory].
  */
 import { input, nonNegativeFinite, type LossModel } from './model.ts';
 

@@ -5,7 +5,7 @@
  *
  * Formula: P = ½ · Cj · V² · fs for a linear Cj (datasheet value, taken as constant).
  * Assumptions: linear capacitance; PN diodes use reverse recovery instead (their capacitance is neglected).
- * Source: METHODS.md §6 (400 pF, 12 V, 500 kHz → 14.4 mW check value).
+ * Source: docs/methods.md §6 (400 pF, 12 V, 500 kHz → 14.4 mW check value).
  */
 import { input, nonNegativeFinite, type LossModel } from './model.ts';
 

@@ -12,7 +12,7 @@
  * energy-equivalent capacitances, Qoss(V) = Qoss(V0)·V/V0 and Eoss(V) = Eoss(V0)·(V/V0)². Exact at V0;
  * below V0 a strongly non-linear Coss holds more charge than this scaling says (model limit).
  * A soft (zero-voltage) turn-on has no Coss loss: the caller passes V = 0.
- * Source: METHODS.md §4 (half-bridge form, check values); Erickson & Maksimović 2nd ed. ch. 4 [memory].
+ * Source: docs/methods.md §4 (half-bridge form, check values); Erickson & Maksimović 2nd ed. ch. 4 [memory].
  */
 import type { OutputCapacitance } from '../design/parts.ts';
 import { input, nonNegativeFinite, type LossModel } from './model.ts';

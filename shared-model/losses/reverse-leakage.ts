@@ -6,7 +6,7 @@
  * switch's on-time D) and, in DCM, dIdle the idle fraction during which it blocks Vidle (buck: Vout;
  * boost: Vout − Vin).
  * Assumptions: IR does not depend on the reverse voltage; the ringing in the idle interval is ignored.
- * Source: METHODS.md §6 (50 µA at 25 °C → 51.2 mA at 125 °C; 0.256 W check value) [common practice].
+ * Source: docs/methods.md §6 (50 µA at 25 °C → 51.2 mA at 125 °C; 0.256 W check value) [common practice].
  */
 import { input, nonNegativeFinite, type LossModel } from './model.ts';
 

@@ -14,7 +14,7 @@
  * recovery charge is drawn from the input at the full switch-node swing and dissipated in the turning-on
  * switch. No recovery when the diode carries no forward current at the edge (DCM, negative current, no
  * dead time) — the caller passes IF = 0 then.
- * Source: METHODS.md §4 (Qrr 20 nC → 0.12 W at IF = Itest); Mohan, Undeland & Robbins ch. 20–22 [memory].
+ * Source: docs/methods.md §4 (Qrr 20 nC → 0.12 W at IF = Itest); Mohan, Undeland & Robbins ch. 20–22 [memory].
  */
 import { input, nonNegativeFinite, safeRatio, type LossModel } from './model.ts';
 

@@ -6,7 +6,7 @@
  * ∫₀^{2π}|cos θ|^α dθ = 2√π · Γ((α+1)/2) / Γ(α/2 + 1).
  * A datasheet point (Pv at f0 and B̂0, sine) gives k = Pv / (f0^α · B̂0^β).
  * Source: Venkatachalam, Sullivan, Abdallah & Tacca, COMPEL 2002, DOI 10.1109/CIPE.2002.1196712;
- * METHODS.md §7 (check values ki 0.420616, ∫|cos|^α 3.529752, k 8.455149).
+ * docs/methods.md §7 (check values ki 0.420616, ∫|cos|^α 3.529752, k 8.455149).
  */
 import type { CoreLossSpec } from '../design/parts.ts';
 import { gamma } from './gamma.ts';

@@ -5,7 +5,7 @@
  * Eoff = ½ · Vsw · Ioff · (t_vr + t_if); P = Eoff · fs. Ioff is the current at turn-off (peak).
  * Assumptions: as for turn-on (linear ramps, constant plateau, no parasitic inductance or ringing); the
  * transition time is capped at half a period. Zero or negative current at turn-off: no overlap loss.
- * Source: Erickson & Maksimović 2nd ed. ch. 4; Mohan, Undeland & Robbins ch. 22 [memory]; METHODS.md §4.
+ * Source: Erickson & Maksimović 2nd ed. ch. 4; Mohan, Undeland & Robbins ch. 22 [memory]; docs/methods.md §4.
  */
 import { turnOffGateCurrentA } from './gate-charge.ts';
 import { input, nonNegativeFinite, type LossModel } from './model.ts';

@@ -6,7 +6,7 @@
  * Assumptions: linear current and voltage ramps; constant plateau; no common-source inductance, ringing or
  * non-linear Crss; the transition time is capped at half a period (a drive that cannot pass the plateau).
  * Zero or negative current at turn-on (DCM, or a soft edge) gives no overlap loss — the caller passes 0.
- * Source: Erickson & Maksimović 2nd ed. ch. 4; Mohan, Undeland & Robbins ch. 22 [memory]; METHODS.md §4.
+ * Source: Erickson & Maksimović 2nd ed. ch. 4; Mohan, Undeland & Robbins ch. 22 [memory]; docs/methods.md §4.
  */
 import { turnOnGateCurrentA } from './gate-charge.ts';
 import { input, nonNegativeFinite, type LossModel } from './model.ts';

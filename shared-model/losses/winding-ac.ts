@@ -7,7 +7,7 @@
  * the ripple's harmonics (dowell.ts). The DC part of Rac is already in winding-dc.ts.
  * Assumptions: a factor below 1 is treated as 1 (no AC excess); the Dowell model assumes a 1-D field in
  * full-width layers (Dowell, Proc. IEE 113(8), 1966).
- * Source: METHODS.md §8; Dowell 1966.
+ * Source: docs/methods.md §8; Dowell 1966.
  */
 import { input, nonNegativeFinite, type LossModel } from './model.ts';
 

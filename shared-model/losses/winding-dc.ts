@@ -4,7 +4,7 @@
  * Formula: P = IL,rms² · DCR(T), DCR(T) = DCR20 · (1 + 0.00393/K · (T − 20 °C)) (annealed copper).
  * The AC excess of the ripple is a separate term (winding-ac.ts), so nothing is counted twice.
  * Assumptions: uniform winding temperature equal to the hot spot (slightly conservative).
- * Source: IEC 60028 (ρ20 = 1/58 Ω·mm²/m, α20 = 0.00393/K [memory for α]); METHODS.md §8.
+ * Source: IEC 60028 (ρ20 = 1/58 Ω·mm²/m, α20 = 0.00393/K [memory for α]); docs/methods.md §8.
  */
 import { input, nonNegativeFinite, type LossModel } from './model.ts';
 

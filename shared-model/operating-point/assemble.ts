@@ -12,8 +12,8 @@
  * reverse current discharges the switch node first), turn-off at the peak. Blocking voltages: buck
  * Vin + rectifier drop; boost Vo + rectifier drop (in DCM at zero current: the swing when the idle interval
  * starts; the ringing toward the resting value is not modelled, a conservative choice).
- * Boost small signal (CCM): ωz = D'²R/L, current-mode output pole ωp = 2/(R·C) (METHODS.md §13).
- * Source: Erickson & Maksimović 2nd ed. ch. 2, 5 and 8 [memory for chapters]; METHODS.md §1, §2, §13.
+ * Boost small signal (CCM): ωz = D'²R/L, current-mode output pole ωp = 2/(R·C) (docs/methods.md §13).
+ * Source: Erickson & Maksimović 2nd ed. ch. 2, 5 and 8 [memory for chapters]; docs/methods.md §1, §2, §13.
  */
 import type { Circuit } from './circuit.ts';
 import type { Shape } from './shape.ts';

@@ -9,7 +9,7 @@
  * - Blocking voltage against VDS / VR (beyond the derating margin: caution; beyond the rating: danger);
  *   MOSFET peak current against its ID rating; diode mean current against its IF rating (an average
  *   rating). Ringing and spikes are not modelled: measure them on hardware.
- * Source: common practice for rating checks; METHODS.md §7 (saturation at the hot corner).
+ * Source: common practice for rating checks; docs/methods.md §7 (saturation at the hot corner).
  */
 import type { Design } from '../design/schema.ts';
 import type { Warning } from '../warnings.ts';

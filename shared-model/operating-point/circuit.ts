@@ -11,11 +11,11 @@
  * with Vin' = Vin − Rsense(input) · Iin, Vo' = Vo + Rsense(output) · Io, Rrect = Rd (diode) or RDS
  * (synchronous), VF0 = 0 for a synchronous rectifier. The ESR terms are the output capacitor current
  * (i − Io) flowing through the bank's ESR while the inductor feeds the output node; in buck CCM they
- * cancel, so the METHODS.md §1 duty formulas are reproduced exactly.
+ * cancel, so the docs/methods.md §1 duty formulas are reproduced exactly.
  * Assumptions: stiff input (the input capacitor holds Vin; the source supplies DC), constant output
  * voltage over the period for the drops, dead times and switching transitions ignored here (the loss
  * ledger prices them). Source: Erickson & Maksimović 2nd ed. ch. 2–3 (volt-second balance with
- * resistive and diode drops) [memory for chapter]; METHODS.md §1.
+ * resistive and diode drops) [memory for chapter]; docs/methods.md §1.
  */
 import type { Design } from '../design/schema.ts';
 import type { Conditions, ConductionParameters } from './types.ts';

@@ -6,7 +6,7 @@
  * temperatures, a diode's VF0(T) and Rd, the winding's DCR(T) (IEC 60028 copper law) and the sense
  * resistor at its temperature (temperature-laws.ts). For a synchronous rectifier the diode fields carry
  * its body diode (VSD, no Rd) for the dead-time models; for a diode rectifier rectifierOnOhm is 0.
- * Source: METHODS.md §5, §6, §8.
+ * Source: docs/methods.md §5, §6, §8.
  */
 import type { Design } from '../design/schema.ts';
 import type { Conditions, ConductionParameters, PartTemps } from './types.ts';

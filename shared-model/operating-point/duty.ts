@@ -3,7 +3,7 @@
  *
  * The volt-second residual r(D) (shape.ts) rises with D from r(0) < 0. Buck: r is monotonic, so the root
  * lies in [0, Dmax] or the duty limit is reached. Boost: r rises to a maximum and falls again (the
- * resistive drops grow as IL = Io/D'), so the ratio has a ceiling (METHODS.md §3: 1/(2√(RL/R)) at
+ * resistive drops grow as IL = Io/D'), so the ratio has a ceiling (docs/methods.md §3: 1/(2√(RL/R)) at
  * D' = √(RL/R)); the root taken is the one on the rising side (lower D).
  * When the target cannot be reached, D is held at the limit (buck: Dmax; boost: the D in [0, Dmax]
  * that gives the highest output) and the output voltage that balances the volt-seconds at the same load

@@ -10,7 +10,7 @@
  * residualV = D·vL,on + D2·vL,off (volt-second balance; zero at the solution without lossOf), with the
  *   drops taken at each interval's mean current (exact mean of a straight line).
  * Terms E/R: see circuit.ts. Source: Erickson & Maksimović 2nd ed. ch. 2 and 5 (CCM ripple, DCM charge
- * balance) [memory for chapters]; METHODS.md §1–2.
+ * balance) [memory for chapters]; docs/methods.md §1–2.
  */
 import { inductanceAt, type Circuit } from './circuit.ts';
 

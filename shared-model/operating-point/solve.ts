@@ -10,7 +10,7 @@
  *    and warnings (checks.ts).
  * Never throws for physics (limits become warnings); throws a RangeError for impossible conditions
  * (a programmer error: the document validator and the sweep code keep them out).
- * Source: METHODS.md §1–3, §13; Erickson & Maksimović 2nd ed. ch. 2–3, 5 [memory for chapters].
+ * Source: docs/methods.md §1–3, §13; Erickson & Maksimović 2nd ed. ch. 2–3, 5 [memory for chapters].
  */
 import type { Design } from '../design/schema.ts';
 import type { Conditions, ConductionParameters, OperatingPoint, SolveOptions } from './types.ts';

@@ -12,7 +12,7 @@
  * - Resistor, capacitor ESR:   R(T) = R25 · (1 + tc · (T − 25))
  * Assumptions: part parameters without a stated reference temperature are taken at 25 °C; the linear
  * laws are clamped at 0 so a resistance or forward drop never turns negative far outside their range.
- * Sources: METHODS.md §5 (RDS(on) laws, common practice; physics in Sze & Ng, Baliga [memory]), §8 (IEC
+ * Sources: docs/methods.md §5 (RDS(on) laws, common practice; physics in Sze & Ng, Baliga [memory]), §8 (IEC
  * 60028 copper, α20 0.00393/K [memory for α]), §6 (VF0 drift and leakage doubling, common practice).
  */
 import type { Capacitor, Diode, Mosfet, Resistor } from '../design/parts.ts';

@@ -1,22 +1,16 @@
 /**
  * CSV export of the load sweep and of the loss ledger, for spreadsheets and scripts.
  * Format: RFC 4180 (comma separated, CRLF line ends, a field holding a comma, quote or line break is
- * quoted with inner quotes doubled), one header row naming each column with its unit in brackets.
+ * quoted with inner quotes doubled; text cells neutralised against formula injection: csv/write.ts), one
+ * header row naming each column with its unit in brackets.
  * Numbers are written in full precision (JavaScript's shortest round-trip form, "." decimal point), in
  * SI units without prefixes: the file carries the engine's values, not the rounded ones printed.
  */
 import type { Evaluation } from '../ledger/types.ts';
 import type { LoadSweep } from '../sweep/types.ts';
 
-const num = (x: number): string => (Number.isFinite(x) ? String(x) : '');
+import { csvLines } from '../csv/write.ts';
 
-export function csvField(value: string): string {
-  return /[",\r\n]/.test(value) ? `"${value.replace(/"/g, '""')}"` : value;
-}
-
-export function csvLines(rows: readonly (readonly string[])[]): string {
-  return rows.map((r) => r.map(csvField).join(',')).join('\r\n') + '\r\n';
-}
 
 /** One row per sweep point: conditions, efficiency, powers, every loss term, temperature, margin and surface. */
 export function sweepCsv(sweep: LoadSweep): string {
@@ -44,25 +38,25 @@ export function sweepCsv(sweep: LoadSweep): string {
     'warnings',
   ];
   const rows = sweep.points.map((p) => [
-    num(p.loadA),
-    num(p.vinV),
-    num(p.ambientC),
-    num(p.switchingFrequencyHz),
-    num(p.efficiency),
-    num(p.inputPower),
-    num(p.outputPower),
-    num(p.totalLoss),
-    num(p.dutyCycle),
+    p.loadA,
+    p.vinV,
+    p.ambientC,
+    p.switchingFrequencyHz,
+    p.efficiency,
+    p.inputPower,
+    p.outputPower,
+    p.totalLoss,
+    p.dutyCycle,
     p.mode,
     p.converged ? 'yes' : 'no',
-    num(p.inductorPeakA),
-    num(p.inductorRippleA),
-    ...p.losses.map(num),
-    ...p.temperaturesC.map(num),
-    ...p.marginsK.map(num),
-    ...p.surfacesC.map(num),
-    ...p.hazardMarginsK.map(num),
-    ...p.heatsinksC.map(num),
+    p.inductorPeakA,
+    p.inductorRippleA,
+    ...p.losses,
+    ...p.temperaturesC,
+    ...p.marginsK,
+    ...p.surfacesC,
+    ...p.hazardMarginsK,
+    ...p.heatsinksC,
     [...new Set(p.warnings.map((w) => w.code))].join(' '),
   ]);
   return csvLines([header, ...rows]);
@@ -75,13 +69,13 @@ export function ledgerCsv(e: Evaluation): string {
     t.part,
     t.partName,
     t.mechanism,
-    num(t.watts),
-    e.totalLoss > 0 ? num(t.watts / e.totalLoss) : '',
+    t.watts,
+    e.totalLoss > 0 ? t.watts / e.totalLoss : '',
     t.formula,
-    t.inputs.map((i) => `${i.name} = ${num(i.value)}${i.unit ? ` ${i.unit}` : ''}`).join('; '),
+    t.inputs.map((i) => `${i.name} = ${String(i.value)}${i.unit ? ` ${i.unit}` : ''}`).join('; '),
   ]);
-  rows.push(['total', '', '', num(e.totalLoss), e.totalLoss > 0 ? '1' : '', '', '']);
-  rows.push(['input power', '', '', num(e.inputPower), '', '', '']);
-  rows.push(['output power', '', '', num(e.outputPower), '', '', '']);
+  rows.push(['total', '', '', e.totalLoss, e.totalLoss > 0 ? '1' : '', '', '']);
+  rows.push(['input power', '', '', e.inputPower, '', '', '']);
+  rows.push(['output power', '', '', e.outputPower, '', '', '']);
   return csvLines([header, ...rows]);
 }

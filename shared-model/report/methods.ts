@@ -19,7 +19,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
       'Duty cycle solved so that Vin · Iin = Pout + Σ losses (self-consistent with the loss ledger). CCM ripple ΔI = V_off · (1 − D) · T / L; ' +
       'DCM from the charge balance of the triangular current with an idle interval. RMS of each straight-line current piece of fraction d: ' +
       '√(d · (I² + ΔI²/12)); capacitor currents are the exact AC parts of the branch currents.',
-    source: `${EM}, ch. 2, 3 and 5 (from memory for chapter numbers); our METHODS.md §1–3.`,
+    source: `${EM}, ch. 2, 3 and 5 (from memory for chapter numbers); WattLedger methods §1–3.`,
     limits: [
       'Steady state only: no control-loop dynamics, start-up or load transients.',
       'Switching edges are instantaneous in the current waveforms (transition times do not enter the RMS currents).',
@@ -30,7 +30,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     id: 'conduction',
     title: 'MOSFET conduction',
     formula: 'P = Irms² · RDS(on)(Tj), with RDS(on)(T) = R25 · (1 + α · (T − 25 °C)) or R(T0) · (T/T0)^k in kelvin.',
-    source: `${EM}, ch. 3–4 (from memory for chapters); METHODS.md §5 (temperature laws, common practice).`,
+    source: `${EM}, ch. 3–4 (from memory for chapters); WattLedger methods §5 (temperature laws, common practice).`,
     limits: ['RDS(on) does not depend on drain current or on the gate voltage beyond the datasheet value.'],
   },
   {
@@ -39,7 +39,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     formula:
       'Turn-on: Ig = (Vdrv − Vpl)/(R_pull-up + Rg), t = (Qgs2 + Qgd)/Ig, E_on = ½ · Vsw · I_on · t. ' +
       'Turn-off: Ig = Vpl/(R_pull-down + Rg), E_off = ½ · Vsw · I_off · (Qgd + Qgs2)/Ig. P = (E_on + E_off) · fs.',
-    source: `${EM}, ch. 4; ${MUR}, ch. 22 (from memory for chapters); METHODS.md §4.`,
+    source: `${EM}, ch. 4; ${MUR}, ch. 22 (from memory for chapters); WattLedger methods §4.`,
     limits: [
       'Common-source inductance, ringing, non-linear Crss and the shift of the plateau with current are not modelled.',
       'A synchronous rectifier is taken to switch at zero voltage (no overlap loss).',
@@ -52,7 +52,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     formula:
       'Per cycle at swing V: E = Eoss,ctrl(V) + V · Qoss,sync(V) − Eoss,sync(V) with a synchronous FET (hard-switched half-bridge), ' +
       'E = Eoss,ctrl(V) without; P = E · fs (½ · (C1 + C2) · V² for linear capacitance).',
-    source: `METHODS.md §4; ${EM}, ch. 4 (from memory).`,
+    source: `WattLedger methods §4; ${EM}, ch. 4 (from memory).`,
     limits: ['Charge and energy are scaled from the datasheet voltage with constant equivalent capacitances; far below that voltage a strongly non-linear Coss holds more charge.'],
   },
   {
@@ -61,14 +61,14 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     formula:
       'Driver energy Qg · Vdrv · fs, the share Rg/(Rg + R_driver) burnt inside the FET, the rest in the controller; ' +
       'when the drive rail is made from Vin by a linear regulator the input pays Vin · Qg · fs.',
-    source: `METHODS.md §4; ${EM}, ch. 4 (from memory).`,
+    source: `WattLedger methods §4; ${EM}, ch. 4 (from memory).`,
     limits: ['Qg is taken at the drive voltage from the datasheet; the gate capacitance is treated as linear for the charge/discharge split.'],
   },
   {
     id: 'dead-time',
     title: 'Dead-time body-diode conduction',
     formula: 'P = VSD · (I1 · t1 + I2 · t2) · fs, with the inductor current held constant over each dead time.',
-    source: `METHODS.md §4; ${EM}, ch. 4 (from memory).`,
+    source: `WattLedger methods §4; ${EM}, ch. 4 (from memory).`,
     limits: ['VSD is constant (no dependence on current or temperature); the channel loss over the same interval is not subtracted (slight overestimate).'],
   },
   {
@@ -78,7 +78,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
       'P ≈ Qrr · (IF / Itest) · Vsw · fs, charged to the control switch that turns on into the conducting diode: the datasheet Qrr, ' +
       'stated at the test current Itest, is scaled linearly to the forward current IF the diode carries when the switch turns on ' +
       '(0 in DCM, so the loss is continuous at the CCM/DCM boundary). Itest is the rated load current when the part does not state it.',
-    source: `METHODS.md §4; ${MUR}, ch. 20–22, charge-control model of the diode Q ≈ τ · IF (from memory).`,
+    source: `WattLedger methods §4; ${MUR}, ch. 20–22, charge-control model of the diode Q ≈ τ · IF (from memory).`,
     limits: [
       'Linear in the forward current (a simplification: measured Qrr grows less than linearly at high current); its dependence on di/dt and temperature is not modelled.',
       'Where the part states no Qrr test current, the rated load current is assumed (a model-limit note says so).',
@@ -88,35 +88,35 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     id: 'diode-forward',
     title: 'Diode forward conduction',
     formula: 'P = Vf0(Tj) · Iavg + Rd · Irms², Vf0(Tj) = Vf0 + (dVf0/dT) · (Tj − 25 °C).',
-    source: `METHODS.md §6; ${EM}, ch. 3 (from memory).`,
+    source: `WattLedger methods §6; ${EM}, ch. 3 (from memory).`,
     limits: ['The straight-line forward model holds over the current range; Rd does not change with temperature.'],
   },
   {
     id: 'junction-capacitance',
     title: 'Schottky junction capacitance',
     formula: 'P = ½ · Cj · V² · fs (linear Cj), heat booked to the control switch.',
-    source: 'METHODS.md §6.',
+    source: 'WattLedger methods §6.',
     limits: ['Cj is taken as constant with voltage.'],
   },
   {
     id: 'reverse-leakage',
     title: 'Diode reverse leakage',
     formula: 'P = IR(Tj) · VR · (fraction of the period blocking), IR(T) = IR(T0) · 2^((T − T0)/Td), Td ≈ 10 K.',
-    source: 'METHODS.md §6 (common practice).',
+    source: 'WattLedger methods §6 (common practice).',
     limits: ['Leakage does not depend on the reverse voltage; ringing in the DCM idle interval is ignored.'],
   },
   {
     id: 'winding-dc',
     title: 'Inductor winding, DC resistance',
     formula: 'P = IL,rms² · DCR(T), DCR(T) = DCR20 · (1 + 0.00393/K · (T − 20 °C)).',
-    source: 'IEC 60028 copper (α20 from memory); METHODS.md §8.',
+    source: 'IEC 60028 copper (α20 from memory); WattLedger methods §8.',
     limits: ['The winding is taken to be uniformly at the hot-spot temperature (slightly conservative).'],
   },
   {
     id: 'winding-ac',
     title: 'Inductor winding, AC excess',
     formula: 'P = Iac,rms² · DCR(T) · (F_R − 1), F_R a user factor at fs or Dowell\'s layered-winding factor weighted over the ripple harmonics.',
-    source: 'P. L. Dowell, Proc. IEE 113(8), 1966; METHODS.md §8.',
+    source: 'P. L. Dowell, Proc. IEE 113(8), 1966; WattLedger methods §8.',
     limits: ['Dowell assumes a one-dimensional field in full-width layers; fringing near gaps is not modelled.'],
   },
   {
@@ -124,14 +124,14 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     title: 'Inductor core (iGSE)',
     formula:
       'Pv = (1/T) · Σ ki · |ΔB_s/t_s|^α · ΔB^(β−α) · t_s over the straight flux segments, ki = k/((2π)^(α−1) · 2^(β−α) · ∫|cos θ|^α dθ); P = Pv · Ve.',
-    source: 'Venkatachalam, Sullivan, Abdallah & Tacca, COMPEL 2002, DOI 10.1109/CIPE.2002.1196712; METHODS.md §7.',
+    source: 'Venkatachalam, Sullivan, Abdallah & Tacca, COMPEL 2002, DOI 10.1109/CIPE.2002.1196712; WattLedger methods §7.',
     limits: ['Steinmetz constants at one temperature; no DC-bias dependence; no relaxation loss after the DCM idle interval.'],
   },
   {
     id: 'esr',
     title: 'Capacitor ESR',
     formula: 'P = ESR(T) · Irms² / n for n equal capacitors sharing the bank current.',
-    source: 'METHODS.md §9 and §1 (common practice).',
+    source: 'WattLedger methods §9 and §1 (common practice).',
     limits: ['ESR at the switching frequency applies to the whole ripple spectrum; the capacitors share the current equally.'],
   },
   {
@@ -154,7 +154,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     formula:
       'Direct: Tj = Ta + P · θJA (a stated rise gives θ = rise / dissipation). Heatsink: Ts = Ta + θSA · ΣPi, Tj,i = Ts + Pi · (θJC,i + θCS,i). ' +
       'Touchable surface: the heatsink, or the case top Tj − ψJT · P where ψJT is given, else the junction itself.',
-    source: 'JEDEC JESD51 definitions; METHODS.md §10.',
+    source: 'JEDEC JESD51 definitions; WattLedger methods §10.',
     limits: [
       'Linear and steady state; parts couple only through a shared heatsink.',
       'JESD51 θJA describes a standard test board; the value entered is taken as describing this board.',
@@ -166,7 +166,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     formula:
       'All part temperatures solved at once from T = Ta + Θ · P(T) (Newton iteration). Runaway when the loop gain θ · dP/dT reaches 1, ' +
       'when no fixed point lies below the part\'s limit + 100 K, or when the iteration diverges; such a point is reported as not converged.',
-    source: 'METHODS.md §10.',
+    source: 'WattLedger methods §10.',
     limits: ['A point flagged as runaway has no steady state: its numbers are the last iterate and describe nothing real.'],
   },
   {
@@ -182,7 +182,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     id: 'capacitor-life',
     title: 'Electrolytic capacitor life',
     formula: 'L = L0 · 2^((T0 − T)/10 K) at the hot-spot temperature.',
-    source: 'Common practice ("10 K rule"); METHODS.md §9.',
+    source: 'Common practice ("10 K rule"); WattLedger methods §9.',
     limits: ['A rule of thumb: the maker\'s own life formula and ripple multipliers take precedence.'],
   },
   {
@@ -190,7 +190,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     title: 'Burn-hazard check',
     formula:
       'Each touchable surface temperature against the strictest row of the touch-limit table that fits its material and the contact assumption; margin = limit − surface temperature.',
-    source: 'IEC 62368-1 Table 38; ISO 13732-1:2006; IEC 60950-1 Table 4C (withdrawn). Rows marked "recalled" were not confirmed against the printed standard (METHODS.md §11).',
+    source: 'IEC 62368-1 Table 38; ISO 13732-1:2006; IEC 60950-1 Table 4C (withdrawn). Rows marked "recalled" were not confirmed against the printed standard (WattLedger methods §11).',
     limits: ['Touch limits depend on the edition and the product standard that applies: confirm every row used against the current edition.'],
   },
   {
@@ -199,7 +199,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     formula:
       'Every sweep point fully electro-thermal. Peak: the highest efficiency, refined between sweep points. Knee: see its definition in the summary. ' +
       'Thermal ceiling: the lightest load at which any part reaches its derated temperature limit or a touch limit.',
-    source: 'WattLedger definitions (no standard defines a light-load knee); METHODS.md §12.',
+    source: 'WattLedger definitions (no standard defines a light-load knee); WattLedger methods §12.',
     limits: ['Landmarks are found between sweep points: a feature narrower than the point spacing can be missed.'],
   },
   {

@@ -9,7 +9,7 @@
  * F = Ta + Θ·P(T) − T. For a P linear in T, one Newton step lands on the fixed point.
  * Loop gain: a node alone, θ·dP/dT; a heatsink group, 1 − Π d_i · D_s (= 1 − det(I − Θ·G) of the group;
  * (θJC + θCS + θSA)·dP/dT for one part). The fixed point is stable while the loop gain is below 1.
- * Runaway (METHODS.md §10): (a) the loop gain reaches 1 while the node is still warming (F > 0): there is no
+ * Runaway (docs/methods.md §10): (a) the loop gain reaches 1 while the node is still warming (F > 0): there is no
  * fixed point above (with secant slopes, which can carry cross-effects, it must be seen twice in a row); (b) an iterate passes the node's ceiling (its limit + RUNAWAY_BAND_K): no fixed point
  * within the range where the models mean anything; (c) iterations run out with growing steps.
  * The solver never returns NaN. On runaway the result says converged: false and names the node; its

@@ -7,7 +7,7 @@
  *   diodes; the validator allows heatsink paths only for them, other parts count θJC = 0).
  * A heatsink path naming no heatsink (an unvalidated document) is treated as a path to ambient through
  * θJC + θCS alone and flagged with a danger warning: it is optimistic.
- * Source: JEDEC JESD51 definitions; METHODS.md §10.
+ * Source: JEDEC JESD51 definitions; docs/methods.md §10.
  */
 import type { Design, Heatsink, Role, SurfaceMaterial, ThermalPath } from '../design/schema.ts';
 import type { Warning } from '../warnings.ts';

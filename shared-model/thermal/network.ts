@@ -3,7 +3,7 @@
  * with its own thermal resistance to either ambient or a heatsink; a heatsink collects the heat of all
  * the parts mounted on it.
  *
- * Formula (JEDEC JESD51 definitions; METHODS.md §10):
+ * Formula (JEDEC JESD51 definitions; docs/methods.md §10):
  *   direct:   Tj = Ta + P · θJA                          ("rise" paths: θ = rise / stated dissipation)
  *   heatsink: Ts = Ta + θSA · ΣPi,  Tj,i = Ts + Pi · (θJC,i + θCS,i)
  * Surface temperature (what a hand could touch): the heatsink for heatsink paths; the case top

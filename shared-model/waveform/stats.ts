@@ -6,7 +6,7 @@
  *   ∫ i² dt = (i0² + i0·i1 + i1²)/3 · dt
  * so mean = Σ∫i/T and RMS = √(Σ∫i²/T) are exact, not sampled. The AC RMS (RMS of i − mean) is
  * integrated the same way on the shifted segments, which avoids the cancellation of √(RMS² − mean²).
- * Source: elementary integration of a linear function; METHODS.md §1 (exact RMS of straight-line pieces).
+ * Source: elementary integration of a linear function; docs/methods.md §1 (exact RMS of straight-line pieces).
  * A waveform whose period is 0 (no segments or all durations 0) has all statistics 0.
  */
 import type { CurrentStats, Waveform } from '../operating-point/types.ts';

@@ -9,12 +9,12 @@ import type { Design, Mosfet, ThermalPath } from '../../shared-model/index.ts';
 import { validateDesign } from '../../shared-model/index.ts';
 import { inventedMosfet, makeDesign, type DesignSketch } from './designs.ts';
 
-/** A MOSFET record with the METHODS.md §4 gate-charge figures (Qgs2 2.5 nC, Qgd 3 nC, Qg 12 nC, Vpl 2.8 V). */
+/** A MOSFET record with the docs/methods.md §4 gate-charge figures (Qgs2 2.5 nC, Qgd 3 nC, Qg 12 nC, Vpl 2.8 V). */
 export function inventedFet(): Mosfet {
   return { ...inventedMosfet(0.01), qgC: 12e-9, qgs2C: 2.5e-9, qgdC: 3e-9, plateauV: 2.8, vthV: 1.6, rgInternalOhm: 1.2 };
 }
 
-/** The METHODS.md §1 buck (12 V → 5 V, 3 A, 10 µH, 500 kHz), synchronous, with invented parts. */
+/** The docs/methods.md §1 buck (12 V → 5 V, 3 A, 10 µH, 500 kHz), synchronous, with invented parts. */
 export const SYNC_BUCK: DesignSketch = {
   kind: 'buck',
   rectifier: 'synchronous',

@@ -1,4 +1,4 @@
-/** Shared set-ups for operating-point tests (invented values; the METHODS.md §1 check circuit). */
+/** Shared set-ups for operating-point tests (invented values; the docs/methods.md §1 check circuit). */
 import type { ConductionParameters, Conditions } from '../../shared-model/index.ts';
 import { makeDesign, type DesignSketch } from './designs.ts';
 
@@ -13,7 +13,7 @@ export const IDEAL: ConductionParameters = {
   outputCapacitorEsrOhm: 0,
 };
 
-/** METHODS.md §1 check circuit: buck Vin 12 V, Vo 5 V, Io 3 A, L 10 µH, fs 500 kHz. */
+/** docs/methods.md §1 check circuit: buck Vin 12 V, Vo 5 V, Io 3 A, L 10 µH, fs 500 kHz. */
 export const METHODS_BUCK: DesignSketch = {
   kind: 'buck',
   rectifier: 'synchronous',

@@ -19,7 +19,7 @@
  * Time is normalised by the switching period (τ = t·fs), so the quadrature states below accumulate
  * period means directly: ∫iL, ∫iL², ∫iC, ∫iC², ∫iR, ∫iR², ∫vn over the interval.
  * Source: Kirchhoff's voltage and current laws on the circuit diagram; the diode's piecewise-linear
- * forward model VF0 + Rd·i (METHODS.md §6).
+ * forward model VF0 + Rd·i (docs/methods.md §6).
  */
 import type { Conditions, ConductionParameters, Design } from '../../shared-model/index.ts';
 import type { Derivative } from './odex.ts';

@@ -8,7 +8,7 @@
  * rectifier the integrator is stopped at the first accepted step whose inductor current is ≤ 0, the zero
  * crossing is located by Newton iteration with bisection (each trial re-integrates from the step's
  * start), and the rest of the period is the idle interval (iL ≡ 0, DCM). The inductor starts at its
- * ideal valley current (METHODS.md §1, at the driven duty) and the output at its target, which avoids a
+ * ideal valley current (docs/methods.md §1, at the driven duty) and the output at its target, which avoids a
  * long LC start-up transient (TOOLCHAIN.md). Cycles run until the state at the start of a cycle and at its
  * end (iL relative to the cycle's inductor RMS, vC relative to itself, and the input-sense-corrected
  * source voltage) differ by less than `relativeChange` on `settleCycles` consecutive cycles, or
@@ -90,7 +90,7 @@ export function simulateCycles(
   const vo = design.spec.voutV;
   const io = conditions.loadA;
   const T = e.periodS;
-  // Ideal start (METHODS.md §1): mean inductor current and ripple at the driven duty.
+  // Ideal start (docs/methods.md §1): mean inductor current and ripple at the driven duty.
   const meanL = e.boost ? io / (1 - dutyCycle) : io;
   const ripple = ((e.boost ? vin : vin - vo) * dutyCycle * T) / e.inductanceH;
   const valley = meanL - ripple / 2;

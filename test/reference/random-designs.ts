@@ -7,7 +7,7 @@
  * Vin 5–48 V (buck) or 3–24 V (boost), ratio 0.15–0.75 or 1.3–3.5, 0.5–10 A, 100 kHz–1 MHz, each
  * resistive drop 0.2–1.5 % of the lower terminal voltage at the rated inductor current, inductor ripple
  * 20–120 % of the rated mean current, output ripple 0.05–0.3 % of Vout, any sense-resistor location.
- * The ideal formulas (METHODS.md §1–2) only size the parts.
+ * The ideal formulas (docs/methods.md §1–2) only size the parts.
  *
  * The analytic engine assumes straight-line currents and a constant load current; the reference has
  * neither assumption. Three bounds keep the drawn designs where those assumptions are meant to hold
@@ -77,7 +77,7 @@ export function randomCases(seed: number, perFamily: number, lambdaMax = LAMBDA_
       const rOf = () => (Math.min(vinV, voutV) / ilRated) * uniform(rand, 0.002, 0.015);
       const ripple = uniform(rand, 0.2, 1.2) * ilRated;
       const inductanceH = ((buck ? vinV - voutV : vinV) * d) / (ripple * fsHz);
-      // Ideal boundary load at this duty: valley = 0 when IL = ΔI/2 (METHODS.md §2, K = Kcrit).
+      // Ideal boundary load at this duty: valley = 0 when IL = ΔI/2 (docs/methods.md §2, K = Kcrit).
       const boundaryA = buck ? ripple / 2 : (ripple / 2) * (1 - d);
       const loadA =
         f.regime === 'ccm' ? ratedA : boundaryA * uniform(rand, f.regime === 'dcm' ? 0.15 : 0.1, f.regime === 'dcm' ? 0.8 : 0.7);

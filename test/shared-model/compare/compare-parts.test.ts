@@ -11,7 +11,7 @@ function withSwitch(design: Design, fet: Mosfet): Design {
 }
 
 /**
- * Crossover of two control switches by hand (METHODS.md §4 gate-charge method, §1 RMS):
+ * Crossover of two control switches by hand (docs/methods.md §4 gate-charge method, §1 RMS):
  * ripple-free, the switch turns on and off at Io, so the overlap loss is
  *   Psw = ½·Vin·Io·fs·(Qgs2 + Qgd)·(1/Ig,on + 1/Ig,off),
  *   Ig,on = (Vdrv − Vpl)/(Rup + Rg), Ig,off = Vpl/(Rdn + Rg),
@@ -31,20 +31,20 @@ describe('compareParts', () => {
     const c = out.comparison;
     expect(c.crossovers).toHaveLength(1); // a quadratic against a linear term cross once for Io > 0 (by hand)
     const x = c.crossovers[0];
-    expect([x.fromPartId, x.toPartId]).toEqual(['inv-fast', 'inv-low-rds']); // switching dominates at light load, I²R at heavy load (METHODS.md §4)
+    expect([x.fromPartId, x.toPartId]).toEqual(['inv-fast', 'inv-low-rds']); // switching dominates at light load, I²R at heavy load (docs/methods.md §4)
     const eLow = evaluate(withSwitch(design, low), { loadA: x.load });
     const eFast = evaluate(withSwitch(design, fast), { loadA: x.load });
     closeTo(eLow.totalLoss, eFast.totalLoss, 1e-7); // definition of the crossover: equal total loss
-    closeTo(eLow.dutyCycle, eFast.dutyCycle, 1e-7); // equal loss → equal power-balanced duty (METHODS.md §1 last item)
+    closeTo(eLow.dutyCycle, eFast.dutyCycle, 1e-7); // equal loss → equal power-balanced duty (docs/methods.md §1 last item)
     const drv = design.parts.controller;
     const vin = design.spec.vinNomV;
     const fs = design.spec.switchingFrequencyHz;
-    const igOn = (drv.driveV - low.plateauV) / (drv.pullUpOhm + low.rgInternalOhm); // METHODS.md §4 turn-on gate current
-    const igOff = low.plateauV / (drv.pullDownOhm + low.rgInternalOhm); // METHODS.md §4 turn-off gate current
-    const perAmp = 0.5 * vin * fs * (low.qgdC - fast.qgdC) * (1 / igOn + 1 / igOff); // METHODS.md §4 Eon + Eoff difference per ampere
-    const byHand = perAmp / ((fast.rdsOn25Ohm - low.rdsOn25Ohm) * eLow.dutyCycle); // I²R (METHODS.md §1 Isw,rms² = D·Io²) equals the switching difference
-    // Tolerance 2e-3: the engine switches Vin plus the rectifier drop (≈ +0.11 % here), METHODS.md §4 uses Vin.
-    closeTo(x.load, byHand, 2e-3); // METHODS.md §4 gate-charge method and §1 RMS, hand formula above
+    const igOn = (drv.driveV - low.plateauV) / (drv.pullUpOhm + low.rgInternalOhm); // docs/methods.md §4 turn-on gate current
+    const igOff = low.plateauV / (drv.pullDownOhm + low.rgInternalOhm); // docs/methods.md §4 turn-off gate current
+    const perAmp = 0.5 * vin * fs * (low.qgdC - fast.qgdC) * (1 / igOn + 1 / igOff); // docs/methods.md §4 Eon + Eoff difference per ampere
+    const byHand = perAmp / ((fast.rdsOn25Ohm - low.rdsOn25Ohm) * eLow.dutyCycle); // I²R (docs/methods.md §1 Isw,rms² = D·Io²) equals the switching difference
+    // Tolerance 2e-3: the engine switches Vin plus the rectifier drop (≈ +0.11 % here), docs/methods.md §4 uses Vin.
+    closeTo(x.load, byHand, 2e-3); // docs/methods.md §4 gate-charge method and §1 RMS, hand formula above
   });
 
   it('reports side-by-side ledgers, overlaid sweeps and the difference at every point', () => {
@@ -54,7 +54,7 @@ describe('compareParts', () => {
     expect(a.sweep.points.map((p) => p.loadA)).toEqual(b.sweep.points.map((p) => p.loadA)); // overlaid sweeps share one load axis (issue 4)
     b.lossDifferenceW.forEach((d, i) => closeTo(d, b.sweep.points[i].totalLoss - a.sweep.points[i].totalLoss, 1e-12)); // difference = B − A by definition
     expect(a.evaluation.conditions.loadA).toBe(design.spec.ratedLoadA); // ledgers at rated load by default (issue 4: "at a chosen load")
-    expect(out.comparison.winners[0]).toBe(1); // light load: the low-Qgd part wins (METHODS.md §4 switching term dominates)
+    expect(out.comparison.winners[0]).toBe(1); // light load: the low-Qgd part wins (docs/methods.md §4 switching term dominates)
     expect(out.comparison.winners[49]).toBe(0); // heavy load: the low-RDS(on) part wins (I²R dominates)
   });
 

@@ -28,7 +28,7 @@ describe('rankParts', () => {
   it('rejects a MOSFET whose voltage rating, derated, is below the switch stress', () => {
     // Hot-fin buck: Vin max 30 V; a 30 V part derated by the design's 0.8 allows 24 V < 30 V (schema.ts margins.voltageDerating).
     const design = demoDesign('hot-fin-buck.json');
-    expect(design.spec.vinMaxV).toBeGreaterThan(30 * design.margins.voltageDerating); // buck switch blocks Vin (METHODS.md §4: Vsw = Vin)
+    expect(design.spec.vinMaxV).toBeGreaterThan(30 * design.margins.voltageDerating); // buck switch blocks Vin (docs/methods.md §4: Vsw = Vin)
     const r = rankParts(design, { role: 'switch', library: library(), criterion: 'hottest-junction' });
     expect(r.rejected.find((x) => x.partId === 'nfet-30v-8m')?.reasons.join(' ')).toMatch(/Blocking voltage/); // derated 30 V rating < Vin max
     expect(r.ranked.map((p) => p.partId)).toContain('nfet-60v-15m'); // 60 V × 0.8 = 48 V ≥ 30 V

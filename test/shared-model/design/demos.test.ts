@@ -16,16 +16,16 @@ function library(): PartsLibrary {
 
 const ALL = DEMO_DESIGNS.map((d) => design(d.id));
 
-/** Ideal CCM duty and inductor current at one input voltage (METHODS.md §1: buck D = Vo/Vin, boost D = 1 − Vin/Vo). */
+/** Ideal CCM duty and inductor current at one input voltage (docs/methods.md §1: buck D = Vo/Vin, boost D = 1 − Vin/Vo). */
 function ideal(d: Design, vinV: number): { duty: number; meanA: number; rippleA: number } {
   const { voutV, ratedLoadA, switchingFrequencyHz: fs } = d.spec;
   const L = d.parts.inductor.inductanceH;
   if (d.topology.kind === 'buck') {
     const duty = voutV / vinV;
-    return { duty, meanA: ratedLoadA, rippleA: ((vinV - voutV) * duty) / (L * fs) }; // METHODS.md §1: buck ΔI = (Vin − Vo)·D/(L·fs)
+    return { duty, meanA: ratedLoadA, rippleA: ((vinV - voutV) * duty) / (L * fs) }; // docs/methods.md §1: buck ΔI = (Vin − Vo)·D/(L·fs)
   }
   const duty = 1 - vinV / voutV;
-  return { duty, meanA: ratedLoadA / (1 - duty), rippleA: (vinV * duty) / (L * fs) }; // METHODS.md §1: boost ΔI = Vin·D/(L·fs), IL = Io/D'
+  return { duty, meanA: ratedLoadA / (1 - duty), rippleA: (vinV * duty) / (L * fs) }; // docs/methods.md §1: boost ΔI = Vin·D/(L·fs), IL = Io/D'
 }
 
 const corners = (d: Design): number[] => [d.spec.vinMinV, d.spec.vinNomV, d.spec.vinMaxV];
@@ -43,8 +43,8 @@ describe('the demo designs are plausible to a practitioner', () => {
     const ind: Inductor = d.parts.inductor;
     for (const vin of corners(d)) {
       const { meanA, rippleA } = ideal(d, vin);
-      const peakA = meanA + rippleA / 2; // METHODS.md §1: Ipk = IL + ΔI/2
-      const bPeakT = (ind.inductanceH * peakA) / (ind.turns * ind.aeM2); // METHODS.md §7: Bpk = L·Ipk/(N·Ae)
+      const peakA = meanA + rippleA / 2; // docs/methods.md §1: Ipk = IL + ΔI/2
+      const bPeakT = (ind.inductanceH * peakA) / (ind.turns * ind.aeM2); // docs/methods.md §7: Bpk = L·Ipk/(N·Ae)
       expect(bPeakT).toBeLessThan(0.3); // common practice: power ferrite saturates near 0.35–0.5 T at 100 °C [from memory]
       const isatHotA = ind.isatA * (1 + ind.isatTempCoPerK * (100 - ind.isatAtC)); // linear Isat(T) as the schema defines it (design/parts.ts)
       expect(peakA).toBeLessThan(isatHotA);
@@ -52,7 +52,7 @@ describe('the demo designs are plausible to a practitioner', () => {
   });
 
   it.each(ALL.map((d) => [d.name, d] as const))('%s: the duty cycle needed at the lowest input is below the controller limit', (_n, d) => {
-    expect(ideal(d, d.spec.vinMinV).duty).toBeLessThan(d.spec.maxDuty); // METHODS.md §1 ideal duty; issue 2: honour the duty limit
+    expect(ideal(d, d.spec.vinMinV).duty).toBeLessThan(d.spec.maxDuty); // docs/methods.md §1 ideal duty; issue 2: honour the duty limit
   });
 
   it.each(ALL.map((d) => [d.name, d] as const))('%s: voltage ratings hold with the design\'s derating', (_n, d) => {
@@ -85,7 +85,7 @@ describe('the demo designs are plausible to a practitioner', () => {
       expect(core.alpha).toBeLessThan(2);
       expect(core.beta).toBeGreaterThan(2); // same source: β typically 2–3 [from memory]
       expect(core.beta).toBeLessThan(3);
-      const pv = core.kind === 'point' ? core.lossWPerM3 * (1e5 / core.atHz) ** core.alpha * (0.1 / core.atPeakT) ** core.beta : core.k * 1e5 ** core.alpha * 0.1 ** core.beta; // METHODS.md §7 Steinmetz
+      const pv = core.kind === 'point' ? core.lossWPerM3 * (1e5 / core.atHz) ** core.alpha * (0.1 / core.atPeakT) ** core.beta : core.k * 1e5 ** core.alpha * 0.1 ** core.beta; // docs/methods.md §7 Steinmetz
       expect(pv).toBeGreaterThan(50e3); // common practice: power ferrite loses 50–500 kW/m³ at 100 kHz, 100 mT [from memory]
       expect(pv).toBeLessThan(500e3);
       const le = d.parts.inductor.veM3 / d.parts.inductor.aeM2; // effective path length le = Ve/Ae (IEC 60205 [from memory])
@@ -108,12 +108,12 @@ describe('the demo designs are plausible to a practitioner', () => {
     if (rect.kind !== 'diode' || d.thermal.paths.rectifier.kind !== 'heatsink') throw new Error('the demo changed shape');
     const sink = d.thermal.heatsinks.find((h) => h.id === 'clip-fin');
     const { duty, meanA } = ideal(d, d.spec.vinNomV);
-    const iAvg = meanA * (1 - duty); // diode average current in a buck, METHODS.md §1 (avg = IL·D')
-    const vf0Hot = rect.vf0V + rect.vfTempCoVPerK * (100 - 25); // Vf0 falls about 1–2 mV/K (METHODS.md §6); 100 °C is above the fin
-    const lowerBoundW = vf0Hot * iAvg; // forward-drop loss without the Rd·I² term (METHODS.md §6): a lower bound
-    const finC = d.spec.ambientC + (sink?.thetaSaKPerW ?? 0) * lowerBoundW; // METHODS.md §10: Ts = Ta + θSA·ΣP
+    const iAvg = meanA * (1 - duty); // diode average current in a buck, docs/methods.md §1 (avg = IL·D')
+    const vf0Hot = rect.vf0V + rect.vfTempCoVPerK * (100 - 25); // Vf0 falls about 1–2 mV/K (docs/methods.md §6); 100 °C is above the fin
+    const lowerBoundW = vf0Hot * iAvg; // forward-drop loss without the Rd·I² term (docs/methods.md §6): a lower bound
+    const finC = d.spec.ambientC + (sink?.thetaSaKPerW ?? 0) * lowerBoundW; // docs/methods.md §10: Ts = Ta + θSA·ΣP
     expect(d.thermal.touch.rectifier?.touchable).toBe(true);
-    expect(finC).toBeGreaterThan(60); // IEC 60950-1 Table 4C: metal handles held briefly 60 °C (METHODS.md §11 [memory])
+    expect(finC).toBeGreaterThan(60); // IEC 60950-1 Table 4C: metal handles held briefly 60 °C (docs/methods.md §11 [memory])
     expect(finC + lowerBoundW * (rect.thetaJcKPerW + d.thermal.paths.rectifier.thetaCsKPerW)).toBeLessThan(rect.tjMaxC - d.margins.temperatureMarginK); // but the junction itself is fine
   });
 });
@@ -141,7 +141,7 @@ describe('the invented parts library', () => {
     const d = design('synchronous-buck');
     const lowR = fets[0] as Mosfet;
     const lowQ = fets[fets.length - 1] as Mosfet;
-    // Conduction D·I²·R (METHODS.md §1, RMS ≈ I√D) against gate drive Qg·Vdrv·fs (METHODS.md §4): equal at
+    // Conduction D·I²·R (docs/methods.md §1, RMS ≈ I√D) against gate drive Qg·Vdrv·fs (docs/methods.md §4): equal at
     // I* = √(ΔQg·Vdrv·fs / (D·ΔR)). The low-side position conducts for D' of the period.
     const dLow = 1 - d.spec.voutV / d.spec.vinNomV;
     const crossA = Math.sqrt(((lowR.qgC - lowQ.qgC) * d.parts.controller.driveV * d.spec.switchingFrequencyHz) / (dLow * (lowQ.rdsOn25Ohm - lowR.rdsOn25Ohm)));

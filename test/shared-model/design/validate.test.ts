@@ -126,9 +126,9 @@ describe('validateDesign applies the cross-field physics rules', () => {
   });
 
   it('keeps the gate-charge numbers consistent', () => {
-    const low = problemAt(demoWith('synchronous-buck', { 'parts.switch.qgC': 3e-9 }), 'parts.switch.qgC'); // Qg ≥ Qgs + Qgd: the gate-charge curve is cumulative (METHODS.md §4, Mohan et al. [from memory])
+    const low = problemAt(demoWith('synchronous-buck', { 'parts.switch.qgC': 3e-9 }), 'parts.switch.qgC'); // Qg ≥ Qgs + Qgd: the gate-charge curve is cumulative (docs/methods.md §4, Mohan et al. [from memory])
     expect(low.allowed).toBe('qgC ≥ qgsC + qgdC (3.7 nC)');
-    const plateau = problemAt(demoWith('synchronous-buck', { 'parts.switch.plateauV': 5 }), 'parts.switch.plateauV'); // Ig,on = (Vdrv − Vpl)/R must be > 0 (METHODS.md §4)
+    const plateau = problemAt(demoWith('synchronous-buck', { 'parts.switch.plateauV': 5 }), 'parts.switch.plateauV'); // Ig,on = (Vdrv − Vpl)/R must be > 0 (docs/methods.md §4)
     expect(plateau.message).toContain('parts.controller.driveV (5 V)');
     const both = demoWith('synchronous-buck', { 'parts.switch.qgsC': undefined, 'parts.switch.qgs2C': undefined });
     expect(problemAt(both, 'parts.switch.qgs2C').allowed).toBe('qgs2C or qgsC (one of them)');
@@ -150,7 +150,7 @@ describe('validateDesign applies the cross-field physics rules', () => {
   });
 
   it('refuses dead times that do not fit in the off time', () => {
-    // Buck at 10.8 V: D = 3.3/10.8 = 0.30556 → off time (1 − D)/450 kHz = 1.54321 µs (METHODS.md §1: buck D = Vo/Vin)
+    // Buck at 10.8 V: D = 3.3/10.8 = 0.30556 → off time (1 − D)/450 kHz = 1.54321 µs (docs/methods.md §1: buck D = Vo/Vin)
     const p = problemAt(demoWith('synchronous-buck', { 'topology.deadTimeBeforeOnS': 1e-6, 'topology.deadTimeAfterOffS': 0.6e-6 }), 'topology.deadTimeBeforeOnS');
     expect(p.allowed).toBe('deadTimeBeforeOnS + deadTimeAfterOffS < 1.54321 µs');
     const fits = validateDesign(demoWith('synchronous-buck', { 'topology.deadTimeBeforeOnS': 1e-6, 'topology.deadTimeAfterOffS': 0.5e-6 }));
@@ -158,7 +158,7 @@ describe('validateDesign applies the cross-field physics rules', () => {
   });
 
   it('checks custom touch-limit rows: sane limits, unique ids, a row for every touchable surface', () => {
-    const row = { id: 'r1', standard: 'ISO 13732-1:2006', clause: '', material: 'metal', contact: 'held', limitC: 51, recalled: true, note: '' }; // METHODS.md §11 [memory]: metal 51 °C at 1 min
+    const row = { id: 'r1', standard: 'ISO 13732-1:2006', clause: '', material: 'metal', contact: 'held', limitC: 51, recalled: true, note: '' }; // docs/methods.md §11 [memory]: metal 51 °C at 1 min
     const dup = demoWith('synchronous-buck', { 'thermal.customTouchLimits': [row, { ...row, limitC: 400 }] });
     expect(problemAt(dup, 'thermal.customTouchLimits[1].limitC').allowed).toBe('25 °C < limitC ≤ 150 °C');
     expect(problemAt(dup, 'thermal.customTouchLimits[1].id').message).toContain('unique');

@@ -12,7 +12,7 @@ import { closeTo } from '../../helpers/close-to.ts';
 
 describe('rating and life checks', () => {
   it('electrolytic life doubles every 10 K: 2000 h at 105 °C → 32 000 h at 65 °C', () => {
-    closeTo(electrolyticLifeHours(2000, 105, 65), 32000, 1e-12); // METHODS.md §9 [common practice, 10 K rule]
+    closeTo(electrolyticLifeHours(2000, 105, 65), 32000, 1e-12); // docs/methods.md §9 [common practice, 10 K rule]
     const c = lifeCheck('outputCapacitor', 32000, 20000);
     expect(c.ok).toBe(true);
     closeTo(c.marginFraction, (32000 - 20000) / 20000, 1e-12); // more life than required: positive margin

@@ -18,7 +18,7 @@ describe.each(DEMOS)('landmarks of the demo design %s', (file) => {
     for (const p of usable) expect(p.efficiency).toBeLessThanOrEqual(value + 1e-12); // definition of a maximum
     closeTo(evaluate(design, { loadA: load }).efficiency, value, 1e-9); // the landmark is an engine point, not an interpolation
     if (marks.peak.note === null) {
-      expect(evaluate(design, { loadA: load * 0.99 }).efficiency).toBeLessThan(value); // local maximum (METHODS.md §12: fixed = I²R loss at the peak)
+      expect(evaluate(design, { loadA: load * 0.99 }).efficiency).toBeLessThan(value); // local maximum (docs/methods.md §12: fixed = I²R loss at the peak)
       expect(evaluate(design, { loadA: load * 1.01 }).efficiency).toBeLessThan(value); // local maximum, other side
     }
   });
@@ -41,11 +41,11 @@ describe.each(DEMOS)('landmarks of the demo design %s', (file) => {
       expect(sweep.points.every((p) => p.mode === sweep.points[0].mode)).toBe(true); // null only when the mode never changes
       return;
     }
-    expect(evaluate(design, { loadA: b.load * 0.999 }).conductionMode).toBe('DCM'); // METHODS.md §2: K < Kcrit below the boundary
-    expect(evaluate(design, { loadA: b.load * 1.001 }).conductionMode).toBe('CCM'); // METHODS.md §2: K > Kcrit above it
+    expect(evaluate(design, { loadA: b.load * 0.999 }).conductionMode).toBe('DCM'); // docs/methods.md §2: K < Kcrit below the boundary
+    expect(evaluate(design, { loadA: b.load * 1.001 }).conductionMode).toBe('CCM'); // docs/methods.md §2: K > Kcrit above it
     if (design.topology.kind === 'buck') {
       const ripple = evaluate(design, { loadA: b.load }).operatingPoint.inductor.rippleA;
-      closeTo(b.load, ripple / 2, 2e-3); // METHODS.md §2: buck boundary where mean inductor current = ΔI/2 (K = Kcrit)
+      closeTo(b.load, ripple / 2, 2e-3); // docs/methods.md §2: buck boundary where mean inductor current = ΔI/2 (K = Kcrit)
     }
   });
 
@@ -63,7 +63,7 @@ describe.each(DEMOS)('landmarks of the demo design %s', (file) => {
         : at.temperatures.find((x) => x.part === c.part)?.marginK;
     const runaway = above.warnings.some((w) => w.code === 'thermal-runaway');
     if (!runaway) closeTo(margin ?? NaN, 0, 0, 0.05); // definition: margin to the derated (or touch) limit is zero at the ceiling
-    else expect(at.warnings.some((w) => w.code === 'thermal-runaway')).toBe(false); // METHODS.md §10: runaway starts at the ceiling
+    else expect(at.warnings.some((w) => w.code === 'thermal-runaway')).toBe(false); // docs/methods.md §10: runaway starts at the ceiling
   });
 
   it('regulation limit: the named cause appears just above the load and not below it', () => {

@@ -3,9 +3,9 @@ import { axisValues, DEFAULT_KNEE_THRESHOLD_POINTS, findKnee, findLandmarks, fin
 import { closeTo } from '../../helpers/close-to.ts';
 import { efficiencyOf, syntheticDesign, syntheticEvaluator } from './synthetic.ts';
 
-// METHODS.md §12 curve: Vo 12 V, P0 0.2 W, a 0.05 V, b 0.02 Ω.
+// docs/methods.md §12 curve: Vo 12 V, P0 0.2 W, a 0.05 V, b 0.02 Ω.
 const curve = { voutV: 12, p0W: 0.2, aV: 0.05, b0Ohm: 0.02 };
-const etaStar = 12 / (12 + 0.05 + 2 * Math.sqrt(0.2 * 0.02)); // METHODS.md §12 closed form η*
+const etaStar = 12 / (12 + 0.05 + 2 * Math.sqrt(0.2 * 0.02)); // docs/methods.md §12 closed form η*
 
 /** Knee in closed form: the smaller root of b·I² + (a − Vo(1 − ηt)/ηt)·I + P0 = 0, ηt = η* − X/100. */
 function kneeByHand(points: number): number {
@@ -21,20 +21,20 @@ describe('light-load knee: the lightest load within X percentage points of the p
   const peak = findPeak(loads, eff, undefined, probe);
 
   it('states its definition in one sentence that names the threshold', () => {
-    expect(kneeDefinition(3)).toMatch(/lightest load at which efficiency comes within 3 percentage points of its peak/); // our definition (METHODS.md §12: define ours, state it)
+    expect(kneeDefinition(3)).toMatch(/lightest load at which efficiency comes within 3 percentage points of its peak/); // our definition (docs/methods.md §12: define ours, state it)
     expect(kneeDefinition(3).split('. ').length).toBe(1); // one sentence, as issue 4 requires
     expect(DEFAULT_KNEE_THRESHOLD_POINTS).toBe(2); // our documented default (knee.ts header)
   });
 
-  it('puts the 2-point knee of the METHODS.md §12 curve at 0.543704 A', () => {
+  it('puts the 2-point knee of the docs/methods.md §12 curve at 0.543704 A', () => {
     closeTo(kneeByHand(2), 0.543704, 1e-6); // same quadratic root evaluated independently in Python 3 (float64) during test design
-    closeTo(findKnee(loads, eff, peak, 2, undefined, probe).load as number, 0.543704, 1e-6); // METHODS.md §12 model, Python 3 root
+    closeTo(findKnee(loads, eff, peak, 2, undefined, probe).load as number, 0.543704, 1e-6); // docs/methods.md §12 model, Python 3 root
   });
 
   for (const points of [1, 2, 5]) {
     it(`matches the closed-form knee for a ${points}-point threshold`, () => {
       const knee = findKnee(loads, eff, peak, points, undefined, probe);
-      closeTo(knee.load as number, kneeByHand(points), 1e-7); // quadratic root from METHODS.md §12 loss model (knee.ts header)
+      closeTo(knee.load as number, kneeByHand(points), 1e-7); // quadratic root from docs/methods.md §12 loss model (knee.ts header)
       closeTo(knee.value as number, etaStar - points / 100, 1e-9); // definition: efficiency at the knee is η* − X points
       expect(knee.thresholdPoints).toBe(points); // the threshold is a setting (issue 4)
     });
@@ -42,7 +42,7 @@ describe('light-load knee: the lightest load within X percentage points of the p
 
   it('lands within a fifth of a grid step of the closed form by interpolation alone', () => {
     const knee = findKnee(loads, eff, findPeak(loads, eff), 2);
-    const expected = kneeByHand(2); // METHODS.md §12 loss model, quadratic root
+    const expected = kneeByHand(2); // docs/methods.md §12 loss model, quadratic root
     const i = loads.findIndex((x) => x > expected);
     expect(Math.abs((knee.load as number) - expected)).toBeLessThan((loads[i] - loads[i - 1]) / 5); // straight-line interpolation of a smooth curve within one step
   });
@@ -50,14 +50,14 @@ describe('light-load knee: the lightest load within X percentage points of the p
   it('moves to heavier loads as the threshold tightens', () => {
     const k1 = findKnee(loads, eff, peak, 1, undefined, probe).load as number;
     const k5 = findKnee(loads, eff, peak, 5, undefined, probe).load as number;
-    expect(k1).toBeGreaterThan(k5); // η rises monotonically below Io* (METHODS.md §12), so a tighter band is reached later
+    expect(k1).toBeGreaterThan(k5); // η rises monotonically below Io* (docs/methods.md §12), so a tighter band is reached later
   });
 
   it('is null with a reason when the sweep starts above the knee', () => {
     const heavy = axisValues(1, 12, 200, 'log');
     const e = heavy.map(probe);
     const knee = findKnee(heavy, e, findPeak(heavy, e), 2);
-    expect(kneeByHand(2)).toBeLessThan(1); // METHODS.md §12 closed form puts the 2-point knee below 1 A
+    expect(kneeByHand(2)).toBeLessThan(1); // docs/methods.md §12 closed form puts the 2-point knee below 1 A
     expect(knee.load).toBeNull(); // so no swept point lies below it
     expect(knee.reason).toMatch(/below the swept range/); // the reason says why (issue 4: null with a reason)
   });
@@ -66,7 +66,7 @@ describe('light-load knee: the lightest load within X percentage points of the p
     const design = syntheticDesign(10);
     const evaluator = syntheticEvaluator(curve);
     const marks = findLandmarks(sweepLoad(design, { evaluator }), { design, evaluator, kneeThresholdPoints: 2 });
-    closeTo(marks.knee.load as number, kneeByHand(2), 1e-7); // METHODS.md §12 loss model, quadratic root
+    closeTo(marks.knee.load as number, kneeByHand(2), 1e-7); // docs/methods.md §12 loss model, quadratic root
     expect(marks.knee.definition).toBe(kneeDefinition(2)); // the definition travels with the landmark (issue 4)
   });
 });

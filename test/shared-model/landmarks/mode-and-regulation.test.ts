@@ -8,10 +8,10 @@ const design = syntheticDesign(10);
 
 describe('CCM/DCM boundary', () => {
   it('is found at the load where the reported mode changes, refined on the engine', () => {
-    // Stand-in: DCM below Io = ΔI/2 with ΔI = 2 × 0.8125 A (buck boundary K = Kcrit, METHODS.md §2).
+    // Stand-in: DCM below Io = ΔI/2 with ΔI = 2 × 0.8125 A (buck boundary K = Kcrit, docs/methods.md §2).
     const evaluator = syntheticEvaluator({ ...curve, boundaryA: 0.8125 });
     const marks = findLandmarks(sweepLoad(design, { evaluator }), { design, evaluator });
-    closeTo(marks.modeBoundary.load as number, 0.8125, 1e-6); // METHODS.md §2: boundary where mean current = ripple/2
+    closeTo(marks.modeBoundary.load as number, 0.8125, 1e-6); // docs/methods.md §2: boundary where mean current = ripple/2
     expect(marks.modeBoundary.method).toBe('refined'); // placed on the engine, not interpolated (find-landmarks.ts contract)
   });
 
@@ -20,13 +20,13 @@ describe('CCM/DCM boundary', () => {
     const sweep = sweepLoad(design, { evaluator, spacing: 'linear', fromA: 0.1, toA: 12, points: 120 });
     const b = findModeBoundary(sweep.points);
     const step = sweep.points[1].loadA - sweep.points[0].loadA;
-    expect(Math.abs((b.load as number) - 0.8125)).toBeLessThanOrEqual(step / 2); // METHODS.md §2 boundary; midpoint is within half a step
+    expect(Math.abs((b.load as number) - 0.8125)).toBeLessThanOrEqual(step / 2); // docs/methods.md §2 boundary; midpoint is within half a step
   });
 
   it('is null with a reason when the converter never leaves CCM', () => {
     const evaluator = syntheticEvaluator(curve);
     const marks = findLandmarks(sweepLoad(design, { evaluator }), { design, evaluator });
-    expect(marks.modeBoundary.load).toBeNull(); // the stand-in reports CCM everywhere (forced PWM, METHODS.md §2 last item)
+    expect(marks.modeBoundary.load).toBeNull(); // the stand-in reports CCM everywhere (forced PWM, docs/methods.md §2 last item)
     expect(marks.modeBoundary.reason).toMatch(/stays in CCM/); // issue 4: null with a reason
   });
 });
@@ -42,7 +42,7 @@ describe('regulation limit', () => {
   });
 
   it('excludes points beyond the limit from the peak search', () => {
-    // Duty limit at 2 A lies below the unconstrained peak √(P0/b) = 3.16 A (METHODS.md §12).
+    // Duty limit at 2 A lies below the unconstrained peak √(P0/b) = 3.16 A (docs/methods.md §12).
     const evaluator = syntheticEvaluator({ ...curve, dutyPerA: 0.5, maxDuty: 1 });
     const marks = findLandmarks(sweepLoad(design, { evaluator }), { design, evaluator });
     expect(marks.peak.load as number).toBeLessThanOrEqual(2); // by hand: 1/0.5 = 2 A limit

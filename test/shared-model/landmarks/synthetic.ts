@@ -2,8 +2,8 @@
  * Test-only stand-in for the ledger: an evaluator whose efficiency, temperatures, mode and warnings follow
  * closed forms, so landmark finders can be checked against answers known by hand.
  *
- * Loss (METHODS.md §12): P(Io) = P0 + a·Io + b(T)·Io² with b(T) = b0·(1 + alpha·(T − 25 °C)); one part
- * ("inductor") carries the I² term and sits at T = Ta + thetaKPerW·b(T)·Io² (METHODS.md §10 fixed point,
+ * Loss (docs/methods.md §12): P(Io) = P0 + a·Io + b(T)·Io² with b(T) = b0·(1 + alpha·(T − 25 °C)); one part
+ * ("inductor") carries the I² term and sits at T = Ta + thetaKPerW·b(T)·Io² (docs/methods.md §10 fixed point,
  * solved in closed form: T = (Ta + θ·b0·Io²·(1 − 25·alpha))/(1 − θ·b0·alpha·Io²)).
  * Mode: DCM below `boundaryA`. Duty: dutyPerA·Io, with a duty-limit warning above maxDuty.
  */

@@ -36,20 +36,20 @@ describe('evaluate: the record', () => {
     }
   });
   it('books no overlap loss to a synchronous rectifier (it switches at zero voltage)', () => {
-    expect(e.losses.filter((t) => t.part === 'rectifier').map((t) => t.mechanism).sort()).toEqual(['conduction', 'dead-time diode', 'gate drive']); // METHODS.md §4
+    expect(e.losses.filter((t) => t.part === 'rectifier').map((t) => t.mechanism).sort()).toEqual(['conduction', 'dead-time diode', 'gate drive']); // docs/methods.md §4
   });
   it('reports temperatures that are exactly Ta + θ·P of the losses shown', () => {
     const sw = e.temperatures.find((t) => t.part === 'switch')!;
     const p = e.losses.filter((t) => t.part === 'switch').reduce((a, t) => a + t.watts, 0);
     closeTo(sw.dissipationW, p, 1e-12);
-    closeTo(sw.celsius, e.conditions.ambientC + 40 * p, 1e-12); // direct θJA 40 K/W of the test design (METHODS.md §10)
+    closeTo(sw.celsius, e.conditions.ambientC + 40 * p, 1e-12); // direct θJA 40 K/W of the test design (docs/methods.md §10)
     closeTo(sw.marginK, sw.limit - 10 - sw.celsius, 1e-12); // margin 10 K in the test design
   });
   it('splits the gate drive between the FETs and the driver so that it adds up to ΣQg·Vdrv·fs', () => {
     const d = valid(design(SYNC_BUCK));
     const gate = e.losses.filter((t) => t.mechanism === 'gate drive').reduce((a, t) => a + t.watts, 0);
     const qg = d.parts.switch.qgC + (d.parts.rectifier.kind === 'mosfet' ? d.parts.rectifier.qgC : 0);
-    closeTo(gate, qg * d.parts.controller.driveV * d.spec.switchingFrequencyHz, 1e-12); // METHODS.md §4: Qg·Vdrv·fs
+    closeTo(gate, qg * d.parts.controller.driveV * d.spec.switchingFrequencyHz, 1e-12); // docs/methods.md §4: Qg·Vdrv·fs
   });
 });
 
@@ -74,7 +74,7 @@ describe('evaluate: conduction modes and edges', () => {
     expect(e.conductionMode).toBe('CCM');
     const rr = term(e, 'switch', 'reverse recovery')!;
     const on = e.operatingPoint.edges.turnOn; // the diode's forward current when the switch turns on is the valley current
-    // METHODS.md §4 Qrr·Vsw·fs with the charge scaled from its 2 A test current (charge-control model Q ∝ IF, Mohan et al. [from memory])
+    // docs/methods.md §4 Qrr·Vsw·fs with the charge scaled from its 2 A test current (charge-control model Q ∝ IF, Mohan et al. [from memory])
     closeTo(rr.watts, 40e-9 * (on.currentA / 2) * on.voltageV * d.spec.switchingFrequencyHz, 1e-12);
     expect(e.warnings.some((w) => w.path === 'parts.rectifier.qrrTestA')).toBe(false); // a stated test current needs no note
   });
@@ -85,7 +85,7 @@ describe('evaluate: conduction modes and edges', () => {
     const e = evaluate(d);
     const on = e.operatingPoint.edges.turnOn;
     const rr = term(e, 'switch', 'reverse recovery')!;
-    // METHODS.md §4 Qrr·Vsw·fs, Itest = rated load (our stated default; losses/reverse-recovery.ts header)
+    // docs/methods.md §4 Qrr·Vsw·fs, Itest = rated load (our stated default; losses/reverse-recovery.ts header)
     closeTo(rr.watts, 40e-9 * (on.currentA / d.spec.ratedLoadA) * on.voltageV * d.spec.switchingFrequencyHz, 1e-12);
     expect(rr.inputs.find((i) => i.name.startsWith('Itest'))?.value).toBe(d.spec.ratedLoadA); // the ledger shows the current it assumed
     expect(e.warnings.some((w) => w.code === 'model-limit' && w.path === 'parts.rectifier.qrrTestA')).toBe(true); // and a model-limit note names the field
@@ -95,7 +95,7 @@ describe('evaluate: conduction modes and edges', () => {
     const e = evaluate(d);
     const cj = d.parts.rectifier.kind === 'diode' ? d.parts.rectifier.cjF : 0;
     const v = e.operatingPoint.edges.turnOn.voltageV;
-    closeTo(term(e, 'switch', 'junction capacitance')!.watts, 0.5 * cj * v * v * d.spec.switchingFrequencyHz, 1e-12); // METHODS.md §6
+    closeTo(term(e, 'switch', 'junction capacitance')!.watts, 0.5 * cj * v * v * d.spec.switchingFrequencyHz, 1e-12); // docs/methods.md §6
   });
   it('notes an estimated Qgs2', () => {
     const d = valid(design(SYNC_BUCK, (x) => {
@@ -139,11 +139,11 @@ describe('evaluate: heatsinks, hazards and checks', () => {
     const pSw = e.temperatures.find((t) => t.part === 'switch')!.dissipationW;
     const pRect = e.temperatures.find((t) => t.part === 'rectifier')!.dissipationW;
     closeTo(sink.dissipationW, pSw + pRect, 1e-12);
-    closeTo(sink.celsius, e.conditions.ambientC + 8 * (pSw + pRect), 1e-12); // METHODS.md §10: Ts = Ta + θSA·ΣP
+    closeTo(sink.celsius, e.conditions.ambientC + 8 * (pSw + pRect), 1e-12); // docs/methods.md §10: Ts = Ta + θSA·ΣP
     const h = e.hazards.find((x) => x.part === 'switch')!;
     expect(h.surfaceC).toBe(sink.celsius); // the surface of a sink-mounted part is the sink
     expect(h.row.material).toBe('metal'); // the sink's own surface material
-    expect(h.row.limitC).toBe(55); // strictest 'held' metal row (METHODS.md §11, IEC 60950-1 Table 4C)
+    expect(h.row.limitC).toBe(55); // strictest 'held' metal row (docs/methods.md §11, IEC 60950-1 Table 4C)
     closeTo(h.marginK, 55 - sink.celsius, 1e-12);
   });
   it('warns of a burn hazard when the surface is above the limit', () => {
@@ -154,7 +154,7 @@ describe('evaluate: heatsinks, hazards and checks', () => {
     }));
     const e = evaluate(d);
     const h = e.hazards.find((x) => x.part === 'inductor')!;
-    expect(h.exceeded).toBe(h.surfaceC > 43); // METHODS.md §11: metal 43 °C at 8 h
+    expect(h.exceeded).toBe(h.surfaceC > 43); // docs/methods.md §11: metal 43 °C at 8 h
     if (h.exceeded) expect(e.warnings.some((w) => w.code === 'burn-hazard' && w.part === 'inductor')).toBe(true);
   });
   it('checks Isat at the hot winding temperature and electrolytic life against the requirement', () => {
@@ -172,7 +172,7 @@ describe('evaluate: heatsinks, hazards and checks', () => {
     expect(sat.ok).toBe(sat.value <= sat.limit);
     const life = e.checks.find((c) => c.check === 'capacitor-life')!;
     const tC = e.temperatures.find((t) => t.part === 'outputCapacitor')!.celsius;
-    closeTo(life.value, 2000 * 2 ** ((105 - tC) / 10), 1e-12); // METHODS.md §9: 10 K rule [common practice]
+    closeTo(life.value, 2000 * 2 ** ((105 - tC) / 10), 1e-12); // docs/methods.md §9: 10 K rule [common practice]
     expect(life.ok).toBe(false);
     expect(e.warnings.some((w) => w.code === 'capacitor-life')).toBe(true);
   });

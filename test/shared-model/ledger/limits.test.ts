@@ -9,7 +9,7 @@ function finite(x: unknown): boolean {
 
 describe('evaluate at the limits of regulation', () => {
   it('an unregulated boost at its duty limit keeps input = output + Σ terms and says so', () => {
-    const d = valid(design({ ...DIODE_BOOST, maxDuty: 0.5 })); // 5 V → 12 V needs D ≈ 0.6 (METHODS.md §1: M = 1/D′)
+    const d = valid(design({ ...DIODE_BOOST, maxDuty: 0.5 })); // 5 V → 12 V needs D ≈ 0.6 (docs/methods.md §1: M = 1/D′)
     const e = evaluate(d);
     expect(e.warnings.some((w) => w.code === 'cannot-regulate')).toBe(true);
     expect(e.operatingPoint.regulated).toBe(false);

@@ -39,7 +39,7 @@ describe('the ledger at the CCM/DCM boundary of the demo synchronous buck', () =
 
   it('finds the boundary with DCM just below it and CCM just above it', () => {
     expect(marks.modeBoundary.method).toBe('refined'); // placed on the engine (landmarks/mode-boundary.ts)
-    expect(below.conductionMode).toBe('DCM'); // METHODS.md §2: DCM below the boundary
+    expect(below.conductionMode).toBe('DCM'); // docs/methods.md §2: DCM below the boundary
     expect(above.conductionMode).toBe('CCM');
   });
 
@@ -47,11 +47,11 @@ describe('the ledger at the CCM/DCM boundary of the demo synchronous buck', () =
     expect(watts(below, 'reverse recovery')).toBe(0); // DCM: the diode stopped on its own (charge-control model, [from memory])
     const on = above.operatingPoint.edges.turnOn;
     expect(on.currentA).toBeGreaterThan(0); // CCM side: a small positive valley current still flows in the body diode
-    expect(on.currentA).toBeLessThan(1e-3); // ... and it is small next to the 0.6 A load (valley → 0 at the boundary, METHODS.md §2)
+    expect(on.currentA).toBeLessThan(1e-3); // ... and it is small next to the 0.6 A load (valley → 0 at the boundary, docs/methods.md §2)
     const rect = design.parts.rectifier;
     const qrr = rect.kind === 'mosfet' ? rect.bodyDiodeQrrC : 0;
     const testA = rect.kind === 'mosfet' ? (rect.bodyDiodeQrrTestA ?? design.spec.ratedLoadA) : 1;
-    // METHODS.md §4 Qrr·Vsw·fs with Q ∝ IF (charge-control model [from memory]) at that valley current
+    // docs/methods.md §4 Qrr·Vsw·fs with Q ∝ IF (charge-control model [from memory]) at that valley current
     closeTo(watts(above, 'reverse recovery'), qrr * (on.currentA / testA) * on.voltageV * above.conditions.switchingFrequencyHz, 1e-9);
     expect(watts(above, 'reverse recovery')).toBeLessThan(STEP_W / 10); // far below the 97 mW the unscaled Qrr gave
   });
@@ -60,6 +60,6 @@ describe('the ledger at the CCM/DCM boundary of the demo synchronous buck', () =
     const step = Math.abs(above.totalLoss - below.totalLoss);
     expect(step, `ledger: ${below.totalLoss} W below, ${above.totalLoss} W above`).toBeLessThan(STEP_W); // continuity (charge-control model; swing at the idle start)
     const coss = Math.abs(watts(above, 'output capacitance') - watts(below, 'output capacitance'));
-    expect(coss).toBeLessThan(STEP_W / 10); // ½·Coss·V² with the same swing on both sides (METHODS.md §4)
+    expect(coss).toBeLessThan(STEP_W / 10); // ½·Coss·V² with the same swing on both sides (docs/methods.md §4)
   });
 });

@@ -5,7 +5,7 @@ import { gamma } from '../../../shared-model/losses/gamma.ts';
 import type { Segment } from '../../../shared-model/index.ts';
 import { closeTo } from '../../helpers/close-to.ts';
 
-// METHODS.md §7 material: α 1.46, β 2.75, k such that a 100 kHz, 0.1 T sine gives 300 kW/m³.
+// docs/methods.md §7 material: α 1.46, β 2.75, k such that a 100 kHz, 0.1 T sine gives 300 kW/m³.
 const ALPHA = 1.46;
 const BETA = 2.75;
 const K = steinmetzKFromPoint(300e3, 100e3, 0.1, ALPHA, BETA);
@@ -20,20 +20,20 @@ describe('gamma function (Lanczos)', () => {
 
 describe('Steinmetz and iGSE coefficients', () => {
   it('derives k = 8.455149 from the 300 kW/m³ point', () => {
-    closeTo(K, 8.455149, 1e-6); // METHODS.md §7: k 8.455149
+    closeTo(K, 8.455149, 1e-6); // docs/methods.md §7: k 8.455149
   });
   it('computes ∫₀^{2π}|cos θ|^α dθ = 3.529752 for α 1.46, and π for α 2', () => {
-    closeTo(cosPowerIntegral(ALPHA), 3.529752, 1e-6); // METHODS.md §7
+    closeTo(cosPowerIntegral(ALPHA), 3.529752, 1e-6); // docs/methods.md §7
     closeTo(cosPowerIntegral(2), Math.PI, 1e-13); // ∫cos² over a period = π (elementary)
   });
   it('computes ki 0.420616 (and 0.0570557 for α 1.5, β 2.5, k 1)', () => {
-    closeTo(igseKi(K, ALPHA, BETA), 0.420616, 1e-6); // METHODS.md §7: ki 0.420616
-    closeTo(igseKi(1, 1.5, 2.5), 0.0570557, 1e-6); // METHODS.md §7: (α 1.5, β 2.5, k 1 → ki 0.0570557)
+    closeTo(igseKi(K, ALPHA, BETA), 0.420616, 1e-6); // docs/methods.md §7: ki 0.420616
+    closeTo(igseKi(1, 1.5, 2.5), 0.0570557, 1e-6); // docs/methods.md §7: (α 1.5, β 2.5, k 1 → ki 0.0570557)
   });
   it("derives k from a 'point' core-loss record", () => {
     const c = coreCoefficients({ kind: 'point', lossWPerM3: 300e3, atHz: 100e3, atPeakT: 0.1, alpha: ALPHA, beta: BETA });
-    closeTo(c.k, 8.455149, 1e-6); // METHODS.md §7: k 8.455149
-    closeTo(c.ki, 0.420616, 1e-6); // METHODS.md §7: ki 0.420616
+    closeTo(c.k, 8.455149, 1e-6); // docs/methods.md §7: k 8.455149
+    closeTo(c.ki, 0.420616, 1e-6); // docs/methods.md §7: ki 0.420616
   });
 });
 
@@ -45,7 +45,7 @@ describe('iGSE on piecewise-linear flux', () => {
       { durationS: T / 2, i0A: -0.1, i1A: 0.1 },
       { durationS: T / 2, i0A: 0.1, i1A: -0.1 },
     ];
-    closeTo(igseLossDensity(ki, ALPHA, BETA, 1, segs), 276198.9, 1e-6); // METHODS.md §7: triangle → 276 198.9 W/m³
+    closeTo(igseLossDensity(ki, ALPHA, BETA, 1, segs), 276198.9, 1e-6); // docs/methods.md §7: triangle → 276 198.9 W/m³
   });
   it('returns the Steinmetz 300 kW/m³ when integrated numerically over the sine', () => {
     const T = 1e-5;
@@ -56,7 +56,7 @@ describe('iGSE on piecewise-linear flux', () => {
       const b1 = 0.1 * Math.sin((2 * Math.PI * (k + 1)) / n);
       segs.push({ durationS: T / n, i0A: b0, i1A: b1 });
     }
-    closeTo(igseLossDensity(ki, ALPHA, BETA, 1, segs), 300e3, 1e-3); // METHODS.md §7: iGSE over the sine must return 300 kW/m³ (numerical, 1e-3)
+    closeTo(igseLossDensity(ki, ALPHA, BETA, 1, segs), 300e3, 1e-3); // docs/methods.md §7: iGSE over the sine must return 300 kW/m³ (numerical, 1e-3)
   });
   it('matches the closed form ki·ΔB^β·f^α·(D^(1−α) + D′^(1−α)) for an asymmetric triangle', () => {
     const T = 4e-6;
@@ -65,7 +65,7 @@ describe('iGSE on piecewise-linear flux', () => {
       { durationS: d * T, i0A: 0, i1A: 0.15 },
       { durationS: (1 - d) * T, i0A: 0.15, i1A: 0 },
     ];
-    const closed = ki * 0.15 ** BETA * (1 / T) ** ALPHA * (d ** (1 - ALPHA) + (1 - d) ** (1 - ALPHA)); // METHODS.md §7 triangle formula
+    const closed = ki * 0.15 ** BETA * (1 / T) ** ALPHA * (d ** (1 - ALPHA) + (1 - d) ** (1 - ALPHA)); // docs/methods.md §7 triangle formula
     closeTo(igseLossDensity(ki, ALPHA, BETA, 1, segs), closed, 1e-12);
   });
   it('adds nothing for the flat DCM idle interval (same energy per cycle over a longer period)', () => {
@@ -84,10 +84,10 @@ describe('iGSE on piecewise-linear flux', () => {
       { durationS: 1e-6, i0A: 1, i1A: 2 },
       { durationS: 1e-6, i0A: 2, i1A: 1 },
     ];
-    const fluxPerAmp = 10e-6 / (10 * 20e-6); // L/(N·Ae) (METHODS.md §7: ΔB = L·ΔI/(N·Ae))
+    const fluxPerAmp = 10e-6 / (10 * 20e-6); // L/(N·Ae) (docs/methods.md §7: ΔB = L·ΔI/(N·Ae))
     closeTo(fluxSwingT(fluxPerAmp, segs), fluxPerAmp * 1, 1e-15);
     const w = coreLoss.watts({ kiWPerM3: ki, alpha: ALPHA, beta: BETA, veM3: 2e-6, fluxPerAmpT: fluxPerAmp, segments: segs });
-    closeTo(w, 2e-6 * igseLossDensity(ki, ALPHA, BETA, fluxPerAmp, segs), 1e-12); // P = Pv·Ve (METHODS.md §7)
+    closeTo(w, 2e-6 * igseLossDensity(ki, ALPHA, BETA, fluxPerAmp, segs), 1e-12); // P = Pv·Ve (docs/methods.md §7)
     expect(coreLoss.describe({ kiWPerM3: ki, alpha: ALPHA, beta: BETA, veM3: 2e-6, fluxPerAmpT: fluxPerAmp, segments: segs }).map((x) => x.name)).toContain('ΔB (peak to peak)');
   });
 });

@@ -24,8 +24,8 @@ function triangle(meanA: number, rippleA: number, d: number, periodS: number): S
 describe('winding DC loss', () => {
   it('uses DCR(T) with copper α20 0.00393/K: 10 mΩ at 20 °C → 13.144 mΩ at 100 °C', () => {
     const r = copperResistanceAt(0.01, 100);
-    closeTo(r, 0.013144, 1e-9); // METHODS.md §8: IEC 60028 copper, 10 mΩ at 20 °C → 13.144 mΩ at 100 °C
-    closeTo(windingDc.watts({ irmsA: 3.004722, dcrOhm: r, temperatureC: 100 }), 3.004722 ** 2 * 0.013144, 1e-9); // METHODS.md §1: IL,rms 3.004722 A
+    closeTo(r, 0.013144, 1e-9); // docs/methods.md §8: IEC 60028 copper, 10 mΩ at 20 °C → 13.144 mΩ at 100 °C
+    closeTo(windingDc.watts({ irmsA: 3.004722, dcrOhm: r, temperatureC: 100 }), 3.004722 ** 2 * 0.013144, 1e-9); // docs/methods.md §1: IL,rms 3.004722 A
   });
 });
 
@@ -38,10 +38,10 @@ describe('winding AC loss', () => {
 
 describe('skin depth and Dowell', () => {
   it('gives δ = 0.208981 mm in copper at 100 kHz and 20 °C', () => {
-    closeTo(skinDepthM(copperResistivityOhmM(20), 100e3), 0.208981e-3, 1e-5); // METHODS.md §8: δ 0.208981 mm at 100 kHz, 20 °C
+    closeTo(skinDepthM(copperResistivityOhmM(20), 100e3), 0.208981e-3, 1e-5); // docs/methods.md §8: δ 0.208981 mm at 100 kHz, 20 °C
   });
   it('gives F_R(Δ = 1, m = 1) = 1.085636', () => {
-    closeTo(dowellFactor(1, 1), 1.085636, 1e-6); // METHODS.md §8: Dowell, Proc. IEE 113(8), 1966
+    closeTo(dowellFactor(1, 1), 1.085636, 1e-6); // docs/methods.md §8: Dowell, Proc. IEE 113(8), 1966
   });
   it('tends to Δ for one layer at high frequency (current in one skin depth)', () => {
     closeTo(dowellFactor(30, 1), 30, 1e-9); // Dowell 1966: (sinh 2Δ + sin 2Δ)/(cosh 2Δ − cos 2Δ) → 1 as Δ → ∞
@@ -62,7 +62,7 @@ describe('harmonics of the ripple', () => {
     harmonicPowers(triangle(3, ripple, 0.3, 2e-6), n, out);
     let sum = 0;
     for (let k = 0; k < n; k++) sum += out[k]!;
-    closeTo(sum, (ripple * ripple) / 12, 1e-8); // METHODS.md §8: sum of squares of the harmonics equals ΔI²/12 (Parseval)
+    closeTo(sum, (ripple * ripple) / 12, 1e-8); // docs/methods.md §8: sum of squares of the harmonics equals ΔI²/12 (Parseval)
   });
   it('give the fundamental of a symmetric triangle: amplitude 8·(ΔI/2)/π²', () => {
     const out = new Float64Array(2);

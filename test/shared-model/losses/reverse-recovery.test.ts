@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { chargeAtEdge, reverseRecovery, type ReverseRecoveryInputs } from '../../../shared-model/losses/reverse-recovery.ts';
 import { closeTo } from '../../helpers/close-to.ts';
 
-// METHODS.md §4 check case: Qrr 20 nC, Vsw = Vin 12 V, fs 500 kHz → 0.12 W. The datasheet charge is stated
+// docs/methods.md §4 check case: Qrr 20 nC, Vsw = Vin 12 V, fs 500 kHz → 0.12 W. The datasheet charge is stated
 // at a test current; the check holds where the diode carries exactly that current at the edge.
 const CHECK = { qrrC: 20e-9, voltageV: 12, frequencyHz: 500e3, watts: 0.12 };
 const TEST_A = 10; // an invented test current; the check must not depend on its value
@@ -12,8 +12,8 @@ const at = (forwardA: number, testA = TEST_A): ReverseRecoveryInputs => ({
 
 describe('reverse recovery: Qrr · (IF / Itest) · Vsw · fs', () => {
   it('gives 0.12 W for 20 nC at 12 V and 500 kHz when the forward current equals the Qrr test current', () => {
-    closeTo(reverseRecovery.watts(at(TEST_A)), CHECK.watts, 1e-9); // METHODS.md §4: Qrr 20 nC → 0.12 W
-    closeTo(reverseRecovery.watts(at(3, 3)), CHECK.watts, 1e-9); // METHODS.md §4 again at another test current (IF = Itest = 3 A)
+    closeTo(reverseRecovery.watts(at(TEST_A)), CHECK.watts, 1e-9); // docs/methods.md §4: Qrr 20 nC → 0.12 W
+    closeTo(reverseRecovery.watts(at(3, 3)), CHECK.watts, 1e-9); // docs/methods.md §4 again at another test current (IF = Itest = 3 A)
   });
 
   it('scales the stored charge, and so the loss, linearly with the forward current at the edge', () => {

@@ -32,9 +32,9 @@ describe('conductionParameters(design, temps)', () => {
     const rect = design.parts.rectifier;
     expect(rect.kind).toBe('mosfet'); // test design: synchronous rectifier
     closeTo(cp.switchOnOhm, rdsOnAt(design.parts.switch, 110), 1e-15); // each part at its own temperature (agreed contract)
-    closeTo(cp.switchOnOhm, 0.012 * (1 + 0.005 * 85), 1e-12); // METHODS.md §5 linear law, test part α 0.5 %/K
-    if (rect.kind === 'mosfet') closeTo(cp.rectifierOnOhm, rdsOnAt(rect, 90), 1e-15); // METHODS.md §5 law at the rectifier temperature
-    closeTo(cp.inductorDcrOhm, copperResistanceAt(0.02, 80), 1e-15); // METHODS.md §8 copper law
+    closeTo(cp.switchOnOhm, 0.012 * (1 + 0.005 * 85), 1e-12); // docs/methods.md §5 linear law, test part α 0.5 %/K
+    if (rect.kind === 'mosfet') closeTo(cp.rectifierOnOhm, rdsOnAt(rect, 90), 1e-15); // docs/methods.md §5 law at the rectifier temperature
+    closeTo(cp.inductorDcrOhm, copperResistanceAt(0.02, 80), 1e-15); // docs/methods.md §8 copper law
     closeTo(cp.senseOhm, resistorAt(design.parts.senseResistor!, 60), 1e-15); // resistor law at the sense temperature
     expect(cp.diodeRdOhm).toBe(0); // a MOSFET body diode has no Rd in the document
     expect(cp.diodeVf0V).toBe(0.8); // body diode VSD of the synchronous rectifier (dead-time models)
@@ -44,8 +44,8 @@ describe('conductionParameters(design, temps)', () => {
     const design = makeDesign({ ...METHODS_BUCK, rectifier: 'diode', vf0V: 0.35, rdOhm: 0.02 });
     const cp = conductionParameters(design, uniformTemps(125));
     const rect = design.parts.rectifier;
-    if (rect.kind === 'diode') closeTo(cp.diodeVf0V, diodeVf0At(rect, 125), 1e-15); // METHODS.md §6 VF0 drift
-    closeTo(cp.diodeVf0V, 0.35 - 0.0015 * 100, 1e-12); // METHODS.md §6 drift, test part −1.5 mV/K
+    if (rect.kind === 'diode') closeTo(cp.diodeVf0V, diodeVf0At(rect, 125), 1e-15); // docs/methods.md §6 VF0 drift
+    closeTo(cp.diodeVf0V, 0.35 - 0.0015 * 100, 1e-12); // docs/methods.md §6 drift, test part −1.5 mV/K
     expect(cp.diodeRdOhm).toBe(0.02); // Rd taken from the part (no temperature law in the document)
     expect(cp.rectifierOnOhm).toBe(0); // ConductionParameters contract: unused for a diode
     expect(cp.senseOhm).toBe(0); // no sense resistor in the design

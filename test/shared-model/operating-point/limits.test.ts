@@ -11,7 +11,7 @@ describe('solveOperatingPoint — duty limit', () => {
     const s: DesignSketch = { ...METHODS_BUCK, voutV: 11.5, maxDuty: 0.9 };
     const op = solveOperatingPoint(designOf(s), conditionsOf(s), IDEAL);
     expect(op.dutyCycle).toBe(0.9); // issue 2 §3: the maximum-duty limit is honoured
-    closeTo(op.voutV, 0.9 * 12, 1e-10); // METHODS.md §1: ideal buck M = D at the limit
+    closeTo(op.voutV, 0.9 * 12, 1e-10); // docs/methods.md §1: ideal buck M = D at the limit
     expect(op.regulated).toBe(false); // issue 2 §3: a warning, not a wrong number
     expect(op.targetVoutV).toBe(11.5); // the specified target stays in the record
     closeTo(op.outputPowerW, 0.9 * 12 * 3, 1e-10); // Pout at the reached voltage and the stated load current
@@ -22,7 +22,7 @@ describe('solveOperatingPoint — duty limit', () => {
   it('with drops the reached output follows the METHODS volt-second balance at D = maxDuty', () => {
     const s: DesignSketch = { ...METHODS_BUCK, voutV: 11.5, maxDuty: 0.9 };
     const op = solveOperatingPoint(designOf(s), conditionsOf(s), conduction({ switchOnOhm: 0.01, rectifierOnOhm: 0.01, inductorDcrOhm: 0.02 }));
-    closeTo(op.voutV, 0.9 * (12 - 3 * 0.01 + 3 * 0.01) - 3 * 0.01 - 3 * 0.02, 1e-10); // METHODS.md §1 sync buck formula solved for Vo
+    closeTo(op.voutV, 0.9 * (12 - 3 * 0.01 + 3 * 0.01) - 3 * 0.01 - 3 * 0.02, 1e-10); // docs/methods.md §1 sync buck formula solved for Vo
   });
 });
 
@@ -30,7 +30,7 @@ describe('solveOperatingPoint — ratings and saturation', () => {
   const c = conditionsOf(METHODS_BUCK);
   it('inductor peak against Isat at the ambient temperature', () => {
     const near = solveOperatingPoint(designOf({ ...METHODS_BUCK, isatA: 3.3 }), c, IDEAL);
-    expect(codes(near)).not.toContain('saturation'); // Ipk 3.291667 A (METHODS.md §1) < 3.3 A
+    expect(codes(near)).not.toContain('saturation'); // Ipk 3.291667 A (docs/methods.md §1) < 3.3 A
     const hot = solveOperatingPoint(designOf({ ...METHODS_BUCK, isatA: 3.3 }), { ...c, ambientC: 75 }, IDEAL);
     const w = hot.warnings.find((x) => x.code === 'saturation');
     expect(w?.severity).toBe('danger'); // Isat(75 °C) = 3.3·(1 − 0.002·50) = 2.97 A < Ipk (test part's coefficient)
@@ -45,7 +45,7 @@ describe('solveOperatingPoint — ratings and saturation', () => {
     const amps = solveOperatingPoint(designOf({ ...METHODS_BUCK, idRatingA: 3 }), c, IDEAL);
     expect(amps.warnings.filter((w) => w.code === 'over-current-rating').map((w) => w.part)).toEqual(['switch', 'rectifier']); // Ipk 3.29 A > 3 A
     const diode = solveOperatingPoint(designOf({ ...METHODS_BUCK, rectifier: 'diode', ifRatingA: 1.5 }), c, IDEAL);
-    expect(diode.warnings.find((w) => w.code === 'over-current-rating')?.path).toBe('parts.rectifier.ifRatingA'); // mean 1.75 A (METHODS.md §1) > 1.5 A
+    expect(diode.warnings.find((w) => w.code === 'over-current-rating')?.path).toBe('parts.rectifier.ifRatingA'); // mean 1.75 A (docs/methods.md §1) > 1.5 A
   });
 });
 
@@ -54,7 +54,7 @@ describe('solveOperatingPoint — inductance roll-off', () => {
     const s: DesignSketch = { ...METHODS_BUCK, rolloff: { currentA: 6, inductanceH: 5e-6 } };
     const op = solveOperatingPoint(designOf(s), conditionsOf(s), IDEAL);
     closeTo(op.inductanceH, 7.5e-6, 1e-12); // linear interpolation at 3 A between (0, 10 µH) and (6 A, 5 µH)
-    closeTo(op.inductor.rippleA, (7 * (5 / 12)) / (7.5e-6 * 500e3), 1e-12); // METHODS.md §1 ΔI with that L
+    closeTo(op.inductor.rippleA, (7 * (5 / 12)) / (7.5e-6 * 500e3), 1e-12); // docs/methods.md §1 ΔI with that L
     const beyond = solveOperatingPoint(designOf(s), conditionsOf(s, { loadA: 8 }), IDEAL);
     expect(beyond.inductanceH).toBe(5e-6); // held at the last stated point (schema: linear between 0 A and the point)
     expect(codes(beyond)).toContain('model-limit'); // the extrapolation is said, not hidden

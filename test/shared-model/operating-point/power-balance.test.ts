@@ -9,7 +9,7 @@ function lossModel(cp: ConductionParameters) {
   let calls = 0;
   const lossOf = (op: OperatingPoint) => {
     calls++;
-    const overlap = 0.5 * op.edges.turnOff.voltageV * op.edges.turnOff.currentA * 10e-9 * op.conditions.switchingFrequencyHz; // METHODS.md §4 shape, 10 ns
+    const overlap = 0.5 * op.edges.turnOff.voltageV * op.edges.turnOff.currentA * 10e-9 * op.conditions.switchingFrequencyHz; // docs/methods.md §4 shape, 10 ns
     return (
       op.stats.switch.rmsA ** 2 * cp.switchOnOhm +
       op.stats.rectifier.rmsA ** 2 * cp.rectifierOnOhm +
@@ -26,7 +26,7 @@ describe('solveOperatingPoint with lossOf (power balance)', () => {
     const op = solveOperatingPoint(designOf(METHODS_BUCK), conditionsOf(METHODS_BUCK), IDEAL, {
       lossOf: (p) => p.outputPowerW * (1 / 0.9 - 1),
     });
-    closeTo(op.dutyCycle, 0.462963, 0, 5e-7); // METHODS.md §1 check: D from η = 0.9
+    closeTo(op.dutyCycle, 0.462963, 0, 5e-7); // docs/methods.md §1 check: D from η = 0.9
     expect(op.dutyMethod).toBe('power-balance'); // the record says how D was found
     closeTo(12 * op.waveforms.inputA, 15 / 0.9, 1e-12); // Pin = Pout/η
   });
@@ -56,13 +56,13 @@ describe('solveOperatingPoint with lossOf (power balance)', () => {
     const conductionOnly = (op: OperatingPoint) =>
       op.stats.switch.averageA * 3 * 0.01 + op.stats.rectifier.averageA * 3 * 0.01 + 9 * 0.02; // Io·R drops at the mean current
     const pb = solveOperatingPoint(designOf(METHODS_BUCK), conditionsOf(METHODS_BUCK), cp, { lossOf: conductionOnly });
-    closeTo(pb.dutyCycle, 0.424167, 0, 5e-7); // METHODS.md §1 check (the drops the formula is built on)
+    closeTo(pb.dutyCycle, 0.424167, 0, 5e-7); // docs/methods.md §1 check (the drops the formula is built on)
   });
 
   it('light-load fallback: a loss the load current cannot carry keeps the volt-second duty and says so', () => {
     const s: DesignSketch = { ...METHODS_BUCK, lightLoad: 'diode-emulation' };
     const op = solveOperatingPoint(designOf(s), conditionsOf(s, { loadA: 0 }), IDEAL, { lossOf: () => 0.12 });
-    expect(op.dutyCycle).toBe(0); // volt-second duty at zero load in DCM (METHODS.md §2 limit K → 0)
+    expect(op.dutyCycle).toBe(0); // volt-second duty at zero load in DCM (docs/methods.md §2 limit K → 0)
     closeTo(op.waveforms.inputA * 12, 0.12, 1e-12); // the source still pays the loss
     expect(op.warnings.find((w) => w.code === 'model-limit')?.severity).toBe('caution'); // the model limit is said, not hidden
     expect(op.regulated).toBe(true); // the volt-second point itself regulates

@@ -43,27 +43,27 @@ describe('time-domain reference: checks of the reference itself', () => {
     closeTo(m[9], res.y[2], 1e-9); // ∫iL² dt: monomial moments vs ODEX quadrature state
   });
 
-  it('reproduces the METHODS.md §1 closed forms for ideal parts and a stiff output', () => {
+  it('reproduces the docs/methods.md §1 closed forms for ideal parts and a stiff output', () => {
     const s = { ...METHODS_BUCK, outputCapacitanceF: 1 }; // 1 F: output ripple negligible, as the closed forms assume
     const ref = referenceSteadyState(designOf(s), conditionsOf(s), 5 / 12, conduction({ outputCapacitorEsrOhm: 0 }));
-    closeTo(ref.voutV, 5, 1e-6); // METHODS.md §1: M = D
-    closeTo(ref.branches.inductor.rmsA, 3.004722, 1e-6); // METHODS.md §1 check IL,rms
-    closeTo(ref.branches.switch.rmsA, 1.93954, 1e-6); // METHODS.md §1 check Isw,rms
-    closeTo(ref.branches.rectifier.rmsA, 2.294895, 1e-6); // METHODS.md §1 check Id,rms
-    closeTo(ref.branches.inputCapacitor.rmsA, 1.483009, 1e-6); // METHODS.md §1 check ICin,rms
-    closeTo(ref.branches.outputCapacitor.rmsA, 0.168394, 1e-5); // METHODS.md §1 check ICo,rms
+    closeTo(ref.voutV, 5, 1e-6); // docs/methods.md §1: M = D
+    closeTo(ref.branches.inductor.rmsA, 3.004722, 1e-6); // docs/methods.md §1 check IL,rms
+    closeTo(ref.branches.switch.rmsA, 1.93954, 1e-6); // docs/methods.md §1 check Isw,rms
+    closeTo(ref.branches.rectifier.rmsA, 2.294895, 1e-6); // docs/methods.md §1 check Id,rms
+    closeTo(ref.branches.inputCapacitor.rmsA, 1.483009, 1e-6); // docs/methods.md §1 check ICin,rms
+    closeTo(ref.branches.outputCapacitor.rmsA, 0.168394, 1e-5); // docs/methods.md §1 check ICo,rms
   });
 
-  it('reproduces the METHODS.md §2 DCM check with a blocking diode', () => {
+  it('reproduces the docs/methods.md §2 DCM check with a blocking diode', () => {
     const k = 0.2;
-    const vo = 12 * (2 / (1 + Math.sqrt(1 + (4 * k) / 0.09))); // METHODS.md §2: M at K 0.2, D 0.3
+    const vo = 12 * (2 / (1 + Math.sqrt(1 + (4 * k) / 0.09))); // docs/methods.md §2: M at K 0.2, D 0.3
     const s = { ...METHODS_BUCK, rectifier: 'diode' as const, voutV: vo, loadA: vo / 50, outputCapacitanceF: 1 };
     const ref = referenceSteadyState(designOf(s), conditionsOf(s), 0.3, IDEAL);
-    expect(ref.mode).toBe('DCM'); // METHODS.md §2: K 0.2 < Kcrit 0.7
-    closeTo(ref.voutV, 5.790583, 1e-6); // METHODS.md §2 check Vo
-    closeTo(ref.rectifierFraction, 0.321699, 2e-6); // METHODS.md §2 check D2
-    closeTo(ref.inductorPeakA, 0.372565, 2e-6); // METHODS.md §2 check Ipk
-    closeTo(ref.branches.rectifier.rmsA, 0.122002, 5e-6); // METHODS.md §2 check RMS diode
+    expect(ref.mode).toBe('DCM'); // docs/methods.md §2: K 0.2 < Kcrit 0.7
+    closeTo(ref.voutV, 5.790583, 1e-6); // docs/methods.md §2 check Vo
+    closeTo(ref.rectifierFraction, 0.321699, 2e-6); // docs/methods.md §2 check D2
+    closeTo(ref.inductorPeakA, 0.372565, 2e-6); // docs/methods.md §2 check Ipk
+    closeTo(ref.branches.rectifier.rmsA, 0.122002, 5e-6); // docs/methods.md §2 check RMS diode
   });
 });
 
@@ -91,8 +91,8 @@ describe('analytic operating point vs time-domain reference over seeded random d
       const op = solveOperatingPoint(c.design, conditions, cp);
       const ref = referenceSteadyState(c.design, conditions, op.dutyCycle, cp);
       expect(ref.mode).toBe(op.mode); // independent reference decides the conduction mode itself
-      if (c.regime === 'dcm') expect(op.mode).toBe('DCM'); // drawn below the METHODS.md §2 boundary
-      if (c.regime === 'reverse') expect(op.inductor.valleyA).toBeLessThan(0); // forced PWM below the boundary (METHODS.md §2)
+      if (c.regime === 'dcm') expect(op.mode).toBe('DCM'); // drawn below the docs/methods.md §2 boundary
+      if (c.regime === 'reverse') expect(op.inductor.valleyA).toBeLessThan(0); // forced PWM below the boundary (docs/methods.md §2)
       const found = compareWithReference(c.design, op, cp, ref);
       for (const d of found) {
         const key = d.quantity.replace(/ \(÷.*\)/, '');

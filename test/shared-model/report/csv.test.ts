@@ -3,7 +3,7 @@
  * every field count matches its header, and every number reads back to the engine's exact value.
  */
 import { describe, expect, it } from 'vitest';
-import { csvField, evaluate, ledgerCsv, sweepCsv, sweepLoad } from '../../../shared-model/index.ts';
+import { csvText, evaluate, ledgerCsv, sweepCsv, sweepLoad } from '../../../shared-model/index.ts';
 import { demoDesign } from './demo.ts';
 
 /** RFC 4180 reader: CRLF records, quoted fields with doubled quotes. */
@@ -36,9 +36,9 @@ function readCsv(text: string): string[][] {
   return rows;
 }
 
-describe('csvField', () => {
+describe('csvText', () => {
   it('quotes fields holding commas, quotes or line breaks and doubles inner quotes', () => {
-    expect(readCsv(`${['a,b', 'say "hi"', 'two\r\nlines', 'plain'].map(csvField).join(',')}\r\n`)).toEqual([['a,b', 'say "hi"', 'two\r\nlines', 'plain']]); // RFC 4180 §2.5–2.7
+    expect(readCsv(`${['a,b', 'say "hi"', 'two\r\nlines', 'plain'].map(csvText).join(',')}\r\n`)).toEqual([['a,b', 'say "hi"', 'two\r\nlines', 'plain']]); // RFC 4180 §2.5–2.7
   });
 });
 

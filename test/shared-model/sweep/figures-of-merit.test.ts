@@ -3,7 +3,7 @@ import { AVERAGE_EFFICIENCY_FRACTIONS, figuresOfMerit, figuresOfMeritOf, LIGHT_L
 import { closeTo } from '../../helpers/close-to.ts';
 import { efficiencyOf, syntheticDesign, syntheticEvaluator } from '../landmarks/synthetic.ts';
 
-const curve = { voutV: 12, p0W: 0.2, aV: 0.05, b0Ohm: 0.02 }; // METHODS.md §12 curve
+const curve = { voutV: 12, p0W: 0.2, aV: 0.05, b0Ohm: 0.02 }; // docs/methods.md §12 curve
 
 describe('efficiency figures of merit', () => {
   it('averages the efficiencies at 25/50/75/100 % of rated load and reports the 10 % point', () => {
@@ -12,8 +12,8 @@ describe('efficiency figures of merit', () => {
     const rated = 4;
     const f = figuresOfMeritOf((io) => efficiencyOf(curve, io), rated);
     const byHand = (efficiencyOf(curve, 1) + efficiencyOf(curve, 2) + efficiencyOf(curve, 3) + efficiencyOf(curve, 4)) / 4;
-    closeTo(f.averageEfficiency, byHand, 1e-12); // Appendix Z: arithmetic mean of four load points (METHODS.md §12)
-    closeTo(f.lightLoadEfficiency, 4.8 / (4.8 + 0.2 + 0.02 + 0.02 * 0.16), 1e-12); // EU 2019/1782 10 % point: 0.4 A on METHODS.md §12 curve, by hand
+    closeTo(f.averageEfficiency, byHand, 1e-12); // Appendix Z: arithmetic mean of four load points (docs/methods.md §12)
+    closeTo(f.lightLoadEfficiency, 4.8 / (4.8 + 0.2 + 0.02 + 0.02 * 0.16), 1e-12); // EU 2019/1782 10 % point: 0.4 A on docs/methods.md §12 curve, by hand
     expect(f.points.map((p) => p.loadA)).toEqual([1, 2, 3, 4, 0.4]); // 25/50/75/100/10 % of 4 A
   });
 

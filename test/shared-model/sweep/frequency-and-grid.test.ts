@@ -11,7 +11,7 @@ describe('sweepFrequency', () => {
     const s = sweepFrequency(design, { points: 9 });
     const j = s.columns.losses.findIndex((c) => c.part === 'switch' && c.mechanism === 'turn-off overlap');
     const perHz = s.points.map((p) => p.losses[j] / p.switchingFrequencyHz);
-    perHz.forEach((e) => closeTo(e, perHz[0], 1e-3)); // METHODS.md §4: P = Eoff·fs with Eoff independent of fs at fixed Ioff (ripple-free)
+    perHz.forEach((e) => closeTo(e, perHz[0], 1e-3)); // docs/methods.md §4: P = Eoff·fs with Eoff independent of fs at fixed Ioff (ripple-free)
   });
 
   it('finds the lowest total loss between the points and names what grows on each side', () => {
@@ -24,8 +24,8 @@ describe('sweepFrequency', () => {
       expect(at(f * 1.02)).toBeGreaterThan(s.optimum.totalLoss); // a local minimum on the engine
       expect(at(f / 1.02)).toBeGreaterThan(s.optimum.totalLoss); // local minimum, other side
     }
-    expect(SWITCHING).toContain(s.above.growingMechanism); // METHODS.md §4: switching terms grow ∝ fs above the optimum
-    expect(SWITCHING).not.toContain(s.below.growingMechanism); // below it the ripple-driven terms (ΔI ∝ 1/fs, METHODS.md §1) grow
+    expect(SWITCHING).toContain(s.above.growingMechanism); // docs/methods.md §4: switching terms grow ∝ fs above the optimum
+    expect(SWITCHING).not.toContain(s.below.growingMechanism); // below it the ripple-driven terms (ΔI ∝ 1/fs, docs/methods.md §1) grow
   });
 });
 
@@ -38,7 +38,7 @@ describe('families and grids', () => {
     expect(f.byAmbient.map((m) => m.sweep.ambientC)).toEqual([design.spec.ambientC, design.spec.ambientC + 25]); // issue 4: two or more ambients (our default +25 K)
     const hot = f.byAmbient[1].sweep.points.at(-1);
     const cool = f.byAmbient[0].sweep.points.at(-1);
-    expect(hot && cool && Math.min(...hot.temperaturesC.map((t, i) => t - cool.temperaturesC[i]))).toBeGreaterThan(24); // METHODS.md §10: Tj = Ta + rise; rise only grows with the hotter RDS(on)/DCR
+    expect(hot && cool && Math.min(...hot.temperaturesC.map((t, i) => t - cool.temperaturesC[i]))).toBeGreaterThan(24); // docs/methods.md §10: Tj = Ta + rise; rise only grows with the hotter RDS(on)/DCR
   });
 
   it('fills a load × Vin grid whose cells equal single evaluations', () => {

@@ -103,7 +103,7 @@ describe('lean sweep points equal the points recorded from the full evaluate', (
     expect(codes(runaway!).has('thermal-runaway')).toBe(true); // the rated point of this design runs away (evaluate.test.ts, same design)
     const hotCodes = codes(hot!);
     for (const code of ['over-temperature', 'burn-hazard', 'saturation'] as const) expect(hotCodes.has(code), code).toBe(true); // 45 K/W everywhere and Isat 3.2 A at up to 9 A: each check fails somewhere
-    expect(codes(limited!).has('cannot-regulate')).toBe(true); // ideal boost D = 1 − 5/12 ≈ 0.583 (METHODS.md §1): with the losses under load the 0.6 limit is reached
+    expect(codes(limited!).has('cannot-regulate')).toBe(true); // ideal boost D = 1 − 5/12 ≈ 0.583 (docs/methods.md §1): with the losses under load the 0.6 limit is reached
   });
 
   it('on seeded random designs (fast-check), over light to heavy loads', () => {

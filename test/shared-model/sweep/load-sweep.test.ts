@@ -42,7 +42,7 @@ describe('sweepLoad on the demo synchronous buck', () => {
 
   it('conserves energy at every point: input = output + every loss term', () => {
     for (const p of sweep.points) {
-      closeTo(p.inputPower, p.outputPower + p.losses.reduce((s, w) => s + w, 0), 1e-9); // first law: Pin = Pout + ΣPloss (METHODS.md §1 last item)
+      closeTo(p.inputPower, p.outputPower + p.losses.reduce((s, w) => s + w, 0), 1e-9); // first law: Pin = Pout + ΣPloss (docs/methods.md §1 last item)
       closeTo(p.efficiency, p.outputPower / p.inputPower, 1e-12); // definition of efficiency
     }
   });

@@ -3,10 +3,10 @@ import { RUNAWAY_BAND_K, solveElectroThermal } from '../../../shared-model/therm
 import { thermalNetwork } from '../../../shared-model/thermal/network.ts';
 import { closeTo } from '../../helpers/close-to.ts';
 
-// METHODS.md §10 linear case: P = P0·(1 + a·(T − T0)), P0 2 W at T0 25 °C, a 0.005/K, Ta 25 °C.
-const P0 = 2; // METHODS.md §10
-const A = 0.005; // METHODS.md §10
-const T0 = 25; // METHODS.md §10
+// docs/methods.md §10 linear case: P = P0·(1 + a·(T − T0)), P0 2 W at T0 25 °C, a 0.005/K, Ta 25 °C.
+const P0 = 2; // docs/methods.md §10
+const A = 0.005; // docs/methods.md §10
+const T0 = 25; // docs/methods.md §10
 const linearLoss = (temps: Float64Array, powers: Float64Array) => {
   powers[0] = P0 * (1 + A * (temps[0]! - T0));
 };
@@ -20,15 +20,15 @@ describe('solveElectroThermal on a single part with a loss linear in temperature
   it('finds 158.3333 °C with loop gain 0.4 at Rth 40 K/W (secant slopes)', () => {
     const sol = solveElectroThermal(thermalNetwork([40], [-1], []), 25, ceiling(200), linearLoss);
     expect(sol.converged).toBe(true);
-    closeTo(sol.temperaturesC[0]!, 158.3333333333, 1e-9); // METHODS.md §10: (Ta + Rth·P0·(1 − a·T0))/(1 − Rth·P0·a)
-    closeTo(sol.loopGain[0]!, 0.4, 1e-9); // METHODS.md §10: gain Rth·P0·a = 0.4
+    closeTo(sol.temperaturesC[0]!, 158.3333333333, 1e-9); // docs/methods.md §10: (Ta + Rth·P0·(1 − a·T0))/(1 − Rth·P0·a)
+    closeTo(sol.loopGain[0]!, 0.4, 1e-9); // docs/methods.md §10: gain Rth·P0·a = 0.4
     expect(sol.runawayNode).toBe(-1);
     expect(sol.iterations).toBeLessThanOrEqual(4);
   });
 
   it('lands on it in one Newton step with tangent slopes', () => {
     const sol = solveElectroThermal(thermalNetwork([40], [-1], []), 25, ceiling(200), withTangent);
-    closeTo(sol.temperaturesC[0]!, 158.3333333333, 1e-9); // METHODS.md §10
+    closeTo(sol.temperaturesC[0]!, 158.3333333333, 1e-9); // docs/methods.md §10
     expect(sol.iterations).toBe(2); // one step from ambient, one evaluation to confirm
   });
 
@@ -38,7 +38,7 @@ describe('solveElectroThermal on a single part with a loss linear in temperature
       [withTangent, ['loop-gain']],
     ] as const) {
       const sol = solveElectroThermal(thermalNetwork([100], [-1], []), 25, ceiling(175), lossAt);
-      expect(sol.converged).toBe(false); // METHODS.md §10: Rth 100 K/W → runaway
+      expect(sol.converged).toBe(false); // docs/methods.md §10: Rth 100 K/W → runaway
       expect(sol.runawayNode).toBe(0);
       expect(reasons).toContain(sol.runawayReason);
       expect(sol.temperaturesC[0]).toBe(175 + RUNAWAY_BAND_K); // capped at the ceiling (fixed-point.ts header)

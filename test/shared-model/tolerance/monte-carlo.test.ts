@@ -36,7 +36,7 @@ describe('Monte Carlo', () => {
   });
 
   it('counts the fraction over a limit: half the samples when nominal sits exactly at it', () => {
-    // Hand design at its closed-form ceiling (METHODS.md §8/§10): the inductor is at its derated limit at nominal DCR.
+    // Hand design at its closed-form ceiling (docs/methods.md §8/§10): the inductor is at its derated limit at nominal DCR.
     // Its temperature rises monotonically with DCR, so P(over) = P(DCR scale > 1) = 1/2 for a symmetric spread.
     const d = handCeilingDesign();
     const tLim = CEILING.tMaxC - CEILING.marginK;
@@ -45,7 +45,7 @@ describe('Monte Carlo', () => {
     const r = monteCarlo(d, { seed: 2024, samples: n, loadA: load, tolerances: { ...zero, dcrFraction: 0.1 } });
     const inductor = r.temperatures.find((t) => t.part === 'inductor');
     expect(Math.abs((inductor?.fractionOverDerated ?? NaN) - 0.5)).toBeLessThan(3 * Math.sqrt(0.25 / n)); // binomial: σ = √(p(1−p)/n), 3σ band
-    expect(inductor?.fractionOverLimit).toBe(0); // +10 % DCR cannot add the 15 K margin: ΔT ≈ 0.1·70 K = 7 K (METHODS.md §10)
+    expect(inductor?.fractionOverLimit).toBe(0); // +10 % DCR cannot add the 15 K margin: ΔT ≈ 0.1·70 K = 7 K (docs/methods.md §10)
   });
 
   it('draws scales uniformly over 1 ± tolerance', () => {

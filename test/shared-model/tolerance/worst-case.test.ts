@@ -16,8 +16,8 @@ describe('worst-case corners', () => {
   it('names the corner of worst efficiency: every resistance high', () => {
     const w = worstCase(design);
     for (const c of w.corners) expect(c.efficiency).toBeGreaterThanOrEqual(w.worstEfficiency.efficiency); // definition of the worst corner
-    // Conduction loss is I²·R for RDS(on), DCR and ESR (METHODS.md §1, §8, §9), so the worst corner has all three high.
-    expect(w.worstEfficiency.label).toMatch(/RDS\(on\) \+20 %.*DCR \+10 %.*ESR \+20 %/); // METHODS.md §1/§8/§9: loss rises with each resistance
+    // Conduction loss is I²·R for RDS(on), DCR and ESR (docs/methods.md §1, §8, §9), so the worst corner has all three high.
+    expect(w.worstEfficiency.label).toMatch(/RDS\(on\) \+20 %.*DCR \+10 %.*ESR \+20 %/); // docs/methods.md §1/§8/§9: loss rises with each resistance
     for (const c of w.corners) expect(c.worstMarginK).toBeGreaterThanOrEqual(w.worstTemperature.worstMarginK); // definition of the worst-temperature corner
   });
 
@@ -25,7 +25,7 @@ describe('worst-case corners', () => {
     const d = handCeilingDesign();
     const w = worstCase(d, { loadA: 3 });
     const inductor = w.hottestByPart.find((p) => p.part === 'inductor');
-    expect(inductor?.corner).toMatch(/ambient 50 °C.*DCR \+10 %/); // METHODS.md §10 T = Ta + θ·I²·DCR(T): rises with Ta and DCR
+    expect(inductor?.corner).toMatch(/ambient 50 °C.*DCR \+10 %/); // docs/methods.md §10 T = Ta + θ·I²·DCR(T): rises with Ta and DCR
     const e = evaluate(d, { loadA: 3, ambientC: 50, vinV: 16.8 });
     expect(inductor?.celsius).toBeGreaterThan(e.temperatures.find((t) => t.part === 'inductor')?.celsius ?? Infinity); // +10 % DCR adds heat over the nominal-DCR point
   });

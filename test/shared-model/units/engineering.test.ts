@@ -52,9 +52,9 @@ describe('parseEngineering reads SI-prefixed numbers', () => {
     expect(value('25C', '°C')).toBe(25); // "C" alone in a temperature field (common practice for typed input)
     expect(value('25 ℃', '°C')).toBe(25); // Unicode U+2103 DEGREE CELSIUS
     expect(value('80 %', '')).toBeCloseTo(0.8, 15); // SI Brochure §5.4.7: % = 0.01 [from memory for section]
-    expect(value('0.4 %/K', '/K')).toBeCloseTo(0.004, 15); // % = 0.01 (SI Brochure §5.4.7 [from memory]); METHODS.md §5 quotes α in %/K
+    expect(value('0.4 %/K', '/K')).toBeCloseTo(0.004, 15); // % = 0.01 (SI Brochure §5.4.7 [from memory]); docs/methods.md §5 quotes α in %/K
     expect(value('3930 ppm/K', '/K')).toBeCloseTo(0.00393, 15); // ppm = 1e-6 (common practice); IEC 60028 copper α20 = 0.00393/K [from memory]
-    expect(value('-1.5 mV/K', 'V/K')).toBeCloseTo(-1.5e-3, 15); // METHODS.md §6: Vf0 drifts about −1 to −2 mV/K
+    expect(value('-1.5 mV/K', 'V/K')).toBeCloseTo(-1.5e-3, 15); // docs/methods.md §6: Vf0 drifts about −1 to −2 mV/K
     expect(value('10 K', 'K')).toBe(10); // SI Brochure §2.3.1: a temperature difference in kelvin
     expect(value('40 °C/W', 'K/W')).toBe(40); // SI Brochure §2.3.1: a difference of 1 °C equals 1 K
   });
@@ -64,7 +64,7 @@ describe('parseEngineering reads SI-prefixed numbers', () => {
     expect(value('52 mm²', 'm²')).toBeCloseTo(52e-6, 15); // (1e-3 m)² = 1e-6 m² (SI Brochure §5.4.4: a prefix is raised with its unit)
     expect(value('500 mm3', 'm³')).toBeCloseTo(500e-9, 18); // (1e-3 m)³ = 1e-9 m³ (SI Brochure §5.4.4)
     expect(value('1.2 cm²', 'm²')).toBeCloseTo(1.2e-4, 15); // (1e-2 m)² = 1e-4 m²
-    expect(value('300 kW/m³', 'W/m³')).toBe(300e3); // SI Brochure Table 7; METHODS.md §7 quotes core loss in kW/m³
+    expect(value('300 kW/m³', 'W/m³')).toBe(300e3); // SI Brochure Table 7; docs/methods.md §7 quotes core loss in kW/m³
     expect(value('300 mW/cm³', 'W/m³')).toBeCloseTo(300e3, 6); // 1 mW/cm³ = 1e-3 W / 1e-6 m³ = 1 kW/m³ (SI arithmetic)
     expect(value('100 mT', 'T')).toBeCloseTo(0.1, 15); // SI Brochure Table 7
     expect(refusal('1mm', 'V')).toMatch(/"1mm".*"mm".*voltage/); // "mm" is no prefix+volt: refused (team brief, engineering entry)

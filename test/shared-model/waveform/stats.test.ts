@@ -11,11 +11,11 @@ import {
 } from '../../../shared-model/index.ts';
 import { closeTo } from '../../helpers/close-to.ts';
 
-// METHODS.md §1 check circuit: buck 12 V → 5 V, 3 A, 10 µH, 500 kHz (ideal).
+// docs/methods.md §1 check circuit: buck 12 V → 5 V, 3 A, 10 µH, 500 kHz (ideal).
 const T = 2e-6;
 const D = 5 / 12;
 const IL = 3;
-const DI = ((12 - 5) * D) / (10e-6 * 500e3); // METHODS.md §1: ΔI = (Vin − Vo)·D/(L·fs)
+const DI = ((12 - 5) * D) / (10e-6 * 500e3); // docs/methods.md §1: ΔI = (Vin − Vo)·D/(L·fs)
 const inductor = waveformOf(segment(D * T, IL - DI / 2, IL + DI / 2), segment((1 - D) * T, IL + DI / 2, IL - DI / 2));
 const sw = waveformOf(segment(D * T, IL - DI / 2, IL + DI / 2), segment((1 - D) * T, 0, 0));
 
@@ -51,22 +51,22 @@ function harmonicPower(w: Waveform, n: number): number {
 }
 
 describe('waveformStats(w)', () => {
-  it('reproduces the exact RMS of METHODS.md §1 for the inductor and the switch', () => {
+  it('reproduces the exact RMS of docs/methods.md §1 for the inductor and the switch', () => {
     const l = waveformStats(inductor);
-    closeTo(l.averageA, 3, 1e-12); // METHODS.md §1: mean inductor current = Io
-    closeTo(l.rmsA, 3.004722, 0, 5e-7); // METHODS.md §1 check, printed to 6 decimals
-    closeTo(l.acRmsA, DI / (2 * Math.sqrt(3)), 1e-12); // METHODS.md §1: triangle AC RMS ΔI/(2√3)
-    closeTo(l.peakA, 3.291667, 0, 5e-7); // METHODS.md §1 check Ipk
+    closeTo(l.averageA, 3, 1e-12); // docs/methods.md §1: mean inductor current = Io
+    closeTo(l.rmsA, 3.004722, 0, 5e-7); // docs/methods.md §1 check, printed to 6 decimals
+    closeTo(l.acRmsA, DI / (2 * Math.sqrt(3)), 1e-12); // docs/methods.md §1: triangle AC RMS ΔI/(2√3)
+    closeTo(l.peakA, 3.291667, 0, 5e-7); // docs/methods.md §1 check Ipk
     const s = waveformStats(sw);
-    closeTo(s.rmsA, 1.93954, 0, 5e-7); // METHODS.md §1 check Isw,rms 1.939540
-    closeTo(s.averageA, 1.25, 1e-12); // METHODS.md §1 check Isw,avg
-    closeTo(s.rmsA, Math.sqrt(D * (IL * IL + (DI * DI) / 12)), 1e-12); // METHODS.md §1: √(d(IL² + ΔI²/12))
+    closeTo(s.rmsA, 1.93954, 0, 5e-7); // docs/methods.md §1 check Isw,rms 1.939540
+    closeTo(s.averageA, 1.25, 1e-12); // docs/methods.md §1 check Isw,avg
+    closeTo(s.rmsA, Math.sqrt(D * (IL * IL + (DI * DI) / 12)), 1e-12); // docs/methods.md §1: √(d(IL² + ΔI²/12))
   });
 
   it('the AC RMS squared equals the summed power of the harmonics (Parseval)', () => {
     const ac = waveformStats(inductor).acRmsA ** 2;
-    closeTo(harmonicPower(inductor, 2000), ac, 1e-9); // METHODS.md §8: triangle harmonics sum to ΔI²/12 (Parseval)
-    closeTo(ac, (DI * DI) / 12, 1e-12); // METHODS.md §8
+    closeTo(harmonicPower(inductor, 2000), ac, 1e-9); // docs/methods.md §8: triangle harmonics sum to ΔI²/12 (Parseval)
+    closeTo(ac, (DI * DI) / 12, 1e-12); // docs/methods.md §8
     const acSw = waveformStats(sw).acRmsA ** 2;
     closeTo(harmonicPower(sw, 200000), acSw, 2e-5); // Parseval; a waveform with jumps: tail ~1/n, cut at 2e5 harmonics
   });

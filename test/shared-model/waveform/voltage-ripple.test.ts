@@ -32,7 +32,7 @@ function sampledRipple(w: Waveform, c: number, esr: number, perSegment: number) 
 describe('capacitorVoltageRipple(current, C, ESR)', () => {
   const T = 2e-6;
   const D = 5 / 12;
-  const DI = ((12 - 5) * D) / (10e-6 * 500e3); // METHODS.md §1 ΔI
+  const DI = ((12 - 5) * D) / (10e-6 * 500e3); // docs/methods.md §1 ΔI
   const triangle = waveformOf(segment(D * T, -DI / 2, DI / 2), segment((1 - D) * T, DI / 2, -DI / 2));
 
   it('a triangle ripple current gives ΔV = ΔI·T/(8C) and ESR·ΔI', () => {

@@ -82,7 +82,7 @@ describe('runCli dispatches through the command registry', () => {
 
   it('exits 0 for a point in thermal runaway, with converged false and a warning naming the part', async () => {
     const doc = structuredClone(DEMO_DESIGNS.find((d) => d.id === 'hot-fin-buck')?.json) as { thermal: { heatsinks: { thetaSaKPerW: number }[] } };
-    (doc.thermal.heatsinks[0] as { thetaSaKPerW: number }).thetaSaKPerW = 400; // METHODS.md §10: loop gain Rth·dP/dT reaches 1 → runaway
+    (doc.thermal.heatsinks[0] as { thetaSaKPerW: number }).thetaSaKPerW = 400; // docs/methods.md §10: loop gain Rth·dP/dT reaches 1 → runaway
     const io = memoryIo({ 'r.json': JSON.stringify(doc) });
     expect(await runCli(['evaluate', 'r.json', '--json'], io)).toBe(EXIT.ok); // issue 3: a runaway point exits 0
     const out = JSON.parse(io.stdout) as { converged: boolean; warnings: { code: string; part?: string; message: string }[] };

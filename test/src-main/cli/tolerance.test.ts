@@ -17,7 +17,7 @@ describe('wattledger tolerance', () => {
     expect(c.monteCarlo.efficiency).not.toEqual(a.monteCarlo.efficiency); // another seed, other samples
     expect(a.monteCarlo.seed).toBe(42); // issue 4: the seed is visible
     expect(a.worstCase.cornerCount).toBe(128); // 2⁷ corners of seven two-level tolerances
-    expect(a.worstCase.worstEfficiency.label).toMatch(/RDS\(on\) \+20 %/); // METHODS.md §1: conduction loss rises with RDS(on)
+    expect(a.worstCase.worstEfficiency.label).toMatch(/RDS\(on\) \+20 %/); // docs/methods.md §1: conduction loss rises with RDS(on)
     expect(a.cautions.join(' ')).toMatch(/Estimates only/); // team brief rule 4
   });
 

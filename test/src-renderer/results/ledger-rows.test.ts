@@ -14,7 +14,7 @@ describe('ledger rows of the demo design at rated load', () => {
 
   it('adds up to input power minus output power', () => {
     const sum = rows.reduce((s, r) => s + r.watts, 0);
-    closeTo(sum, evaluation.inputPower - evaluation.outputPower, 1e-9, 1e-12); // energy balance Pin = Pout + ΣPloss (first law; METHODS.md power balance)
+    closeTo(sum, evaluation.inputPower - evaluation.outputPower, 1e-9, 1e-12); // energy balance Pin = Pout + ΣPloss (first law; docs/methods.md power balance)
   });
 
   it('gives shares that sum to one', () => {

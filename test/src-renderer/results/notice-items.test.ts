@@ -5,7 +5,7 @@ import { demoDesign, labelOf } from './demo.ts';
 
 describe('warnings and hazards in one list', () => {
   const design = demoDesign();
-  // Well above the invented inductor's saturation current: the engine must warn (saturation check, METHODS.md ratings).
+  // Well above the invented inductor's saturation current: the engine must warn (saturation check, docs/methods.md ratings).
   const heavy = evaluate(design, { loadA: 2 * design.parts.inductor.isatA });
 
   it('keeps every engine warning with its field path, the most severe first', () => {
