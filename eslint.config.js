@@ -40,7 +40,7 @@ const mainDoor = {
 };
 
 export default tseslint.config(
-  { ignores: ['node_modules/', 'out/', 'dist/', '.reports/', '.artifacts/', 'assets/**/*.json'] },
+  { ignores: ['node_modules/', 'out/', 'dist/', '.reports/', '.artifacts/', 'assets/**/*.json', 'src-main/types/'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   ...svelte.configs['flat/recommended'],

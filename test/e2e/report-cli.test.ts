@@ -11,7 +11,7 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { REPO_ROOT } from '../../src-main/report/bundle.ts';
 
-const BIN = join(REPO_ROOT, 'src-main', 'cli', 'bin.js');
+const BIN = join(REPO_ROOT, 'out', 'cli', 'wattledger.js');
 const DESIGN = join(REPO_ROOT, 'assets', 'designs', 'synchronous-buck.json');
 const work = mkdtempSync(join(tmpdir(), 'wattledger-report-cli-'));
 afterAll(() => rmSync(work, { recursive: true, force: true }));

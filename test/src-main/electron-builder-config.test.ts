@@ -15,7 +15,7 @@ const config = require('../../electron-builder.config.cjs') as Record<string, un
   files: string[];
   extraMetadata: { main: string };
 };
-const pkg = require('../../package.json') as { main: string; devDependencies: Record<string, string>; scripts: Record<string, string> };
+const pkg = require('../../package.json') as { main: string; devDependencies: Record<string, string>; optionalDependencies: Record<string, string>; scripts: Record<string, string> };
 // electron-builder's own validator (app-builder-lib, installed with electron-builder 26.17.0).
 const { validateConfiguration } = require('app-builder-lib/out/util/config/config.js') as { validateConfiguration: (c: unknown, l: unknown) => Promise<void> };
 const { DebugLogger } = require('builder-util/out/DebugLogger.js') as { DebugLogger: new (enabled: boolean) => unknown };
@@ -35,10 +35,17 @@ describe('electron-builder.config.cjs', () => {
   });
 
   it('packages the built output and starts the same main file as package.json, with the pinned Electron', () => {
-    expect(config.files).toContain('out/**/*');
+    expect(config.files).toEqual(expect.arrayContaining(['out/main/**/*', 'out/preload/**/*', 'out/renderer/**/*', 'package.json']));
     expect(config.extraMetadata.main).toBe(pkg.main);
-    expect(config['electronVersion']).toBe(pkg.devDependencies['electron']);
+    expect(config['electronVersion']).toBe(pkg.optionalDependencies['electron']);
     expect(pkg.scripts['dist']).toContain('electron-builder --config electron-builder.config.cjs');
+  });
+
+  it('never packs node_modules: electron is an optional dependency, which electron-builder counts as production', () => {
+    // npm docs "optionalDependencies": an optional package whose install fails is removed and the install goes on [from memory]
+    expect(pkg.optionalDependencies['electron']).toMatch(/^\d+\.\d+\.\d+$/); // pinned exactly (team rule)
+    expect(pkg.devDependencies['electron']).toBeUndefined();
+    expect(config.files).toContain('!node_modules{,/**/*}');
   });
 
   it('has an application icon where electron-builder looks for it, large enough for every platform', () => {

@@ -1,12 +1,13 @@
 /**
- * Runs the real command line (node src-main/cli/bin.js ...) as a child process, as a user would.
+ * Runs the real command line as a child process, as a user would: the built plain-JavaScript CLI that
+ * package.json "bin" names (out/cli/wattledger.js, built by test/global-package.ts), no loader.
  */
 import { execFile } from 'node:child_process';
 import nodePath from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 export const ROOT = nodePath.resolve(nodePath.dirname(fileURLToPath(import.meta.url)), '../../..');
-export const BIN = nodePath.join(ROOT, 'src-main/cli/bin.js');
+export const BIN = nodePath.join(ROOT, 'out/cli/wattledger.js');
 
 export interface Run {
   code: number;
