@@ -27,7 +27,8 @@ export interface OpenedFile {
 
 export type SaveOutcome =
   | { ok: true; path: string; name: string }
-  | { ok: false; cancelled: boolean; message: string };
+  /** `readOnly`: the file exists but may not be written; the renderer offers Save As. */
+  | { ok: false; cancelled: boolean; message: string; readOnly?: boolean };
 
 export interface SaveRequest {
   /** Existing path to overwrite atomically, or null to ask with a native dialog. */

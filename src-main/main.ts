@@ -9,6 +9,7 @@ import { createContext } from './setup/context.ts';
 import { setupIpc, showError } from './setup/ipc.ts';
 import { setupLifecycle } from './setup/lifecycle.ts';
 import { setupMenu } from './setup/menu.ts';
+import { cleanUserDataTemporaries } from './setup/clean-up.ts';
 import { connectFileOpening, setupFileOpening } from './setup/open-files.ts';
 import { setupSecurity, setupSecurityBeforeReady } from './setup/security.ts';
 import { createMainWindow } from './setup/window.ts';
@@ -30,6 +31,7 @@ function main(): void {
     serveAppScheme(context);
     const handlers = setupIpc(context);
     setupMenu(context);
+    context.track(cleanUserDataTemporaries(context));
     connectFileOpening(context, handlers.open, (message) => showError(context.window?.webContents ?? null, message));
     await createMainWindow(context);
   });

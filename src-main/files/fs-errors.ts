@@ -18,6 +18,8 @@ const REASONS: Readonly<Record<string, string>> = {
   ENAMETOOLONG: 'the file name is too long',
   EEXIST: 'a file with that name already exists',
   EXDEV: 'the temporary file ended up on another disk',
+  ENXIO: 'it is a socket or a device without a reader, not a file',
+  ELOOP: 'it is a link that loops back on itself',
 };
 
 export function errorCode(error: unknown): string | null {

@@ -1,9 +1,11 @@
 /**
  * Small JSON files the app keeps in its user-data folder (recent list, window state, recovery).
- * Reading never throws: a missing or corrupt file reads as null. Writing goes through the atomic save.
+ * Reading never throws: a missing, corrupt, oversized or not-regular file reads as null (the reader is
+ * the bounded one of read-text.ts). Writing goes through the atomic save.
  */
 import nodeFs from 'node:fs/promises';
 import { saveAtomically, type AtomicSaveResult, type SaveFs } from './atomic-save.ts';
+import { readTextFile } from './read-text.ts';
 
 export interface JsonFileFs {
   readText(path: string): Promise<string>;
@@ -12,7 +14,11 @@ export interface JsonFileFs {
 }
 
 export const nodeJsonFs: JsonFileFs = {
-  readText: (path) => nodeFs.readFile(path, 'utf8'),
+  async readText(path) {
+    const read = await readTextFile(path);
+    if (!read.ok) throw new Error(read.message);
+    return read.text;
+  },
   mkdir: async (path) => {
     await nodeFs.mkdir(path, { recursive: true });
   },

@@ -7,6 +7,7 @@
 import nodePath from 'node:path';
 import type { DocumentState, ExportRequest, OpenedFile, PdfRequest, SaveOutcome, SaveRequest } from '../../shared-model/index.ts';
 import { saveAtomically, type SaveFs } from '../files/atomic-save.ts';
+import { SerialQueue } from '../files/serial-queue.ts';
 import { readTextFile, type ReadFs } from '../files/read-text.ts';
 import type { GrantedPaths } from '../files/granted-paths.ts';
 import type { RecentFiles } from '../files/recent-files.ts';
@@ -48,7 +49,17 @@ function withExtension(name: string, extension: string): string {
 
 export function createHandlers<S>(deps: HandlerDeps<S>) {
   const saveFs = deps.saveFs ? { fs: deps.saveFs } : {};
+  /** Every write of a user's file, one after another in the order asked (the newest edit lands last). */
+  const writes = new SerialQueue();
 
+  /** Writes a file the user chose, after any write still running; the outcome says read-only. */
+  async function writeUserFile(target: string, data: string | Uint8Array, backup: boolean): Promise<SaveOutcome> {
+    const result = await writes.run(() => saveAtomically(target, data, { backup, ...saveFs }));
+    if (result.ok) return { ok: true, path: target, name: nodePath.basename(target) };
+    return result.readOnly ? { ok: false, cancelled: false, readOnly: true, message: result.message } : { ok: false, cancelled: false, message: result.message };
+  }
+
+  /** A path enters the grants and the recent list only here: after the user opened or saved it. */
   async function remember(path: string): Promise<void> {
     deps.grants.grant(path);
     deps.recentChanged(await deps.recent.add(path));
@@ -61,25 +72,28 @@ export function createHandlers<S>(deps: HandlerDeps<S>) {
     return { path: read.path, name: read.name, text: read.text };
   }
 
-  async function saveDesign(sender: S, request: SaveRequest): Promise<SaveOutcome> {
+  /**
+   * Saves a document (design, or any other kind a caller passes filters for): to `request.path` when the
+   * user opened or chose it in this session, else to a path chosen in the save dialog; a failure keeps
+   * the edit open and says so. Reusable for other document kinds (part libraries).
+   */
+  async function saveDocument(sender: S, request: SaveRequest, filters: FileFilter[], extension: string): Promise<SaveOutcome> {
     let target = request.path;
     if (target !== null && !deps.grants.has(target)) {
       return { ok: false, cancelled: false, message: `Refused to save to "${nodePath.basename(target)}": WattLedger only writes files you opened or chose in this session. Use Save As.` };
     }
-    target ??= await deps.chooseSavePath(sender, withExtension(request.suggestedName, 'json'), DESIGN_FILTERS);
+    target ??= await deps.chooseSavePath(sender, withExtension(request.suggestedName, extension), filters);
     if (target === null) return { ok: false, cancelled: true, message: 'Save cancelled.' };
-    const result = await saveAtomically(target, request.text, { backup: true, ...saveFs });
-    if (!result.ok) return { ok: false, cancelled: false, message: `${result.message} ${UNSAVED_NOTE}` };
+    const outcome = await writeUserFile(target, request.text, true);
+    if (!outcome.ok) return { ...outcome, message: `${outcome.message} ${UNSAVED_NOTE}` };
     await remember(target);
-    await deps.recovery.clear().catch(() => undefined);
-    return { ok: true, path: target, name: nodePath.basename(target) };
+    return outcome;
   }
 
   async function saveChosen(sender: S, suggestedName: string, filters: FileFilter[], data: string | Uint8Array): Promise<SaveOutcome> {
     const target = await deps.chooseSavePath(sender, suggestedName, filters);
     if (target === null) return { ok: false, cancelled: true, message: 'Export cancelled.' };
-    const result = await saveAtomically(target, data, { backup: false, ...saveFs });
-    return result.ok ? { ok: true, path: target, name: nodePath.basename(target) } : { ok: false, cancelled: false, message: result.message };
+    return writeUserFile(target, data, false);
   }
 
   const invoke = {
@@ -100,13 +114,11 @@ export function createHandlers<S>(deps: HandlerDeps<S>) {
       if ('error' in opened) deps.recentChanged(await deps.recent.remove(path));
       return opened;
     },
-    async listRecent(): Promise<string[]> {
-      const list = await deps.recent.list();
-      for (const path of list) deps.grants.grant(path);
-      return list;
-    },
+    /** The list only: a recent path becomes writable when it is opened again (openRecent), not by being listed. */
+    listRecent: (): Promise<string[]> => deps.recent.list(),
     async saveDesign(sender: S, request: SaveRequest): Promise<SaveOutcome> {
-      const outcome = await saveDesign(sender, request);
+      const outcome = await saveDocument(sender, request, DESIGN_FILTERS, 'json');
+      if (outcome.ok) await deps.recovery.clear().catch(() => undefined);
       deps.designSaved(sender, outcome);
       return outcome;
     },
@@ -124,8 +136,7 @@ export function createHandlers<S>(deps: HandlerDeps<S>) {
       } catch (error) {
         return { ok: false, cancelled: false, message: `Could not print the report to PDF: ${error instanceof Error ? error.message : String(error)}.` };
       }
-      const result = await saveAtomically(target, pdf, { backup: false, ...saveFs });
-      return result.ok ? { ok: true, path: target, name: nodePath.basename(target) } : { ok: false, cancelled: false, message: result.message };
+      return writeUserFile(target, pdf, false);
     },
     async writeRecovery(_sender: S, text: string): Promise<void> {
       const result = await deps.recovery.write(text);
@@ -153,5 +164,5 @@ export function createHandlers<S>(deps: HandlerDeps<S>) {
     return { invoke: invokeRoutes, send: sendRoutes };
   }
 
-  return { invoke, send, routes, open };
+  return { invoke, send, routes, open, saveDocument, writeUserFile };
 }

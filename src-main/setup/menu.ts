@@ -46,8 +46,6 @@ export function setupMenu(context: AppContext): void {
     if (process.platform !== 'linux') for (const path of [...recent].reverse()) app.addRecentDocument(path);
   };
   context.rebuildMenu([]);
-  void context.recent.list().then((list) => {
-    for (const path of list) context.grants.grant(path);
-    context.rebuildMenu(list);
-  });
+  // Listing a recent file does not make it writable: it is granted when the user opens it again.
+  void context.recent.list().then((list) => context.rebuildMenu(list));
 }

@@ -57,7 +57,22 @@ export async function openFile(ws: Workspace, file: OpenedFile): Promise<boolean
   return true;
 }
 
-export async function saveDesign(ws: Workspace, asNew: boolean): Promise<boolean> {
+/** Each workspace's saves run one after another (see saveDesign). */
+const saveChains = new WeakMap<Workspace, Promise<unknown>>();
+
+/**
+ * Saves the draft. Saves never overlap: a save asked while another is running waits for it, so the
+ * newest draft is always written last and the unsaved mark ends up describing the file on disk (each
+ * save marks saved only the revision it wrote). A read-only file is left alone and Save As is offered.
+ */
+export function saveDesign(ws: Workspace, asNew: boolean): Promise<boolean> {
+  const previous = saveChains.get(ws) ?? Promise.resolve();
+  const next = previous.then(() => saveNow(ws, asNew));
+  saveChains.set(ws, next.catch(() => undefined));
+  return next;
+}
+
+async function saveNow(ws: Workspace, asNew: boolean): Promise<boolean> {
   const doc = ws.doc;
   if (!doc.valid) {
     ws.messages.error(
@@ -74,8 +89,12 @@ export async function saveDesign(ws: Workspace, asNew: boolean): Promise<boolean
   const revision = doc.revision;
   const outcome = await ws.files
     .save({ path: asNew ? null : doc.filePath, suggestedName: suggestFileName(doc.fileName, doc.design.name), text: written.text })
-    .catch((error: Error) => ({ ok: false as const, cancelled: false, message: error.message }));
+    .catch((error: Error) => ({ ok: false as const, cancelled: false, message: error.message, readOnly: false }));
   if (!outcome.ok) {
+    if (outcome.readOnly && !asNew) {
+      const saveAs = await ws.messages.ask('The file is read-only', `${outcome.message}`, 'Save As…', 'Keep editing');
+      return saveAs ? saveNow(ws, true) : false;
+    }
     if (!outcome.cancelled) ws.messages.error(`“${doc.fileName}” was not saved; the file on disk is unchanged.`, [outcome.message]);
     return false;
   }

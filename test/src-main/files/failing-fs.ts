@@ -20,21 +20,33 @@ export interface Injection {
   /** Throws this error on the first write to a temporary file of this target name. */
   failWriteFor?: { name: string; error: NodeJS.ErrnoException; writeHalfFirst?: boolean };
   failReadOf?: string;
+  /** Called before every operation ("create", "write", "sync", "close", "rename", "unlink", "read", "sync-folder"); an error it returns is thrown. */
+  failOn?: (operation: string, path: string) => NodeJS.ErrnoException | null;
 }
 
 export function journalingFs(injection: Injection = {}): SaveFs & { journal: string[] } {
   const journal: string[] = [];
   const label = (path: string): string => nodePath.basename(path);
+  const check = (operation: string, path: string): void => {
+    const error = injection.failOn?.(operation, path);
+    if (error) throw error;
+  };
   return {
     journal,
+    inspect: (path) => nodeSaveFs.inspect(path),
+    realPath: (path) => nodeSaveFs.realPath(path),
+    canWrite: (path) => nodeSaveFs.canWrite(path),
+    list: (folder) => nodeSaveFs.list(folder),
     async create(path, mode) {
       journal.push(`create ${label(path)}`);
+      check('create', path);
       const file = await nodeSaveFs.create(path, mode);
       // Temporary names are ".<target name>.<token>.tmp"; the backup's are ".<name>.bak.<token>.tmp".
       const failing = injection.failWriteFor && isTemporaryOf(label(path), injection.failWriteFor.name) ? injection.failWriteFor : null;
       return {
         async write(data) {
           journal.push(`write ${label(path)}`);
+          check('write', path);
           if (failing) {
             // A crash in the middle: part of the bytes reach the disk, then the write fails.
             if (failing.writeHalfFirst) await file.write(data.subarray(0, Math.floor(data.length / 2)));
@@ -44,16 +56,19 @@ export function journalingFs(injection: Injection = {}): SaveFs & { journal: str
         },
         async sync() {
           journal.push(`sync ${label(path)}`);
+          check('sync', path);
           return file.sync();
         },
         async close() {
           journal.push(`close ${label(path)}`);
-          return file.close();
+          await file.close();
+          check('close', path);
         },
       };
     },
     async rename(from, to) {
       journal.push(`rename ${label(from)} -> ${label(to)}`);
+      check('rename', to);
       if (injection.refuseRenameTo && to === injection.refuseRenameTo) throw fsError('EPERM', 'operation not permitted, rename');
       return nodeSaveFs.rename(from, to);
     },
@@ -64,10 +79,13 @@ export function journalingFs(injection: Injection = {}): SaveFs & { journal: str
     modeOf: (path) => nodeSaveFs.modeOf(path),
     readFile: (path) => {
       if (injection.failReadOf === path) return Promise.reject(fsError('EIO', 'i/o error, read'));
+      const error = injection.failOn?.('read', path);
+      if (error) return Promise.reject(error);
       return nodeSaveFs.readFile(path);
     },
-    syncFolder: (path) => {
+    syncFolder: async (path) => {
       journal.push(`sync-folder ${label(path)}`);
+      check('sync-folder', path);
       return nodeSaveFs.syncFolder(path);
     },
   };

@@ -8,6 +8,8 @@ import { RecentFiles } from '../../../src-main/files/recent-files.ts';
 import { RecoveryStore } from '../../../src-main/files/recovery.ts';
 import { INVOKE_CHANNELS } from '../../../src-main/ipc/channels.ts';
 import { createHandlers, type HandlerDeps } from '../../../src-main/ipc/handlers.ts';
+import { nodeSaveFs, type SaveFs } from '../../../src-main/files/atomic-save.ts';
+import { mulberry32 } from '../../reference/prng.ts';
 import { journalingFs } from '../files/failing-fs.ts';
 
 let folder: string;
@@ -84,6 +86,72 @@ describe('saveDesign', () => {
     expect(outcome.ok).toBe(false);
     if (!outcome.ok) expect(outcome.message).toBe('Could not save "buck.json": the operating system did not allow it (EPERM). The previous version on disk is unchanged. Your changes are still open and unsaved.');
     expect(await nodeFs.readFile(path, 'utf8')).toBe(design('on disk'));
+  });
+});
+
+describe('overlapping saves (issue 15: 14 of 200 runs lost the newer edit without serialising)', () => {
+  it('200 runs of two saves in flight with 0–4 ms jitter at every step: the later request is always on disk', async () => {
+    const path = nodePath.join(folder, 'buck.json');
+    await nodeFs.writeFile(path, design('start'));
+    deps.grants.grant(path);
+    const random = mulberry32(15);
+    const jitter = (): Promise<void> => new Promise((resolve) => setTimeout(resolve, Math.floor(random() * 5)));
+    const jittery: SaveFs = {
+      ...nodeSaveFs,
+      create: async (p, mode) => {
+        await jitter();
+        const file = await nodeSaveFs.create(p, mode);
+        return { write: async (d) => (await jitter(), file.write(d)), sync: () => file.sync(), close: () => file.close() };
+      },
+      rename: async (from, to) => (await jitter(), nodeSaveFs.rename(from, to)),
+      readFile: async (p) => (await jitter(), nodeSaveFs.readFile(p)),
+    };
+    deps.saveFs = jittery;
+    const handlers = createHandlers(deps);
+    let lost = 0;
+    for (let run = 0; run < 200; run += 1) {
+      const older = handlers.invoke.saveDesign('w', { path, suggestedName: 'buck.json', text: design(`older ${run}`) });
+      const newer = handlers.invoke.saveDesign('w', { path, suggestedName: 'buck.json', text: design(`newer ${run}`) });
+      const outcomes = await Promise.all([older, newer]);
+      expect(outcomes.every((o) => o.ok)).toBe(true);
+      if ((await nodeFs.readFile(path, 'utf8')) !== design(`newer ${run}`)) lost += 1;
+    }
+    expect(lost).toBe(0); // the newest request wins every time
+  }, 60_000);
+
+  it('says a read-only file is read-only, so the window can offer Save As', async () => {
+    if (process.platform === 'win32') return;
+    const path = nodePath.join(folder, 'locked.json');
+    await nodeFs.writeFile(path, design('locked'));
+    await nodeFs.chmod(path, 0o444);
+    deps.grants.grant(path);
+    const outcome = await createHandlers(deps).invoke.saveDesign('w', { path, suggestedName: 'locked.json', text: design('edited') });
+    expect(outcome).toMatchObject({ ok: false, cancelled: false, readOnly: true });
+    expect(await nodeFs.readFile(path, 'utf8')).toBe(design('locked'));
+  });
+});
+
+describe('recent files and write grants', () => {
+  it('a path listed as recent is not writable until the user opens it again', async () => {
+    const path = nodePath.join(folder, 'listed.json');
+    await nodeFs.writeFile(path, design('listed'));
+    await deps.recent.add(path);
+    const handlers = createHandlers(deps);
+    expect(await handlers.invoke.listRecent()).toEqual([path]);
+    const refused = await handlers.invoke.saveDesign('w', { path, suggestedName: 'listed.json', text: design('overwritten') });
+    expect(refused.ok).toBe(false);
+    expect(await nodeFs.readFile(path, 'utf8')).toBe(design('listed'));
+    expect(await handlers.invoke.openRecent('w', path)).toMatchObject({ name: 'listed.json' });
+    expect((await handlers.invoke.saveDesign('w', { path, suggestedName: 'listed.json', text: design('saved') })).ok).toBe(true);
+  });
+
+  it('the renderer cannot add a path to the recent list: no call takes a path that lands there unopened', async () => {
+    const handlers = createHandlers(deps);
+    const invented = nodePath.join(folder, 'invented.json');
+    await handlers.invoke.openRecent('w', invented); // not in the list: refused, nothing added
+    await handlers.invoke.saveDesign('w', { path: invented, suggestedName: 'invented.json', text: '{}' }); // not granted: refused
+    expect(await handlers.invoke.listRecent()).toEqual([]);
+    await expect(nodeFs.access(invented)).rejects.toThrow();
   });
 });
 
