@@ -2,10 +2,16 @@
  * The design document as text: parse (JSON → validated design) and serialise (design → JSON text).
  * JSON has no NaN or Infinity, and JSON.parse reads an overflowing literal such as 1e999 as Infinity;
  * both directions refuse non-finite numbers with a Problem instead of writing null or losing a field.
- * Serialising does not require a valid design (a half-finished design may be saved), only one that
- * JSON can represent exactly.
+ * Reading reports a key repeated in one object (JSON.parse keeps the last) as a notice with its line.
+ * Serialising writes the canonical text (design/canonical.ts): the same design always gives the same
+ * bytes, whichever route wrote it. It does not require a valid design (a half-finished design may be
+ * saved), only one that JSON can represent exactly.
  */
+import { canonicalOrder } from './canonical.ts';
+import { duplicateKeys } from './json-keys.ts';
 import { findJsonSyntaxError } from './json-position.ts';
+import { designSchema } from './schema.ts';
+import type { DesignNotice } from './problems.ts';
 import type { Problem } from './problems.ts';
 import { describeValue, pathToString, problem } from './problems.ts';
 import type { DesignValidation } from './validate.ts';
@@ -29,7 +35,16 @@ export function parseDesignText(text: string): DesignValidation {
     const message = `The design file is not valid JSON at line ${where.line}, column ${where.column}: ${where.reason} (line reads: ${excerpt}).`;
     return { ok: false, problems: [{ ...problem('', excerpt, 'JSON text (RFC 8259)', message), line: where.line, column: where.column }] };
   }
-  return validateDesign(json);
+  const validation = validateDesign(json);
+  if (!validation.ok) return validation;
+  const repeated: DesignNotice[] = duplicateKeys(body).map((d) => ({
+    path: d.path,
+    value: d.key,
+    line: d.line,
+    message: `${d.path} appears more than once in the file (line ${d.firstLine} and line ${d.line}); the last one (line ${d.line}) was used.`,
+  }));
+  const warnings = [...repeated, ...(validation.warnings ?? [])];
+  return warnings.length > 0 ? { ...validation, warnings } : validation;
 }
 
 /** Every value JSON cannot hold exactly: NaN, ±Infinity, undefined in lists, functions, bigints, cycles. */
@@ -61,9 +76,14 @@ export function unrepresentable(value: unknown): Problem[] {
   return out;
 }
 
-/** Writes a design as JSON text (2-space indent, final newline), or returns why it cannot. Never throws. */
+/**
+ * Writes a design as its canonical text (design/canonical.ts: a valid design after validation, keys in
+ * schema order, two-space indent, shortest round-trip numbers, final newline), or returns why it cannot.
+ * Never throws.
+ */
 export function serializeDesign(design: unknown): { ok: true; text: string } | { ok: false; problems: Problem[] } {
   const problems = unrepresentable(design);
   if (problems.length > 0) return { ok: false, problems };
-  return { ok: true, text: `${JSON.stringify(design, null, 2)}\n` };
+  const checked = validateDesign(design);
+  return { ok: true, text: `${JSON.stringify(canonicalOrder(checked.ok ? checked.design : design, designSchema), null, 2)}\n` };
 }

@@ -12,6 +12,7 @@ export interface JsonSyntaxError {
 }
 
 const MAX_DEPTH = 512;
+const NUMBER = /-?(0|[1-9]\d*)(\.\d+)?([eE][+-]?\d+)?/y;
 
 class Scanner {
   i = 0;
@@ -111,7 +112,9 @@ class Scanner {
   }
 
   number(): void {
-    const m = /^-?(0|[1-9]\d*)(\.\d+)?([eE][+-]?\d+)?/.exec(this.s.slice(this.i));
+    // Sticky (y): matches at this.i without copying the rest of the text for every number.
+    NUMBER.lastIndex = this.i;
+    const m = NUMBER.exec(this.s);
     if (!m) this.fail('a number was expected');
     this.i += m[0].length;
   }

@@ -11,7 +11,7 @@
  */
 import { DESIGN_FORMAT, DESIGN_VERSION } from './schema.ts';
 import type { DesignNotice, Problem } from './problems.ts';
-import { describeValue, problem } from './problems.ts';
+import { compactValue, describeValue, problem } from './problems.ts';
 
 export type MigrationResult =
   | { ok: true; json: Record<string, unknown>; fromVersion: number; notes: DesignNotice[] }
@@ -24,7 +24,7 @@ function renameKey(parent: unknown, from: string, to: string, where: string, not
   if (!isObject(parent) || !Object.hasOwn(parent, from)) return;
   if (!Object.hasOwn(parent, to)) parent[to] = parent[from];
   delete parent[from];
-  notes.push({ path: `${where}.${to}`, value: parent[to], message: `${where}.${from} was renamed ${where}.${to}.` });
+  notes.push({ path: `${where}.${to}`, value: compactValue(parent[to]), message: `${where}.${from} was renamed ${where}.${to}.` });
 }
 
 /** Version 0 → 1 (see the header). Works on a deep copy. */
@@ -39,7 +39,7 @@ function from0(doc: Json, notes: DesignNotice[]): Json {
     delete topology.deadTimeS;
     notes.push({
       path: 'topology.deadTimeBeforeOnS',
-      value: t,
+      value: compactValue(t),
       message: 'topology.deadTimeS was split into topology.deadTimeBeforeOnS and topology.deadTimeAfterOffS (same value).',
     });
   }

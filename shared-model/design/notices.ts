@@ -5,7 +5,7 @@
  */
 import type { Design } from './schema.ts';
 import type { DesignNotice } from './problems.ts';
-import { pathToString } from './problems.ts';
+import { compactValue, pathToString } from './problems.ts';
 import { isObject } from './read.ts';
 
 /** Keys in `input` that the schema dropped from `parsed` (zod strips unknown keys). */
@@ -17,7 +17,7 @@ export function ignoredKeys(input: unknown, parsed: unknown, path: (string | num
     for (const [key, value] of Object.entries(input)) {
       const where = pathToString([...path, key]);
       if (!Object.hasOwn(parsed, key))
-        out.push({ path: where, value, message: `${where} is not a WattLedger key and was ignored (misspelt?).` });
+        out.push({ path: where, value: compactValue(value), message: `${where} is not a WattLedger key and was ignored (misspelt?).` });
       else out.push(...ignoredKeys(value, parsed[key], [...path, key]));
     }
   }

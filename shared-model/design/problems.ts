@@ -24,8 +24,11 @@ export interface Problem {
 /** Advice on a valid design (an ignored key, an unused heatsink, a migrated file). */
 export interface DesignNotice {
   path: string;
+  /** The value concerned, shortened by compactValue when it is large. */
   value: unknown;
   message: string;
+  /** Line in the file (1-based), for notices found while reading a file (a repeated key). */
+  line?: number;
 }
 
 /** ["thermal", "heatsinks", 0, "id"] → "thermal.heatsinks[0].id". */
@@ -46,6 +49,49 @@ export function valueAt(doc: unknown, path: readonly PropertyKey[]): unknown {
     here = (here as Record<PropertyKey, unknown>)[key];
   }
   return here;
+}
+
+/** Largest value carried as it is in a problem or notice; anything bigger is summarised (compactValue). */
+const COMPACT = { chars: 200, nodes: 50, depth: 6 } as const;
+
+const plural = (n: number, word: string): string => `${n.toLocaleString('en-US')} ${word}${n === 1 ? '' : 's'}`;
+
+/** Summary of a container too large to echo: its size and whether it goes deeper than COMPACT.depth. */
+function summarise(value: object): string {
+  let depth = 0;
+  let here: unknown = value;
+  // Follow the first child down (iteratively, so any depth is safe) to say how deep it goes.
+  while (here !== null && typeof here === 'object' && depth <= 10_000) {
+    depth += 1;
+    const first: unknown = Array.isArray(here) ? here[0] : Object.values(here as Record<string, unknown>)[0];
+    here = first;
+  }
+  const size = Array.isArray(value) ? `a list of ${plural(value.length, 'item')}` : `an object with ${plural(Object.keys(value).length, 'key')}`;
+  const deep = depth > COMPACT.depth ? `, nested ${depth > 10_000 ? 'more than 10,000' : depth.toLocaleString('en-US')} levels deep` : '';
+  return `(${size}${deep}; not shown)`;
+}
+
+/**
+ * The value as it may travel in a Problem or DesignNotice (and so into JSON output and messages):
+ * primitives and small structures unchanged; a text longer than 200 characters cut to its first 40 with
+ * its length; a list or object with more than 50 values, nested deeper than 6 levels or holding a long
+ * text replaced by a one-line summary. Never recursive on the input's depth.
+ */
+export function compactValue(value: unknown): unknown {
+  if (typeof value === 'string') return value.length > COMPACT.chars ? `${value.slice(0, 40)}… (${plural(value.length, 'character')}; not shown)` : value;
+  if (value === null || typeof value !== 'object') return value;
+  let nodes = 0;
+  const pending: [unknown, number][] = [[value, 1]];
+  while (pending.length > 0) {
+    const [here, depth] = pending.pop() as [unknown, number];
+    nodes += 1;
+    if (nodes > COMPACT.nodes || depth > COMPACT.depth || (typeof here === 'string' && here.length > COMPACT.chars)) return summarise(value);
+    if (here === null || typeof here !== 'object') continue;
+    const children = Array.isArray(here) ? here.length : Object.keys(here).length;
+    if (nodes + children > COMPACT.nodes) return summarise(value);
+    for (const child of Object.values(here)) pending.push([child, depth + 1]);
+  }
+  return value;
 }
 
 /** A value as words for a message: "-5 V", "4.7e-6 H (4.7 µH)", "the text "12"", "missing". */
@@ -74,7 +120,7 @@ const label = (path: string): string => (path === '' ? 'The design document' : p
 /** A problem whose message is "<path> is <value>; allowed: <allowed>." unless a sentence is given. */
 export function problem(path: string, value: unknown, allowed: string, sentence?: string): Problem {
   const message = sentence ?? `${label(path)} is ${describeValue(value, unitOfPath(path))}; allowed: ${allowed}.`;
-  return { path, value, allowed, message };
+  return { path, value: compactValue(value), allowed, message };
 }
 
 /** Formats a number in the unit of a path for allowed ranges and sentences ("10.8 V", "25 °C"). */

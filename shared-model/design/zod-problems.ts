@@ -9,7 +9,7 @@ import { unitOfKey } from './key-units.ts';
 import type { Problem } from './problems.ts';
 import { pathToString, problem, valueAt } from './problems.ts';
 
-type Schema = z.core.$ZodType;
+export type Schema = z.core.$ZodType;
 interface Def {
   type: string;
   [key: string]: unknown;
@@ -23,11 +23,11 @@ interface CheckDef {
   maximum?: number;
 }
 
-const defOf = (s: Schema): Def => (s as unknown as { _zod: { def: Def } })._zod.def;
+export const defOf = (s: Schema): Def => (s as unknown as { _zod: { def: Def } })._zod.def;
 const checksOf = (s: Schema): CheckDef[] =>
   ((defOf(s).checks as { _zod: { def: CheckDef } }[] | undefined) ?? []).map((c) => c._zod.def);
 
-function unwrap(s: Schema): Schema {
+export function unwrap(s: Schema): Schema {
   let here = s;
   for (let d = defOf(here); d.type === 'optional' || d.type === 'nullable' || d.type === 'default'; d = defOf(here))
     here = d.innerType as Schema;
@@ -35,7 +35,7 @@ function unwrap(s: Schema): Schema {
 }
 
 /** The option of a discriminated union that the input's discriminator picks. */
-function pickOption(s: Schema, input: unknown): Schema | undefined {
+export function pickOption(s: Schema, input: unknown): Schema | undefined {
   const def = defOf(s);
   const key = def.discriminator as string | undefined;
   const options = def.options as Schema[];

@@ -37,7 +37,7 @@ import { REPORT_FORMAT, REPORT_VERSION } from './types.ts';
 
 export interface ReportInput {
   design: Design;
-  /** The design document's text exactly as saved (hashed as UTF-8). */
+  /** The design's canonical text (serializeDesign, design/canonical.ts), hashed as UTF-8. */
   documentText: string;
   /** True when the document has changes not yet saved (the hash is then of the text it would be saved as). */
   unsaved?: boolean;
@@ -72,7 +72,7 @@ export function titleBlock(input: Pick<ReportInput, 'design' | 'documentText' | 
     designHash: sha256Hex(input.documentText),
     hashNote: input.unsaved
       ? 'SHA-256 of the design document\'s UTF-8 text as it would be saved now: the design has unsaved changes, so no file on disk matches yet.'
-      : 'SHA-256 of the design document\'s UTF-8 text (without a byte-order mark) as WattLedger writes it; for a file saved by WattLedger, or the file given to the report command, it equals the output of "sha256sum FILE".',
+      : 'SHA-256 of the design\'s canonical text: the UTF-8 bytes WattLedger writes when it saves this design (keys in schema order, two-space indent, shortest round-trip numbers, final newline, no byte-order mark). For a file saved by WattLedger, or a shipped demo, it equals the output of "sha256sum FILE"; for a file edited by hand, save it from WattLedger first to get a file with this hash.',
   };
 }
 

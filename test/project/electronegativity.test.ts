@@ -1,8 +1,11 @@
 /**
- * Static security scan of the main process with @doyensec/electronegativity. The tool always exits 0,
- * so its SARIF report is parsed here. Every finding must be justified in the code by a comment
+ * Static security scan of the whole app — main process, preload and renderer (src-main and
+ * src-renderer, scanned together so the global checks see main's handlers) — with
+ * @doyensec/electronegativity. The tool always exits 0, so its SARIF report is parsed here. Every
+ * finding must be justified in the code by a comment
  *   // security-scan-allow RULE_ID [RULE_ID…]: reason          (on the line, or the comment block just above)
  *   // security-scan-allow-global RULE_ID: reason              (findings without a location)
+ *   <!-- security-scan-allow RULE_ID: reason -->              (in HTML, just above the finding)
  * and every such comment must still match a finding (no stale excuses).
  * A deliberately insecure window is scanned alongside as a control, so the test fails if the scanner
  * silently stops finding things.
@@ -50,7 +53,7 @@ let allowances: Allowance[];
 
 async function listFiles(folder: string): Promise<string[]> {
   const entries = await nodeFs.readdir(folder, { recursive: true, withFileTypes: true });
-  return entries.filter((entry) => entry.isFile() && /\.(ts|js|cjs|mjs)$/.test(entry.name)).map((entry) => nodePath.relative(folder, nodePath.join(entry.parentPath, entry.name)));
+  return entries.filter((entry) => entry.isFile() && /\.(ts|js|cjs|mjs|html)$/.test(entry.name)).map((entry) => nodePath.relative(folder, nodePath.join(entry.parentPath, entry.name)));
 }
 
 /** Reads allow comments: the rule list up to ':' and the reason, continued on following comment lines. */
@@ -58,7 +61,7 @@ function parseAllowances(file: string, source: string): Allowance[] {
   const lines = source.split('\n');
   const result: Allowance[] = [];
   lines.forEach((text, index) => {
-    const match = /\/\/\s*security-scan-allow(-global)?\s+([A-Z0-9_ ]+):\s*(.*)$/.exec(text);
+    const match = /(?:\/\/|<!--)\s*security-scan-allow(-global)?\s+([A-Z0-9_ ]+):\s*(.*?)(?:-->)?$/.exec(text);
     if (!match) return;
     let reason = match[3] ?? '';
     for (let next = index + 1; next < lines.length && /^\s*\/\/(?!\s*security-scan-allow)/.test(lines[next] ?? ''); next += 1) {
@@ -74,7 +77,7 @@ function allowanceFor(finding: Finding, sources: Map<string, string[]>): Allowan
   if (finding.file === null) return allowances.find((allow) => allow.global && allow.rules.includes(finding.rule));
   const lines = sources.get(finding.file) ?? [];
   let first = finding.line - 1;
-  while (first - 1 >= 1 && /^\s*\/\//.test(lines[first - 1] ?? '')) first -= 1;
+  while (first - 1 >= 1 && /^\s*(\/\/|<!--)/.test(lines[first - 1] ?? '')) first -= 1;
   return allowances.find((allow) => !allow.global && allow.file === finding.file && allow.rules.includes(finding.rule) && allow.line >= first && allow.line <= finding.line);
 }
 
@@ -82,8 +85,10 @@ let sources: Map<string, string[]>;
 
 beforeAll(async () => {
   workDir = await nodeFs.mkdtemp(nodePath.join(os.tmpdir(), 'wattledger-scan-'));
-  const input = nodePath.join(workDir, 'src-main');
-  await nodeFs.cp(nodePath.join(ROOT, 'src-main'), input, { recursive: true });
+  const input = nodePath.join(workDir, 'app');
+  // The vendored Electron type declarations (src-main/types) are Electron's own, not our code.
+  await nodeFs.cp(nodePath.join(ROOT, 'src-main'), nodePath.join(input, 'src-main'), { recursive: true, filter: (source) => !source.includes(`${nodePath.sep}types`) });
+  await nodeFs.cp(nodePath.join(ROOT, 'src-renderer'), nodePath.join(input, 'src-renderer'), { recursive: true });
   await nodeFs.writeFile(nodePath.join(input, CONTROL_FILE), CONTROL_SOURCE);
   const sarifPath = nodePath.join(workDir, 'scan.sarif');
   await promisify(execFile)(process.execPath, [SCANNER, '-i', input, '-o', sarifPath, '-r', '-e', ELECTRON_VERSION, '-x', 'AvailableSecurityFixesGlobalCheck'], { cwd: workDir, timeout: 110_000, maxBuffer: 16 * 1024 * 1024 });
@@ -109,7 +114,7 @@ afterAll(async () => {
   await nodeFs.rm(workDir, { recursive: true, force: true });
 });
 
-describe('electronegativity scan of src-main', () => {
+describe('electronegativity scan of main, preload and renderer', () => {
   it('still detects an insecure window (control file)', () => {
     const control = new Set(findings.filter((finding) => finding.file === CONTROL_FILE).map((finding) => finding.rule));
     // Rule ids from electronegativity's checks: NODE_INTEGRATION_JS_CHECK, CONTEXT_ISOLATION_JS_CHECK, SANDBOX_JS_CHECK (node_modules/@doyensec/electronegativity/src/finder/checks)

@@ -5,7 +5,6 @@
  * through playwright-core). Optional CSV files of the load sweep and of the ledger, a tolerance appendix
  * and a comparison appendix. Everything shown is the engine's records, formatted (shared-model/report).
  */
-import { readFileSync } from 'node:fs';
 import nodePath from 'node:path';
 import {
   buildReport,
@@ -17,10 +16,12 @@ import {
   monteCarlo,
   partInRole,
   ROLES,
+  serializeDesign,
   validatePartsLibrary,
   worstCase,
 } from '../../../shared-model/index.ts';
 import type { Comparison, Design, Part, Role } from '../../../shared-model/index.ts';
+import packageJson from '../../../package.json';
 import { CAUTION_LINE } from '../cautions.ts';
 import type { Command } from '../command.ts';
 import { loadDesign } from '../design-file.ts';
@@ -36,12 +37,7 @@ function today(now: Date = new Date()): string {
 }
 
 function appVersion(): string {
-  try {
-    const pkg = JSON.parse(readFileSync(new URL('../../../package.json', import.meta.url), 'utf8')) as { version?: string };
-    return pkg.version ?? 'unknown';
-  } catch {
-    return 'unknown';
-  }
+  return typeof packageJson.version === 'string' ? packageJson.version : 'unknown';
 }
 
 function comparisonFor(design: Design, role: Role, ids: string[], io: CliIo): Comparison | null {
@@ -116,14 +112,15 @@ export const reportCommand: Command = {
     }
     const loaded = await loadDesign(args.positionals[0] ?? '', io, PROGRAM);
     if (!loaded.ok) return EXIT.invalidDesign;
-    const read = await io.readText(args.positionals[0] ?? '');
     const design = loaded.design;
+    // The report hashes the design's canonical text (shared-model/design/canonical.ts), not the file's bytes.
+    const canonical = serializeDesign(design);
     const comparison = role ? comparisonFor(design, role, ids, io) : null;
     if (role && !comparison) return EXIT.usage;
     const tolerance = args.switches.has('tolerance');
     const model = buildReport({
       design,
-      documentText: read.ok ? read.text : '',
+      documentText: canonical.ok ? canonical.text : '',
       date: args.texts.date ?? today(),
       appVersion: appVersion(),
       project: args.texts.project ?? null,

@@ -3,7 +3,8 @@
  * part; landmarks with load and value or null with a reason), the CSV table, and the plain-text view.
  */
 import type { Design, FiguresOfMerit, Landmark, Landmarks, LoadSweep } from '../../../shared-model/index.ts';
-import { formatEngineering as fmt } from '../../../shared-model/index.ts';
+import type { CsvCell } from '../../../shared-model/index.ts';
+import { csvLines, formatEngineering as fmt } from '../../../shared-model/index.ts';
 import { CAUTION_LINE, CAUTIONS } from '../cautions.ts';
 import { renderTable, section } from '../table.ts';
 
@@ -36,9 +37,10 @@ export function sweepJson(design: Design, sweep: LoadSweep, landmarks: Landmarks
   };
 }
 
-const csvCell = (s: string): string => (/[",\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s);
-
-/** One row per point; column names carry their units. */
+/**
+ * One row per point; column names carry their units. Written by the shared CSV writer (RFC 4180, CRLF,
+ * text cells neutralised against spreadsheet formula injection: shared-model/csv/write.ts).
+ */
 export function sweepCsv(sweep: LoadSweep): string {
   const c = sweep.columns;
   const head = [
@@ -47,13 +49,11 @@ export function sweepCsv(sweep: LoadSweep): string {
     ...c.losses.map((l) => `loss_${l.part}_${l.mechanism.replace(/ /g, '_')}_W`),
     'warnings',
   ];
-  const rows = sweep.points.map((p) =>
-    [
-      p.loadA, p.efficiency, p.totalLoss, p.inputPower, p.outputPower, p.dutyCycle, p.mode, p.converged,
-      ...p.temperaturesC, ...p.losses, [...new Set(p.warnings.map((w) => w.code))].join(' '),
-    ].map((v) => csvCell(String(v))).join(','),
-  );
-  return [head.join(','), ...rows].join('\n');
+  const rows = sweep.points.map((p): CsvCell[] => [
+    p.loadA, p.efficiency, p.totalLoss, p.inputPower, p.outputPower, p.dutyCycle, p.mode, String(p.converged),
+    ...p.temperaturesC, ...p.losses, [...new Set(p.warnings.map((w) => w.code))].join(' '),
+  ]);
+  return csvLines([head, ...rows]);
 }
 
 function landmarkLine(name: string, l: Landmark, value: (v: number) => string): string[] {

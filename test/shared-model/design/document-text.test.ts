@@ -102,3 +102,31 @@ describe('serializeDesign writes JSON that reads back the same, and refuses what
     expect(r.ok).toBe(true);
   });
 });
+
+describe('notices and problems never carry a huge or deep value (issue 15 §3)', () => {
+  const base = demoText().trimEnd().slice(0, -1);
+
+  it('an unknown key holding a 10 MB text: named, and the text summarised to 40 characters and its length', () => {
+    const r = parseDesignText(`${base}, "huge": "${'x'.repeat(10_000_000)}"}`);
+    expect(r.ok).toBe(true);
+    const n = r.ok ? r.warnings?.find((w) => w.path === 'huge') : undefined;
+    expect(n?.message).toBe('huge is not a WattLedger key and was ignored (misspelt?).');
+    expect(n?.value).toBe(`${'x'.repeat(40)}… (10,000,000 characters; not shown)`);
+  });
+
+  it('an unknown key nested 5 000 levels deep: named, summarised with its depth, and the result still serialises', () => {
+    const r = parseDesignText(`${base}, "extraKey": ${'{"k":'.repeat(5000)}1${'}'.repeat(5000)}}`);
+    expect(r.ok).toBe(true);
+    const n = r.ok ? r.warnings?.find((w) => w.path === 'extraKey') : undefined;
+    expect(n?.value).toBe('(an object with 1 key, nested 5,000 levels deep; not shown)');
+    expect(() => JSON.stringify(r)).not.toThrow(); // the CLI's --json output of the same record
+  });
+
+  it('a known field given a deep object is refused with a problem whose value is summarised', () => {
+    const r = parseDesignText(demoText().replace('"vinMaxV": 16.8', `"vinMaxV": ${'['.repeat(3000)}${']'.repeat(3000)}`));
+    expect(r.ok).toBe(false);
+    const p = r.ok ? undefined : r.problems.find((x) => x.path === 'spec.vinMaxV');
+    expect(p?.value).toBe('(a list of 1 item, nested 3,000 levels deep; not shown)');
+    expect(() => JSON.stringify(r)).not.toThrow();
+  });
+});

@@ -1,28 +1,11 @@
-import nodePath from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { DEMO_DESIGNS, evaluate, validateDesign } from '../../../shared-model/index.ts';
 import { COMMANDS } from '../../../src-main/cli/commands/index.ts';
-import type { CliIo } from '../../../src-main/cli/io.ts';
 import { EXIT } from '../../../src-main/cli/io.ts';
 import { runCli } from '../../../src-main/cli/main.ts';
 import versionZero from '../../shared-model/design/fixtures/synchronous-buck.v0.json';
+import { demoText, memoryIo } from './memory-io.ts';
 
-/** An in-memory terminal with files given as text. */
-function memoryIo(files: Record<string, string> = {}): CliIo & { stdout: string; stderr: string } {
-  const io = {
-    stdout: '',
-    stderr: '',
-    out: (t: string) => void (io.stdout += `${t}\n`),
-    err: (t: string) => void (io.stderr += `${t}\n`),
-    readText: async (path: string) => {
-      const text = files[path];
-      return text === undefined ? { ok: false as const, message: `Could not open "${nodePath.basename(path)}": the file or its folder does not exist (ENOENT).` } : { ok: true as const, text };
-    },
-  };
-  return io;
-}
-
-const demoText = (id: string): string => JSON.stringify(DEMO_DESIGNS.find((d) => d.id === id)?.json);
 
 describe('runCli dispatches through the command registry', () => {
   it('lists every registered command in the usage text', async () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { CSP_DIRECTIVES, contentSecurityPolicy, parseContentSecurityPolicy } from '../../../src-main/security/csp.ts';
+import { CSP_DIRECTIVES, contentSecurityPolicy, metaContentSecurityPolicy, parseContentSecurityPolicy } from '../../../src-main/security/csp.ts';
 
 describe('contentSecurityPolicy()', () => {
   const policy = parseContentSecurityPolicy(contentSecurityPolicy());
@@ -29,5 +29,23 @@ describe('contentSecurityPolicy()', () => {
 
   it('round-trips through the parser, so the header and the directive table agree', () => {
     expect(Object.keys(policy)).toEqual(Object.keys(CSP_DIRECTIVES)); // independent parse of the emitted header
+  });
+});
+
+describe('one policy for the header and the renderer\'s meta tag (issue 15 §4)', () => {
+  it('src-renderer/index.html carries exactly the header policy, less what a meta element cannot carry', async () => {
+    const { readFileSync } = await import('node:fs');
+    const html = readFileSync(new URL('../../../src-renderer/index.html', import.meta.url), 'utf8');
+    const meta = /<meta\s+http-equiv="Content-Security-Policy"\s+content="([^"]*)"/.exec(html)?.[1];
+    expect(meta).toBe(metaContentSecurityPolicy());
+    const header = parseContentSecurityPolicy(contentSecurityPolicy());
+    delete header['frame-ancestors']; // CSP Level 3 §6.4.2: frame-ancestors is not supported in a meta element [from memory]
+    expect(parseContentSecurityPolicy(meta ?? '')).toEqual(header);
+  });
+
+  it('allows no inline style and no blob: workers (the renderer needs neither)', () => {
+    const policy = parseContentSecurityPolicy(metaContentSecurityPolicy());
+    expect(policy['style-src']).toEqual(["'self'"]);
+    expect(policy['worker-src']).toEqual(["'self'"]);
   });
 });

@@ -82,3 +82,15 @@ describe('recovery snapshots', () => {
     expect(readRecoveryText(demoText())).toBeNull();
   });
 });
+
+describe('the app writes the canonical text (issue 15 §3: the same design hashes the same by every route)', () => {
+  it('opening a shipped demo and saving it unchanged writes the file byte for byte', async () => {
+    const { readFileSync } = await import('node:fs');
+    for (const id of ['synchronous-buck', 'diode-boost', 'hot-fin-buck']) {
+      const file = readFileSync(new URL(`../../../assets/designs/${id}.json`, import.meta.url), 'utf8');
+      const opened = readDesignText(file, `${id}.json`);
+      expect(opened.ok).toBe(true);
+      if (opened.ok) expect(designText(opened.design)).toEqual({ ok: true, text: file });
+    }
+  });
+});
