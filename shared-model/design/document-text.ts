@@ -9,7 +9,7 @@
  */
 import { canonicalOrder } from './canonical.ts';
 import { duplicateKeys } from './json-keys.ts';
-import { findJsonSyntaxError } from './json-position.ts';
+import { findJsonSyntaxError, lineColumn } from './json-position.ts';
 import { designSchema } from './schema.ts';
 import type { DesignNotice } from './problems.ts';
 import type { Problem } from './problems.ts';
@@ -22,7 +22,7 @@ export function parseDesignText(text: string): DesignValidation {
   if (typeof text !== 'string') return { ok: false, problems: [problem('', text, 'JSON text', 'The design must be given as JSON text.')] };
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   if (body.trim() === '')
-    return { ok: false, problems: [problem('', '', 'a JSON object', 'The design file is empty; it must hold a JSON object.')] };
+    return { ok: false, problems: [{ ...problem('', '', 'a JSON object', 'The design file is empty; it must hold a JSON object.'), line: 1, column: 1 }] };
   let json: unknown;
   try {
     json = JSON.parse(body);
@@ -36,7 +36,11 @@ export function parseDesignText(text: string): DesignValidation {
     return { ok: false, problems: [{ ...problem('', excerpt, 'JSON text (RFC 8259)', message), line: where.line, column: where.column }] };
   }
   const validation = validateDesign(json);
-  if (!validation.ok) return validation;
+  if (!validation.ok) {
+    // A problem with the whole document (not an object, say) points at where its value starts.
+    const start = lineColumn(body, body.length - body.trimStart().length);
+    return { ok: false, problems: validation.problems.map((p) => (p.path === '' && p.line === undefined ? { ...p, ...start } : p)) };
+  }
   const repeated: DesignNotice[] = duplicateKeys(body).map((d) => ({
     path: d.path,
     value: d.key,

@@ -11,6 +11,7 @@ import { constants as fsConstants } from 'node:fs';
 import nodePath from 'node:path';
 import { describeFsError } from './fs-errors.ts';
 import { describeKind, kindOf, type FileKind } from './file-kind.ts';
+import { firstInvalidUtf8, lineOfByte } from './utf8.ts';
 import { MAX_TEXT_CHARS } from '../ipc/payloads.ts';
 
 
@@ -78,12 +79,11 @@ export async function readTextFile(path: string, fs: ReadFs = nodeReadFs, limit:
     if (kind !== 'file') return { ok: false, message: `Could not open "${name}": it is ${describeKind(kind)}, not a file. Choose a design file (.json).` };
     const read = await readBounded(handle, limit);
     if (!read.ok) return { ok: false, message: `Could not open "${name}": it is larger than ${limit / 1e6} MB, the most a design file may be. Is it the right file?` };
-    let text: string;
-    try {
-      text = new TextDecoder('utf-8', { fatal: true }).decode(read.bytes);
-    } catch {
-      return { ok: false, message: `Could not open "${name}": it is not a UTF-8 text file. Is it the right file?` };
+    const bad = firstInvalidUtf8(read.bytes);
+    if (bad >= 0) {
+      return { ok: false, message: `Could not open "${name}": it is not a UTF-8 text file (line ${lineOfByte(read.bytes, bad)} holds a byte that is not UTF-8, at byte ${bad + 1}). Is it the right file?` };
     }
+    const text = new TextDecoder('utf-8').decode(read.bytes);
     return { ok: true, path, name, text: text.startsWith('\uFEFF') ? text.slice(1) : text };
   } catch (error) {
     return { ok: false, message: `Could not open "${name}": ${describeFsError(error)}.` };

@@ -21,7 +21,7 @@ import {
   worstCase,
 } from '../../../shared-model/index.ts';
 import type { Comparison, Design, Part, Role } from '../../../shared-model/index.ts';
-import packageJson from '../../../package.json';
+import { version as packageVersion } from '../../../package.json';
 import { CAUTION_LINE } from '../cautions.ts';
 import type { Command } from '../command.ts';
 import { loadDesign } from '../design-file.ts';
@@ -37,7 +37,7 @@ function today(now: Date = new Date()): string {
 }
 
 function appVersion(): string {
-  return typeof packageJson.version === 'string' ? packageJson.version : 'unknown';
+  return typeof packageVersion === 'string' ? packageVersion : 'unknown';
 }
 
 function comparisonFor(design: Design, role: Role, ids: string[], io: CliIo): Comparison | null {

@@ -25,7 +25,15 @@ describe('readTextFile()', () => {
   it('refuses binary content with a sentence instead of mojibake', async () => {
     const path = nodePath.join(folder, 'photo.json');
     await nodeFs.writeFile(path, Uint8Array.from([0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10])); // JPEG SOI marker is not valid UTF-8 (RFC 3629)
-    expect(await readTextFile(path)).toEqual({ ok: false, message: 'Could not open "photo.json": it is not a UTF-8 text file. Is it the right file?' });
+    expect(await readTextFile(path)).toEqual({ ok: false, message: 'Could not open "photo.json": it is not a UTF-8 text file (line 1 holds a byte that is not UTF-8, at byte 1). Is it the right file?' });
+  });
+
+  it('names the line of the first byte that is not UTF-8', async () => {
+    const path = nodePath.join(folder, 'noise.json');
+    const bytes = new TextEncoder().encode('{\n  "name": "Lüfter",\n  "x": "?"\n}');
+    bytes[bytes.indexOf(0x3f)] = 0xc0; // 0xC0 never occurs in UTF-8 (Unicode Standard §3.9, Table 3-7)
+    await nodeFs.writeFile(path, bytes);
+    expect(await readTextFile(path)).toMatchObject({ ok: false, message: expect.stringContaining('line 3 holds a byte that is not UTF-8') });
   });
 
   it('refuses a file larger than the limit after reading at most one byte past it', async () => {
