@@ -78,6 +78,11 @@ export default tseslint.config(
     rules: { 'no-restricted-imports': ['error', mainDoor] },
   },
   {
+    // Scripts that use the engine as a package ('wattledger', built by npm install) run in Node.
+    files: ['examples/**/*.js'],
+    languageOptions: { globals: { ...globals.node } },
+  },
+  {
     files: ['test/**/*.ts', '*.config.ts', '*.config.js', '*.config.cjs', '.ci/**/*.js'],
     languageOptions: { globals: { ...globals.node, ...globals.browser } },
   },

@@ -27,7 +27,7 @@ const GET_IT = 'to get the desktop app, run `npm install` on a machine with inte
  */
 export function locateElectron(probe: ElectronProbe): ElectronRuntime {
   if (probe.packageDir === null) {
-    return { found: false, reason: `the electron package is not installed here, so WattLedger runs in your browser instead; ${GET_IT}.` };
+    return { found: false, reason: `the Electron runtime could not be downloaded when npm installed this folder (npm then leaves out the optional electron package), so WattLedger runs in your browser instead; ${GET_IT}.` };
   }
   const relative = probe.readPathFile()?.trim() ?? '';
   const override = probe.env['ELECTRON_OVERRIDE_DIST_PATH'];
