@@ -5,7 +5,8 @@
  *                                  `import { evaluate } from 'wattledger'` (package.json "exports");
  *   out/lib/types/shared-model/  — its type declarations (tsc), entry index.d.ts (package.json "types");
  *   out/cli/wattledger.js        — the command line (src-main/cli/entry.ts) as one ES module for Node,
- *                                  packages left to node_modules (package.json "bin").
+ *                                  zod inlined (one file to load starts faster); only what the report
+ *                                  command loads on demand stays in node_modules (package.json "bin").
  * With --if-stale it does nothing when every output is newer than every source it is made from.
  *
  * Usage: tsx src-main/dev/build-package.ts [--if-stale]
@@ -78,7 +79,8 @@ async function buildCli(): Promise<void> {
     format: 'esm',
     platform: 'node',
     target: 'node20',
-    packages: 'external',
+    // Loaded by `report` only, with import(): the page bundler and the PDF printer.
+    external: ['vite', '@sveltejs/vite-plugin-svelte', 'playwright-core', 'electron'],
     logLevel: 'warning',
     banner: { js: '#!/usr/bin/env node\n// WattLedger command line, built from src-main/cli by src-main/dev/build-package.ts. Do not edit.' },
   });
