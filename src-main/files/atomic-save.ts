@@ -47,8 +47,6 @@ export interface SaveFs {
   create(path: string, mode: number): Promise<WritableFile>;
   rename(from: string, to: string): Promise<void>;
   unlink(path: string): Promise<void>;
-  /** The file's permission bits, or null when it does not exist. */
-  modeOf(path: string): Promise<number | null>;
   readFile(path: string): Promise<Uint8Array>;
   /** Flushes a folder's entry table so a completed rename survives a power cut; best effort. */
   syncFolder(path: string): Promise<void>;
@@ -62,7 +60,6 @@ export interface SaveFs {
   list(folder: string): Promise<string[]>;
 }
 
-
 export const nodeSaveFs: SaveFs = {
   async create(path, mode) {
     const handle = await nodeFs.open(path, 'wx', mode);
@@ -74,14 +71,6 @@ export const nodeSaveFs: SaveFs = {
   },
   rename: (from, to) => nodeFs.rename(from, to),
   unlink: (path) => nodeFs.unlink(path),
-  async modeOf(path) {
-    try {
-      return (await nodeFs.stat(path)).mode & 0o777;
-    } catch (error) {
-      if (errorCode(error) === 'ENOENT') return null;
-      throw error;
-    }
-  },
   readFile: async (path) => new Uint8Array(await nodeFs.readFile(path)),
   async inspect(path) {
     try {

@@ -76,7 +76,6 @@ export function journalingFs(injection: Injection = {}): SaveFs & { journal: str
       journal.push(`unlink ${label(path)}`);
       return nodeSaveFs.unlink(path);
     },
-    modeOf: (path) => nodeSaveFs.modeOf(path),
     readFile: (path) => {
       if (injection.failReadOf === path) return Promise.reject(fsError('EIO', 'i/o error, read'));
       const error = injection.failOn?.('read', path);
