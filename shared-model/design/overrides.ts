@@ -13,7 +13,7 @@
  * Every problem names the override (conditions.vinV...), its value and the range that would be valid.
  */
 import type { Problem } from './problems.ts';
-import { inUnit, problem } from './problems.ts';
+import { describeValue, inUnit, problem } from './problems.ts';
 import type { NumberRange } from './number-range.ts';
 import { inRange, numberRangeOf, rangeText } from './number-range.ts';
 import { unitOfKey } from './key-units.ts';
@@ -111,7 +111,7 @@ export function checkConditionOverrides(design: Design, o: ConditionOverrides): 
     if (value !== undefined && !inRange(value, range)) {
       const path = `conditions.${key}`;
       const allowed = rangeText(range, path, range.unit);
-      out.push(problem(path, value, allowed, `${path} is ${inUnit(value, path)}; allowed: ${allowed} (the range of ${range.field} in a design).`));
+      out.push(problem(path, value, allowed, `${path} is ${describeValue(value, range.unit)}; allowed: ${allowed} (the range of ${range.field} in a design).`));
     }
   }
   if (out.length > 0) return out;
