@@ -14,10 +14,16 @@ export type { Severity, Warning, WarningCode } from './warnings.ts';
 // --- design document ---
 export * from './design/parts.ts';
 export * from './design/schema.ts';
-export { ABSOLUTE_ZERO_C, LIMITS as DESIGN_LIMITS } from './design/numbers.ts';
+export type { QuantityName, QuantityRange } from './design/numbers.ts';
+export { ABSOLUTE_ZERO_C, RANGES as DESIGN_RANGES } from './design/numbers.ts';
 export { unitOfKey, unitOfPath } from './design/key-units.ts';
 export type { DesignNotice, Problem } from './design/problems.ts';
 export { describeValue } from './design/problems.ts';
+export type { NumberRange } from './design/number-range.ts';
+export { inRange, numberRangeOf, rangeText } from './design/number-range.ts';
+export type { ConditionKey, ConditionOverrides, FieldRange } from './design/overrides.ts';
+export { checkConditionOverrides, CONDITION_RANGES, designFieldRange } from './design/overrides.ts';
+export { MAX_RIPPLE_OVER_CURRENT, MAX_SENSE_DROP_FRACTION } from './design/rules-validity.ts';
 export type { DesignValidation } from './design/validate.ts';
 export { crossFieldProblems, validateDesign } from './design/validate.ts';
 export type { MigrationResult } from './design/migrate.ts';

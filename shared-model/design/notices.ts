@@ -1,12 +1,33 @@
 /**
  * Notices on a valid design: things that do not stop a calculation but that the engineer should know —
  * keys WattLedger ignored (often a misspelling), parts or paths that are present but unused, heatsinks
- * nobody is mounted on, a life requirement no capacitor can be checked against.
+ * nobody is mounted on, a life requirement no capacitor can be checked against, a duty limit that cannot
+ * reach the output anywhere in the specified input range.
+ *
+ * The duty reach. Even without losses a buck needs D = Vout/Vin and a boost D = 1 − Vin/Vout
+ * (Erickson & Maksimović 2nd ed. ch. 2 [memory for chapter]); the easiest input is Vin,max. When
+ * spec.maxDuty is below that duty, no point of the design regulates. This is a notice, not a problem:
+ * the models stay meaningful (every result is computed at the duty limit and flagged unregulated, with a
+ * cannot-regulate warning), it is a poor design rather than an impossible one [our own rule].
  */
 import type { Design } from './schema.ts';
 import type { DesignNotice } from './problems.ts';
 import { compactValue, pathToString } from './problems.ts';
 import { isObject } from './read.ts';
+import { formatEngineering } from '../units/engineering.ts';
+
+/** A notice when spec.maxDuty cannot reach the output at any input of the specified range (see the header). */
+export function dutyReachNotice(design: Design): DesignNotice | undefined {
+  const { spec, topology } = design;
+  const needed = topology.kind === 'buck' ? spec.voutV / spec.vinMaxV : 1 - spec.vinMaxV / spec.voutV;
+  if (!(needed > 0 && needed < 1) || spec.maxDuty > needed) return undefined;
+  const d = (x: number): string => formatEngineering(x, '', 6);
+  return {
+    path: 'spec.maxDuty',
+    value: spec.maxDuty,
+    message: `spec.maxDuty (${d(spec.maxDuty)}) cannot reach spec.voutV (${formatEngineering(spec.voutV, 'V', 6)}) anywhere in the input range: even without losses a ${topology.kind} needs a duty of ${d(needed)} at the highest input spec.vinMaxV (${formatEngineering(spec.vinMaxV, 'V', 6)}), so every result will be unregulated; for a regulated design spec.maxDuty must be above ${d(needed)}.`,
+  };
+}
 
 /** Keys in `input` that the schema dropped from `parsed` (zod strips unknown keys). */
 export function ignoredKeys(input: unknown, parsed: unknown, path: (string | number)[] = []): DesignNotice[] {
@@ -54,6 +75,8 @@ export function designNotices(design: Design): DesignNotice[] {
         });
     }
   }
+  const reach = dutyReachNotice(design);
+  if (reach) out.push(reach);
   if (topology.rectifier === 'diode' && (topology.deadTimeBeforeOnS > 0 || topology.deadTimeAfterOffS > 0))
     out.push({ path: 'topology.deadTimeBeforeOnS', value: topology.deadTimeBeforeOnS, message: 'Dead times apply to synchronous rectifiers only; with a diode they are ignored.' });
   return out;

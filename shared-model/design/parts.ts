@@ -5,12 +5,11 @@
  * C for coulombs, J, M2/M3 for area/volume, KPerW for thermal resistance). Temperatures are degrees
  * Celsius and carry the suffix `C` on keys named `...TempC`, `...AtC`, `...MaxC`; temperature
  * coefficients are per kelvin (`PerK`). Prefixes (m, µ, n) never appear inside the engine.
- * Ranges (design/numbers.ts) are sanity limits; relations between fields are checked in design/rules-*.ts.
+ * Every number has a named range (design/numbers.ts: a lower and an upper sanity limit and the reason);
+ * relations between fields are checked in design/rules-*.ts.
  */
 import { z } from 'zod';
-import { LIMITS as L, between, fractionUpToOne, nonNegative, positive, temperatureC } from './numbers.ts';
-
-export { nonNegative, positive, temperatureC } from './numbers.ts';
+import { quantity as q } from './numbers.ts';
 
 const partIdentity = {
   id: z.string().min(1).max(80),
@@ -23,163 +22,163 @@ const partIdentity = {
 /** How RDS(on) grows with junction temperature. */
 export const rdsTemperatureLawSchema = z.discriminatedUnion('law', [
   /** R(T) = R25 · (1 + alphaPerK · (T − 25 °C)) */
-  z.object({ law: z.literal('linear'), alphaPerK: nonNegative(L.tempCoPerK) }),
+  z.object({ law: z.literal('linear'), alphaPerK: q('rdsAlphaPerK') }),
   /** R(T) = R25 · ((T + 273.15) / 298.15) ^ exponent */
-  z.object({ law: z.literal('power'), exponent: nonNegative(5) }),
+  z.object({ law: z.literal('power'), exponent: q('rdsExponent') }),
   /** Two datasheet points: R(hotC) / R(25 °C) = hotRatio; fitted as `shape`. */
   z.object({
     law: z.literal('two-point'),
     shape: z.enum(['linear', 'power']),
-    hotC: temperatureC(),
-    hotRatio: between(0.1, 10),
+    hotC: q('statedC'),
+    hotRatio: q('hotRatio'),
   }),
 ]);
 
 /** Output capacitance: a small-signal Coss at a voltage, or charge and energy at a voltage. */
 export const outputCapacitanceSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('capacitance'), cossF: nonNegative(L.parasiticCapacitanceF), atV: positive(L.voltageV) }),
+  z.object({ kind: z.literal('capacitance'), cossF: q('parasiticF'), atV: q('ratingV') }),
   z.object({
     kind: z.literal('charge-energy'),
-    qossC: nonNegative(L.gateChargeC),
-    eossJ: nonNegative(L.energyJ),
-    atV: positive(L.voltageV),
+    qossC: q('outputChargeC'),
+    eossJ: q('energyJ'),
+    atV: q('ratingV'),
   }),
 ]);
 
 export const mosfetSchema = z.object({
   kind: z.literal('mosfet'),
   ...partIdentity,
-  vdsRatingV: positive(L.voltageV),
-  idRatingA: positive(L.currentA),
-  rdsOn25Ohm: positive(L.resistanceOhm),
+  vdsRatingV: q('ratingV'),
+  idRatingA: q('ratingA'),
+  rdsOn25Ohm: q('conductionOhm'),
   rdsTemperatureLaw: rdsTemperatureLawSchema,
   /** Total gate charge at the driver's voltage. */
-  qgC: positive(L.gateChargeC),
+  qgC: q('gateChargeC'),
   /** Gate-source charge after threshold (Qgs2). Estimated from qgsC when absent. */
-  qgs2C: positive(L.gateChargeC).optional(),
+  qgs2C: q('gateSubChargeC').optional(),
   /** Whole gate-source charge up to the plateau. Used only when qgs2C is absent. */
-  qgsC: positive(L.gateChargeC).optional(),
-  qgdC: positive(L.gateChargeC),
-  vthV: positive(L.gateVoltageV),
-  plateauV: positive(L.gateVoltageV),
-  rgInternalOhm: nonNegative(L.driveResistanceOhm),
+  qgsC: q('gateSubChargeC').optional(),
+  qgdC: q('gateSubChargeC'),
+  vthV: q('gateV'),
+  plateauV: q('gateV'),
+  rgInternalOhm: q('driveOhm'),
   outputCapacitance: outputCapacitanceSchema,
-  bodyDiodeVsdV: positive(L.forwardVoltageV),
-  bodyDiodeQrrC: nonNegative(L.recoveryChargeC),
+  bodyDiodeVsdV: q('forwardV'),
+  bodyDiodeQrrC: q('recoveryChargeC'),
   /** Forward current at which bodyDiodeQrrC is stated; Qrr is scaled by IF / this. Rated load current when absent. */
-  bodyDiodeQrrTestA: positive(L.currentA).optional(),
-  tjMaxC: temperatureC(),
-  thetaJcKPerW: nonNegative(L.thetaKPerW),
+  bodyDiodeQrrTestA: q('ratingA').optional(),
+  tjMaxC: q('partLimitC'),
+  thetaJcKPerW: q('thetaPartKPerW'),
 });
 
 export const diodeSchema = z.object({
   kind: z.literal('diode'),
   ...partIdentity,
   technology: z.enum(['schottky', 'pn']),
-  vf0V: positive(L.forwardVoltageV),
-  rdOhm: nonNegative(L.resistanceOhm),
+  vf0V: q('forwardV'),
+  rdOhm: q('seriesOhm'),
   /** dVF0/dT, usually negative (about −1 to −2 mV/K). */
-  vfTempCoVPerK: between(-0.1, 0.1),
+  vfTempCoVPerK: q('vfTempCoVPerK'),
   /** Reverse-recovery charge (PN diodes). */
-  qrrC: nonNegative(L.recoveryChargeC),
+  qrrC: q('recoveryChargeC'),
   /** Forward current at which qrrC is stated; Qrr is scaled by IF / this. Rated load current when absent. */
-  qrrTestA: positive(L.currentA).optional(),
+  qrrTestA: q('ratingA').optional(),
   /** Junction capacitance (Schottky), treated as linear. */
-  cjF: nonNegative(L.parasiticCapacitanceF),
-  leakageA: nonNegative(L.leakageA),
-  leakageAtC: temperatureC(),
+  cjF: q('parasiticF'),
+  leakageA: q('leakageA'),
+  leakageAtC: q('statedC'),
   /** Leakage doubles every this many kelvin. */
-  leakageDoublingK: between(1, 100),
-  vrRatingV: positive(L.voltageV),
-  ifRatingA: positive(L.currentA),
-  tjMaxC: temperatureC(),
-  thetaJcKPerW: nonNegative(L.thetaKPerW),
+  leakageDoublingK: q('leakageDoublingK'),
+  vrRatingV: q('ratingV'),
+  ifRatingA: q('ratingA'),
+  tjMaxC: q('partLimitC'),
+  thetaJcKPerW: q('thetaPartKPerW'),
 });
 
 export const coreLossSchema = z.discriminatedUnion('kind', [
   /** Steinmetz Pv = k · f^alpha · Bpk^beta in W/m³ with f in Hz and B in T (sine excitation). */
-  z.object({ kind: z.literal('steinmetz'), k: positive(), alpha: positive(3), beta: positive(4) }),
+  z.object({ kind: z.literal('steinmetz'), k: q('steinmetzK'), alpha: q('steinmetzAlpha'), beta: q('steinmetzBeta') }),
   /** One datasheet point (sine, peak flux) plus exponents; k is derived from it. */
   z.object({
     kind: z.literal('point'),
-    lossWPerM3: positive(1e9),
-    atHz: positive(L.frequencyMaxHz),
-    atPeakT: positive(2),
-    alpha: positive(3),
-    beta: positive(4),
+    lossWPerM3: q('lossDensityWPerM3'),
+    atHz: q('statedHz'),
+    atPeakT: q('fluxT'),
+    alpha: q('steinmetzAlpha'),
+    beta: q('steinmetzBeta'),
   }),
 ]);
 
 export const acWindingSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('none') }),
   /** Rac / Rdc of the winding at the switching frequency, applied to the ripple (AC) current. */
-  z.object({ kind: z.literal('factor'), racOverRdc: between(1, 1000) }),
+  z.object({ kind: z.literal('factor'), racOverRdc: q('racOverRdc') }),
   /** Dowell's layered-winding model (Proc. IEE 113(8), 1966). */
   z.object({
     kind: z.literal('dowell'),
-    layers: positive(100),
-    conductorThicknessM: positive(L.lengthM),
-    porosity: fractionUpToOne(),
+    layers: q('layers'),
+    conductorThicknessM: q('conductorM'),
+    porosity: q('porosity'),
   }),
 ]);
 
 export const inductorSchema = z.object({
   kind: z.literal('inductor'),
   ...partIdentity,
-  inductanceH: positive(L.inductanceH),
+  inductanceH: q('inductanceH'),
   /** Optional roll-off: inductance at a stated current (linear between 0 A and this point). */
-  rolloff: z.object({ currentA: positive(L.currentA), inductanceH: positive(L.inductanceH) }).optional(),
-  dcr20Ohm: positive(L.resistanceOhm),
-  isatA: positive(L.currentA),
-  isatAtC: temperatureC(),
+  rolloff: z.object({ currentA: q('ratingA'), inductanceH: q('inductanceH') }).optional(),
+  dcr20Ohm: q('conductionOhm'),
+  isatA: q('ratingA'),
+  isatAtC: q('statedC'),
   /** Fractional change of Isat per kelvin (ferrite: negative). */
-  isatTempCoPerK: between(-L.tempCoPerK, L.tempCoPerK),
-  irmsRatingA: positive(L.currentA),
-  turns: positive(10_000),
-  aeM2: positive(L.areaM2),
-  veM3: positive(L.volumeM3),
+  isatTempCoPerK: q('partTempCoPerK'),
+  irmsRatingA: q('ratingA'),
+  turns: q('turns'),
+  aeM2: q('coreAreaM2'),
+  veM3: q('coreVolumeM3'),
   coreLoss: coreLossSchema,
   acWinding: acWindingSchema,
-  tMaxC: temperatureC(),
+  tMaxC: q('partLimitC'),
 });
 
 export const capacitorSchema = z.object({
   kind: z.literal('capacitor'),
   ...partIdentity,
   dielectric: z.enum(['ceramic', 'electrolytic', 'polymer', 'film']),
-  capacitanceF: positive(L.capacitanceF),
+  capacitanceF: q('capacitanceF'),
   /** ESR at the switching frequency. */
-  esrOhm: nonNegative(L.resistanceOhm),
+  esrOhm: q('seriesOhm'),
   /** Fractional ESR change per kelvin from 25 °C (electrolytics fall as they warm). 0 if unknown. */
-  esrTempCoPerK: between(-L.tempCoPerK, L.tempCoPerK),
-  rippleRatingA: positive(L.currentA),
-  voltageRatingV: positive(L.voltageV),
-  tMaxC: temperatureC(),
+  esrTempCoPerK: q('partTempCoPerK'),
+  rippleRatingA: q('ratingA'),
+  voltageRatingV: q('ratingV'),
+  tMaxC: q('partLimitC'),
   /** Rated life at rated temperature (electrolytic and polymer). */
-  life: z.object({ ratedHours: positive(L.hours), ratedC: temperatureC() }).optional(),
+  life: z.object({ ratedHours: q('lifeHours'), ratedC: q('statedC') }).optional(),
 });
 
 export const resistorSchema = z.object({
   kind: z.literal('resistor'),
   ...partIdentity,
-  resistanceOhm: positive(L.resistanceOhm),
-  tempCoPerK: between(-0.01, 0.01),
-  powerRatingW: positive(L.powerW),
+  resistanceOhm: q('conductionOhm'),
+  tempCoPerK: q('resistorTempCoPerK'),
+  powerRatingW: q('powerW'),
   /** Full rated power up to this temperature, then linear derating to zero at zeroPowerC. */
-  deratingStartC: temperatureC(),
-  zeroPowerC: temperatureC(),
+  deratingStartC: q('statedC'),
+  zeroPowerC: q('partLimitC'),
 });
 
 export const controllerSchema = z.object({
   kind: z.literal('controller'),
   ...partIdentity,
-  quiescentA: nonNegative(1),
-  driveV: positive(L.gateVoltageV),
-  pullUpOhm: nonNegative(L.driveResistanceOhm),
-  pullDownOhm: nonNegative(L.driveResistanceOhm),
+  quiescentA: q('quiescentA'),
+  driveV: q('driveV'),
+  pullUpOhm: q('driveOhm'),
+  pullDownOhm: q('driveOhm'),
   /** True when the drive rail is made from Vin by a linear regulator (the input pays Vin · Qg · fs). */
   driveFromVinLinear: z.boolean(),
-  tjMaxC: temperatureC(),
+  tjMaxC: q('partLimitC'),
 });
 
 export const partSchema = z.discriminatedUnion('kind', [

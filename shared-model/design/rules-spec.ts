@@ -99,6 +99,13 @@ function senseResistor(doc: unknown, out: Problem[]): void {
       `topology.senseLocation is "${where}", so thermal.paths.senseResistor is needed to find the resistor's temperature.`));
 }
 
+/** The dead-time rule alone (the condition overrides re-check it at an overridden frequency or input). */
+export function deadTimeRule(doc: unknown): Problem[] {
+  const out: Problem[] = [];
+  deadTimes(doc, out);
+  return out;
+}
+
 /** Problems between fields of spec and topology (and the parts they require). */
 export function specificationRules(doc: unknown): Problem[] {
   const out: Problem[] = [];

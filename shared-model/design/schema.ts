@@ -1,32 +1,33 @@
 /**
  * The WattLedger design document, version 1: one JSON document per converter design.
  * The zod schema here is the single source of truth; the JSON Schema in assets/ is generated from it
- * (`npm run schema`). Units follow design/parts.ts: SI suffixes on keys, temperatures in °C.
+ * (`npm run schema`). Units follow design/parts.ts: SI suffixes on keys, temperatures in °C. Every number
+ * has a named sanity range with its reason (design/numbers.ts), shown in the JSON Schema.
  */
 import { z } from 'zod';
 import { capacitorSchema, controllerSchema, diodeSchema, inductorSchema, mosfetSchema, resistorSchema } from './parts.ts';
-import { LIMITS as L, fractionUpToOne, nonNegative, openFraction, positive, temperatureC } from './numbers.ts';
+import { quantity as q } from './numbers.ts';
 
 export const DESIGN_FORMAT = 'wattledger.design';
 export const DESIGN_VERSION = 1;
 
 export const specificationSchema = z.object({
-  vinMinV: positive(L.voltageV),
-  vinNomV: positive(L.voltageV),
-  vinMaxV: positive(L.voltageV),
-  voutV: positive(L.voltageV),
-  ratedLoadA: positive(L.loadA),
-  switchingFrequencyHz: z.number().gte(L.frequencyMinHz).lte(L.frequencyMaxHz),
-  ambientC: temperatureC(L.ambientMinC, L.ambientMaxC),
-  /** Largest duty cycle the controller can command (0 < maxDuty < 1). */
-  maxDuty: openFraction(),
+  vinMinV: q('railV'),
+  vinNomV: q('railV'),
+  vinMaxV: q('railV'),
+  voutV: q('railV'),
+  ratedLoadA: q('loadA'),
+  switchingFrequencyHz: q('switchingHz'),
+  ambientC: q('ambientC'),
+  /** Largest duty cycle the controller can command (0.05 ≤ maxDuty < 1). */
+  maxDuty: q('maxDuty'),
   /** Optional targets the results are checked against. */
   targets: z
     .object({
-      efficiencyAtRated: openFraction().optional(),
-      outputRippleV: positive(L.voltageV).optional(),
+      efficiencyAtRated: q('efficiency').optional(),
+      outputRippleV: q('rippleTargetV').optional(),
       /** Inductor ripple as a fraction of the rated inductor current (peak to peak). */
-      inductorRippleRatio: positive(4).optional(),
+      inductorRippleRatio: q('rippleRatio').optional(),
     })
     .optional(),
 });
@@ -37,14 +38,14 @@ export const topologySchema = z.object({
   /** Synchronous designs only: forced PWM keeps CCM with negative current; diode emulation enters DCM. */
   lightLoad: z.enum(['forced-pwm', 'diode-emulation']),
   /** Dead time after the rectifier FET turns off, before the control switch turns on. */
-  deadTimeBeforeOnS: nonNegative(L.deadTimeS),
+  deadTimeBeforeOnS: q('deadTimeS'),
   /** Dead time after the control switch turns off, before the rectifier FET turns on. */
-  deadTimeAfterOffS: nonNegative(L.deadTimeS),
+  deadTimeAfterOffS: q('deadTimeS'),
   /** Where the current-sense resistor sits, if present. */
   senseLocation: z.enum(['none', 'input', 'switch', 'inductor', 'output']),
 });
 
-const capacitorSlot = z.object({ part: capacitorSchema, count: z.number().int().min(1).max(100) });
+const capacitorSlot = z.object({ part: capacitorSchema, count: q('bankCount') });
 
 export const partsSchema = z.object({
   /** The control switch: high side in a buck, low side in a boost. */
@@ -75,24 +76,24 @@ export const thermalPathSchema = z.discriminatedUnion('kind', [
   /** Junction (or hot spot) to ambient through the board: Tj = Ta + P · thetaJa. */
   z.object({
     kind: z.literal('direct'),
-    thetaJaKPerW: positive(L.thetaKPerW),
+    thetaJaKPerW: q('thetaJaKPerW'),
     /** Optional junction-to-top characterisation parameter (JESD51): case top = Tj − psiJt · P. */
-    psiJtKPerW: nonNegative(L.thetaKPerW).optional(),
+    psiJtKPerW: q('thetaPartKPerW').optional(),
   }),
   /** Hot-spot rise stated by the maker at a dissipation: theta = riseK / atW. */
-  z.object({ kind: z.literal('rise'), riseK: positive(1000), atW: positive(L.powerW) }),
+  z.object({ kind: z.literal('rise'), riseK: q('riseK'), atW: q('powerW') }),
   /** Through the part's thetaJc and an interface thetaCs to a heatsink shared by its parts. */
   z.object({
     kind: z.literal('heatsink'),
     heatsinkId: z.string().min(1).max(80),
-    thetaCsKPerW: nonNegative(L.thetaKPerW),
+    thetaCsKPerW: q('thetaInterfaceKPerW'),
   }),
 ]);
 
 export const heatsinkSchema = z.object({
   id: z.string().min(1).max(80),
   name: z.string().min(1).max(120),
-  thetaSaKPerW: positive(L.thetaKPerW),
+  thetaSaKPerW: q('thetaSinkKPerW'),
   surface: surfaceMaterialSchema,
 });
 
@@ -110,7 +111,7 @@ export const touchLimitRowSchema = z.object({
   clause: z.string(),
   material: surfaceMaterialSchema,
   contact: contactSchema,
-  limitC: z.number().gt(L.touchLimitMinC).lte(L.touchLimitMaxC),
+  limitC: q('touchLimitC'),
   /** True where the value was recalled rather than confirmed against the printed standard. */
   recalled: z.boolean(),
   note: z.string(),
@@ -136,15 +137,15 @@ export const thermalSchema = z.object({
 
 export const marginsSchema = z.object({
   /** Every part must stay this many kelvin below its temperature limit. */
-  temperatureMarginK: nonNegative(200),
+  temperatureMarginK: q('marginK'),
   /** Fraction of the capacitor ripple-current rating that may be used (0..1]. */
-  rippleCurrentDerating: fractionUpToOne(),
+  rippleCurrentDerating: q('derating'),
   /** Fraction of the derated resistor power rating that may be used (0..1]. */
-  resistorPowerDerating: fractionUpToOne(),
+  resistorPowerDerating: q('derating'),
   /** Fraction of a switch or diode voltage rating that may be used (0..1]. */
-  voltageDerating: fractionUpToOne(),
+  voltageDerating: q('derating'),
   /** Required electrolytic life in hours at the design's ambient. */
-  requiredLifeHours: positive(L.hours).optional(),
+  requiredLifeHours: q('lifeHours').optional(),
 });
 
 export const designSchema = z.object({

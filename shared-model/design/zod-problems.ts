@@ -4,8 +4,8 @@
  * never drift from the checks that produced the issue.
  */
 import type { z } from 'zod';
-import { formatEngineering } from '../units/engineering.ts';
 import { unitOfKey } from './key-units.ts';
+import { numberRangeOf, rangeText } from './number-range.ts';
 import type { Problem } from './problems.ts';
 import { pathToString, problem, valueAt } from './problems.ts';
 
@@ -16,9 +16,6 @@ interface Def {
 }
 interface CheckDef {
   check: string;
-  value?: number;
-  inclusive?: boolean;
-  format?: string;
   minimum?: number;
   maximum?: number;
 }
@@ -70,17 +67,8 @@ export function schemaAt(root: Schema, path: readonly PropertyKey[], input: unkn
 const quoteAll = (values: readonly unknown[]): string => values.map((v) => JSON.stringify(v)).join(', ');
 
 function numberRange(s: Schema, key: string): string {
-  const unit = unitOfKey(key);
-  const fmt = (v: number): string => formatEngineering(v, unit, 6);
-  const checks = checksOf(s);
-  const lo = checks.find((c) => c.check === 'greater_than');
-  const hi = checks.find((c) => c.check === 'less_than');
-  const whole = checks.some((c) => c.format === 'safeint') ? 'a whole number, ' : '';
-  const name = key === '' ? 'value' : key;
-  const left = lo?.value === undefined ? '' : `${fmt(lo.value)} ${lo.inclusive ? '≤' : '<'} `;
-  const right = hi?.value === undefined ? '' : ` ${hi.inclusive ? '≤' : '<'} ${fmt(hi.value)}`;
-  if (left === '' && right === '') return `${whole}a finite number`;
-  return `${whole}${left}${name}${right}`;
+  const range = numberRangeOf(s);
+  return range ? rangeText(range, key, unitOfKey(key)) : 'a finite number';
 }
 
 /** What a schema accepts, in words. */

@@ -1,10 +1,11 @@
 /**
  * Reads a command's arguments: positionals, "--flag value" / "--flag=value" numbers (engineering
- * entry, so "--load 500m" and "--ambient 40C" work), and switches such as "--json". Every mistake comes
- * back as one sentence for the usage error (exit code 2); nothing throws.
+ * entry and the option's range, number-option.ts: "--load 500m", "--ambient 40C"), texts, and switches
+ * such as "--json". Every mistake comes back as one sentence for the usage error (exit code 2); nothing
+ * throws.
  */
-import { parseEngineering } from '../../shared-model/index.ts';
 import type { Command, ParsedArgs } from './command.ts';
+import { readNumberOption } from './number-option.ts';
 
 export type ArgsResult = { ok: true; args: ParsedArgs } | { ok: false; message: string };
 
@@ -45,11 +46,9 @@ export function parseArgs(command: Command, argv: readonly string[]): ArgsResult
       args.texts[name] = text;
       continue;
     }
-    const parsed = parseEngineering(text, flag.unit);
-    if (!parsed.ok) return { ok: false, message: `Option "--${name}": ${parsed.message}` };
-    const refused = flag.check?.(parsed.value);
-    if (refused) return { ok: false, message: `Option "--${name}" ${refused}` };
-    args.numbers[name] = parsed.value;
+    const read = readNumberOption(name, flag.unit, flag.range, text);
+    if (!read.ok) return read;
+    args.numbers[name] = read.value;
   }
   const want = command.positionals.length;
   if (args.positionals.length < want)

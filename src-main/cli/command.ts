@@ -3,8 +3,12 @@
  * exports a `Command`, and add it to the list in src-main/cli/commands/index.ts (one line).
  */
 import type { CliIo, ExitCode } from './io.ts';
+import type { OptionRange } from './number-option.ts';
 
-/** A flag taking a value: the text is read with engineering entry in `unit` ("--load 500m", "--vin 12V"). */
+/**
+ * A flag taking a number: the text is read with engineering entry in `unit` ("--load 500m", "--vin 12V")
+ * and checked against `range` by the one reader of numeric options (number-option.ts).
+ */
 export interface NumberFlag {
   name: string;
   kind: 'number';
@@ -12,8 +16,8 @@ export interface NumberFlag {
   /** Placeholder in the usage text, e.g. "A". */
   placeholder: string;
   help: string;
-  /** Returns a sentence when the value is not allowed (for example "must be greater than 0 A"). */
-  check?: (value: number) => string | null;
+  /** The allowed values (every numeric option has one; OPTION_RANGES in number-option.ts). */
+  range: OptionRange;
 }
 
 export interface SwitchFlag {

@@ -2,6 +2,7 @@
  * Usage texts: the command list, and one command's arguments and options.
  */
 import type { Command } from './command.ts';
+import { optionRangeText } from './number-option.ts';
 import { renderTable } from './table.ts';
 
 export const PROGRAM = 'wattledger';
@@ -25,7 +26,7 @@ export function programUsage(commands: readonly Command[]): string {
 export function commandUsage(command: Command): string {
   const flagRows = command.flags.map((f) => [
     f.kind === 'switch' ? `--${f.name}` : `${f.kind === 'text' && f.short ? `-${f.short}, ` : ''}--${f.name} ${f.placeholder}`,
-    f.help,
+    f.kind === 'number' ? `${f.help} Allowed: ${optionRangeText(f.name, f.unit, f.range)}.` : f.help,
   ]);
   flagRows.push(['--help', 'Show this text.']);
   const lines = [

@@ -1,6 +1,6 @@
 /**
  * `wattledger compare DESIGN.json --role ROLE --parts ID,ID[,ID…] [--json] [--load A] [--vin V]
- * [--ambient °C]`: the design with each part in one role — side-by-side ledgers at one load, total loss
+ * [--fs Hz] [--ambient °C]`: the design with each part in one role — side-by-side ledgers at one load, total loss
  * against load, and the crossover loads where the part with the lower loss changes. Part ids come from the
  * shipped invented parts library (assets/parts/library.json) or name the design's own part in that role.
  */
@@ -9,7 +9,7 @@ import type { Part, Role } from '../../../shared-model/index.ts';
 import type { Command } from '../command.ts';
 import { loadDesign } from '../design-file.ts';
 import { EXIT } from '../io.ts';
-import { CONDITION_FLAGS } from './conditions.ts';
+import { CONDITION_FLAGS, conditionOverrides, overridesFit } from './conditions.ts';
 import { compareJson, renderComparison } from './compare-view.ts';
 
 function libraryParts(): Part[] {
@@ -56,9 +56,10 @@ export const compareCommand: Command = {
       }
       parts.push(part);
     }
-    const vinV = args.numbers.vin;
-    const ambientC = args.numbers.ambient;
-    const outcome = compareParts(design, { role, parts, loadA: args.numbers.load, sweep: { conditions: { vinV, ambientC } } });
+    const overrides = conditionOverrides(args);
+    if (!overridesFit(design, overrides, io, 'wattledger compare')) return EXIT.usage;
+    const { vinV, switchingFrequencyHz, ambientC } = overrides;
+    const outcome = compareParts(design, { role, parts, loadA: overrides.loadA, sweep: { conditions: { vinV, switchingFrequencyHz, ambientC } } });
     if (!outcome.ok) {
       io.err(`wattledger compare: ${outcome.problems.map((p) => `${p.message} (path: ${p.path}; allowed: ${p.allowed})`).join(' ')}`);
       return EXIT.usage;

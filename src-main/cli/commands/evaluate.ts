@@ -1,5 +1,5 @@
 /**
- * `wattledger evaluate DESIGN.json [--json] [--load A] [--vin V] [--ambient °C]`: the electro-thermal
+ * `wattledger evaluate DESIGN.json [--json] [--load A] [--vin V] [--fs Hz] [--ambient °C]`: the electro-thermal
  * loss ledger — every watt by part and mechanism, temperatures, heatsinks, burn hazards, rating checks,
  * warnings. JSON: the engine's Evaluation record unchanged at the top level (efficiency, inputPower,
  * outputPower, totalLoss, dutyCycle, conductionMode, losses, temperatures, hazards, warnings, converged,
@@ -11,7 +11,7 @@ import { CAUTIONS } from '../cautions.ts';
 import type { Command } from '../command.ts';
 import { loadDesign } from '../design-file.ts';
 import { EXIT } from '../io.ts';
-import { CONDITION_FLAGS, conditionOverrides } from './conditions.ts';
+import { CONDITION_FLAGS, conditionOverrides, overridesFit } from './conditions.ts';
 import { renderEvaluation } from './evaluate-view.ts';
 
 export const evaluateCommand: Command = {
@@ -26,7 +26,9 @@ export const evaluateCommand: Command = {
   async run(args, io) {
     const loaded = await loadDesign(args.positionals[0] ?? '', io, 'wattledger evaluate');
     if (!loaded.ok) return EXIT.invalidDesign;
-    const result = evaluate(loaded.design, conditionOverrides(args));
+    const overrides = conditionOverrides(args);
+    if (!overridesFit(loaded.design, overrides, io, 'wattledger evaluate')) return EXIT.usage;
+    const result = evaluate(loaded.design, overrides);
     if (args.switches.has('json')) {
       const record = { command: 'evaluate', design: loaded.design.name, ...result, designNotices: loaded.notices, cautions: CAUTIONS };
       io.out(JSON.stringify(record, null, 2));

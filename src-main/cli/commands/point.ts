@@ -1,5 +1,5 @@
 /**
- * `wattledger point DESIGN.json [--json] [--vin V] [--load A] [--ambient °C]`: the converter's operating
+ * `wattledger point DESIGN.json [--json] [--vin V] [--load A] [--fs Hz] [--ambient °C]`: the converter's operating
  * point with every part at the ambient temperature (no self-heating, duty from volt-second balance with
  * the resistive and diode drops). JSON: { command, design, conditions, partTemperaturesC, conduction,
  * operatingPoint, designNotices, cautions } — the engine's records unchanged (README.md, "point").
@@ -10,7 +10,7 @@ import { CAUTIONS } from '../cautions.ts';
 import type { Command } from '../command.ts';
 import { loadDesign } from '../design-file.ts';
 import { EXIT } from '../io.ts';
-import { CONDITION_FLAGS, conditionOverrides } from './conditions.ts';
+import { CONDITION_FLAGS, conditionOverrides, overridesFit } from './conditions.ts';
 import { renderPoint } from './point-view.ts';
 
 export const pointCommand: Command = {
@@ -26,7 +26,9 @@ export const pointCommand: Command = {
     const loaded = await loadDesign(args.positionals[0] ?? '', io, 'wattledger point');
     if (!loaded.ok) return EXIT.invalidDesign;
     const { design } = loaded;
-    const conditions = nominalConditions(design, conditionOverrides(args));
+    const overrides = conditionOverrides(args);
+    if (!overridesFit(design, overrides, io, 'wattledger point')) return EXIT.usage;
+    const conditions = nominalConditions(design, overrides);
     const t = conditions.ambientC;
     const partTemperaturesC: PartTemps = { switchC: t, rectifierC: t, inductorC: t, senseC: t };
     const conduction = conductionParameters(design, partTemperaturesC);

@@ -12,7 +12,6 @@ import {
   DEMO_PARTS_LIBRARY,
   DEFAULT_MONTE_CARLO_SAMPLES,
   DEFAULT_MONTE_CARLO_SEED,
-  MAX_MONTE_CARLO_SAMPLES,
   monteCarlo,
   partInRole,
   ROLES,
@@ -27,6 +26,7 @@ import type { Command } from '../command.ts';
 import { loadDesign } from '../design-file.ts';
 import type { CliIo, ExitCode } from '../io.ts';
 import { EXIT } from '../io.ts';
+import { OPTION_RANGES } from '../number-option.ts';
 
 const PROGRAM = 'wattledger report';
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
@@ -81,11 +81,11 @@ export const reportCommand: Command = {
     { name: 'tolerance', kind: 'switch', help: 'Add the tolerance appendix (worst-case corners and a Monte Carlo).' },
     {
       name: 'samples', kind: 'number', unit: '', placeholder: 'N', help: `Monte Carlo samples with --tolerance (default ${DEFAULT_MONTE_CARLO_SAMPLES}).`,
-      check: (v) => (Number.isInteger(v) && v >= 1 && v <= MAX_MONTE_CARLO_SAMPLES ? null : `must be a whole number from 1 to ${MAX_MONTE_CARLO_SAMPLES}; got ${v}.`),
+      range: OPTION_RANGES.samples,
     },
     {
       name: 'seed', kind: 'number', unit: '', placeholder: 'S', help: `Monte Carlo seed with --tolerance (default ${DEFAULT_MONTE_CARLO_SEED}).`,
-      check: (v) => (Number.isInteger(v) && v >= 0 && v <= 0xffffffff ? null : `must be a whole number from 0 to 4294967295; got ${v}.`),
+      range: OPTION_RANGES.seed,
     },
     {
       name: 'compare-role', kind: 'text', placeholder: 'ROLE', help: `Add the comparison appendix for this role: ${ROLES.join(', ')}.`,

@@ -1,17 +1,19 @@
 /**
  * `wattledger sweep DESIGN.json [--csv | --json] [--from A --to A --points N] [--spacing linear|log]
- * [--vin V] [--ambient °C] [--knee-points X]`: efficiency, losses and temperatures against load (every
- * point electro-thermal) with the landmarks found by the engine — peak, knee (with our definition),
- * CCM/DCM boundary, thermal ceiling, regulation limit — and the average-efficiency figures of merit.
+ * [--vin V] [--fs Hz] [--ambient °C] [--knee-points X]`: efficiency, losses and temperatures against
+ * load (every point electro-thermal) with the landmarks found by the engine — peak, knee (with our
+ * definition), CCM/DCM boundary, thermal ceiling, regulation limit — and the average-efficiency figures
+ * of merit.
  * In CSV mode the cautions go to stderr so the table stays clean.
  */
-import { checkLoadSweepOptions, figuresOfMerit, formatEngineering, sweepWithLandmarks } from '../../../shared-model/index.ts';
+import { checkLoadSweepOptions, figuresOfMerit, sweepWithLandmarks } from '../../../shared-model/index.ts';
 import type { LoadSweepOptions, SweepSpacing } from '../../../shared-model/index.ts';
 import { CAUTION_LINE } from '../cautions.ts';
 import type { Command } from '../command.ts';
 import { loadDesign } from '../design-file.ts';
 import { EXIT } from '../io.ts';
-import { CONDITION_FLAGS } from './conditions.ts';
+import { OPTION_RANGES } from '../number-option.ts';
+import { CONDITION_FLAGS, conditionOverrides, overridesFit } from './conditions.ts';
 import { renderSweep, sweepCsv, sweepJson } from './sweep-view.ts';
 
 /** Option paths of the engine's checks and the flags that set them. */
@@ -21,30 +23,25 @@ const FLAG_OF_PATH: Record<string, string> = {
   'load.points': '--points',
   'load.spacing': '--spacing',
   'conditions.vinV': '--vin',
+  'conditions.switchingFrequencyHz': '--fs',
   'conditions.ambientC': '--ambient',
 };
-
-const positive = (unit: string) => (v: number) => (v > 0 ? null : `must be greater than 0 ${unit}; got ${formatEngineering(v, unit)}.`);
 
 export const sweepCommand: Command = {
   name: 'sweep',
   summary: 'Efficiency, losses and temperatures against load, with peak, knee and thermal ceiling.',
   positionals: ['DESIGN.json'],
   flags: [
-    { name: 'from', kind: 'number', unit: 'A', placeholder: 'A', help: 'Lightest load (default 1 % of rated).', check: positive('A') },
-    { name: 'to', kind: 'number', unit: 'A', placeholder: 'A', help: 'Heaviest load (default 120 % of rated).', check: positive('A') },
-    {
-      name: 'points', kind: 'number', unit: '', placeholder: 'N', help: 'Number of points (default 200).',
-      check: (v) => (Number.isInteger(v) && v >= 2 && v <= 10000 ? null : `must be a whole number from 2 to 10000; got ${v}.`),
-    },
+    { name: 'from', kind: 'number', unit: 'A', placeholder: 'A', help: 'Lightest load (default 1 % of rated).', range: OPTION_RANGES.positiveLoad },
+    { name: 'to', kind: 'number', unit: 'A', placeholder: 'A', help: 'Heaviest load (default 120 % of rated).', range: OPTION_RANGES.positiveLoad },
+    { name: 'points', kind: 'number', unit: '', placeholder: 'N', help: 'Number of points (default 200).', range: OPTION_RANGES.sweepPoints },
     {
       name: 'spacing', kind: 'text', placeholder: 'linear|log', help: 'Point spacing (default log).',
       check: (v) => (v === 'linear' || v === 'log' ? null : `must be "linear" or "log"; got "${v}".`),
     },
     {
       name: 'knee-points', kind: 'number', unit: '', placeholder: 'X',
-      help: 'Knee threshold in percentage points below the peak (default 2).',
-      check: (v) => (v > 0 && v < 100 ? null : `must lie between 0 and 100 percentage points; got ${v}.`),
+      help: 'Knee threshold in percentage points below the peak (default 2).', range: OPTION_RANGES.kneePoints,
     },
     ...CONDITION_FLAGS.filter((f) => f.name !== 'load'),
     { name: 'csv', kind: 'switch', help: 'Print every point as CSV (units in the column names).' },
@@ -62,12 +59,14 @@ export const sweepCommand: Command = {
     const loaded = await loadDesign(args.positionals[0] ?? '', io, 'wattledger sweep');
     if (!loaded.ok) return EXIT.invalidDesign;
     const design = loaded.design;
+    const { vinV, switchingFrequencyHz, ambientC } = conditionOverrides(args);
+    if (!overridesFit(design, { vinV, switchingFrequencyHz, ambientC }, io, 'wattledger sweep')) return EXIT.usage;
     const options: LoadSweepOptions = {
       fromA: args.numbers.from,
       toA: args.numbers.to,
       points: args.numbers.points,
       spacing: args.texts.spacing as SweepSpacing | undefined,
-      conditions: { vinV: args.numbers.vin, ambientC: args.numbers.ambient },
+      conditions: { vinV, switchingFrequencyHz, ambientC },
     };
     const problems = checkLoadSweepOptions(design, options);
     if (problems.length > 0) {

@@ -7,14 +7,13 @@
 import {
   DEFAULT_MONTE_CARLO_SAMPLES,
   DEFAULT_MONTE_CARLO_SEED,
-  formatEngineering,
-  MAX_MONTE_CARLO_SAMPLES,
   monteCarlo,
   worstCase,
 } from '../../../shared-model/index.ts';
 import type { Command } from '../command.ts';
 import { loadDesign } from '../design-file.ts';
 import { EXIT } from '../io.ts';
+import { OPTION_RANGES } from '../number-option.ts';
 import { renderTolerance, toleranceJson } from './tolerance-view.ts';
 
 export const toleranceCommand: Command = {
@@ -24,16 +23,13 @@ export const toleranceCommand: Command = {
   flags: [
     {
       name: 'samples', kind: 'number', unit: '', placeholder: 'N', help: `Monte Carlo samples (default ${DEFAULT_MONTE_CARLO_SAMPLES}).`,
-      check: (v) => (Number.isInteger(v) && v >= 1 && v <= MAX_MONTE_CARLO_SAMPLES ? null : `must be a whole number from 1 to ${MAX_MONTE_CARLO_SAMPLES}; got ${v}.`),
+      range: OPTION_RANGES.samples,
     },
     {
-      name: 'seed', kind: 'number', unit: '', placeholder: 'S', help: `Monte Carlo seed, a whole number 0 … 4294967295 (default ${DEFAULT_MONTE_CARLO_SEED}).`,
-      check: (v) => (Number.isInteger(v) && v >= 0 && v <= 0xffffffff ? null : `must be a whole number from 0 to 4294967295; got ${v}.`),
+      name: 'seed', kind: 'number', unit: '', placeholder: 'S', help: `Monte Carlo seed (default ${DEFAULT_MONTE_CARLO_SEED}).`,
+      range: OPTION_RANGES.seed,
     },
-    {
-      name: 'load', kind: 'number', unit: 'A', placeholder: 'A', help: 'Load current (default: the rated load).',
-      check: (v) => (v > 0 ? null : `must be greater than 0 A; got ${formatEngineering(v, 'A')}.`),
-    },
+    { name: 'load', kind: 'number', unit: 'A', placeholder: 'A', help: 'Load current (default: the rated load).', range: OPTION_RANGES.positiveLoad },
     { name: 'normal', kind: 'switch', help: 'Normal spreads (tolerance = 3σ) instead of uniform ones.' },
     { name: 'vary-conditions', kind: 'switch', help: 'Also vary Vin and ambient in the Monte Carlo (default: held at nominal).' },
     { name: 'json', kind: 'switch', help: 'Print JSON (SI units: V, A, W, Hz, °C, K) instead of tables.' },

@@ -46,15 +46,15 @@ describe('validateDesign refuses what is not a design, with one sentence', () =>
 
 describe('validateDesign checks each field against its range, naming path, value and allowed range', () => {
   it.each([
-    ['spec.vinMaxV', -5, '0 V < vinMaxV ≤ 10 kV'], // a voltage magnitude is positive (range: our sanity ceiling 10 kV)
-    ['spec.maxDuty', 1, '0 < maxDuty < 1'], // duty D = ton/Ts lies in [0, 1]; D = 1 never turns off (Erickson & Maksimović 2nd ed. ch. 2 [from memory])
-    ['spec.maxDuty', 0, '0 < maxDuty < 1'], // D = 0 never turns on
-    ['parts.inductor.inductanceH', 0, '0 H < inductanceH ≤ 1 H'], // issue 2: zero or negative L is physically impossible
-    ['parts.outputCapacitor.part.capacitanceF', -1e-6, '0 F < capacitanceF ≤ 1 F'], // issue 2: zero or negative C
-    ['spec.switchingFrequencyHz', -500e3, '1 kHz ≤ switchingFrequencyHz ≤ 100 MHz'], // issue 2: zero or negative fs
+    ['spec.vinMaxV', -5, '200 mV ≤ vinMaxV ≤ 2 kV'], // a voltage magnitude is positive (range: our own sanity rule, design/numbers.ts)
+    ['spec.maxDuty', 1, '0.05 ≤ maxDuty < 1'], // duty D = ton/Ts lies in [0, 1]; D = 1 never turns off (Erickson & Maksimović 2nd ed. ch. 2 [from memory])
+    ['spec.maxDuty', 0, '0.05 ≤ maxDuty < 1'], // D = 0 never turns on
+    ['parts.inductor.inductanceH', 0, '1 nH ≤ inductanceH ≤ 1 H'], // issue 2: zero or negative L is physically impossible
+    ['parts.outputCapacitor.part.capacitanceF', -1e-6, '100 pF ≤ capacitanceF ≤ 1 F'], // issue 2: zero or negative C
+    ['spec.switchingFrequencyHz', -500e3, '1 kHz ≤ switchingFrequencyHz ≤ 20 MHz'], // issue 2: zero or negative fs
     ['spec.ambientC', -300, '-100 °C ≤ ambientC ≤ 200 °C'], // below absolute zero −273.15 °C (SI Brochure 9th ed. §2.3.1) and outside our ambient range
-    ['parts.switch.tjMaxC', -273.15, '-273.15 °C < tjMaxC ≤ 1000 °C'], // absolute zero itself is unreachable (third law of thermodynamics)
-    ['margins.voltageDerating', 1.2, '0 < voltageDerating ≤ 1'], // a derating uses at most the whole rating
+    ['parts.switch.tjMaxC', -273.15, '40 °C ≤ tjMaxC ≤ 300 °C'], // absolute zero itself is unreachable (third law of thermodynamics), and no power part is limited below 40 °C (common practice)
+    ['margins.voltageDerating', 1.2, '0.1 ≤ voltageDerating ≤ 1'], // a derating uses at most the whole rating
     ['parts.inputCapacitor.count', 2.5, 'a whole number, 1 ≤ count ≤ 100'], // a count of parts is a whole number
   ])('refuses %s = %j, allowed %s', (path, value, allowed) => {
     const p = problemAt(demoWith('synchronous-buck', { [path]: value }), path);
@@ -71,9 +71,9 @@ describe('validateDesign checks each field against its range, naming path, value
 
   it('refuses wrong types and missing fields with what was found', () => {
     const doc = demoWith('synchronous-buck', { 'spec.voutV': '3.3', 'topology.kind': 'flyback', 'parts.switch.qgC': undefined });
-    expect(problemAt(doc, 'spec.voutV').message).toBe('spec.voutV is the text "3.3"; allowed: 0 V < voutV ≤ 10 kV.');
+    expect(problemAt(doc, 'spec.voutV').message).toBe('spec.voutV is the text "3.3"; allowed: 200 mV ≤ voutV ≤ 2 kV.');
     expect(problemAt(doc, 'topology.kind').allowed).toBe('one of "buck", "boost"');
-    expect(problemAt(doc, 'parts.switch.qgC').message).toBe('parts.switch.qgC is missing; allowed: 0 C < qgC ≤ 10 µC.');
+    expect(problemAt(doc, 'parts.switch.qgC').message).toBe('parts.switch.qgC is missing; allowed: 10 pC ≤ qgC ≤ 10 µC.');
   });
 
   it('refuses unknown touch roles and names the allowed ones', () => {
@@ -141,8 +141,8 @@ describe('validateDesign applies the cross-field physics rules', () => {
 
   it('refuses an inductance roll-off above the zero-current inductance and an impossible core path length', () => {
     expect(problemAt(demoWith('synchronous-buck', { 'parts.inductor.rolloff.inductanceH': 5e-6 }), 'parts.inductor.rolloff.inductanceH').allowed).toContain('4.7 µH');
-    // le = Ve/Ae (IEC 60205 effective core parameters [from memory]); 5e-7 m³ / 20e-6 m² = 25 mm in the demo, 1e-12 m³ gives 50 nm
-    expect(problemAt(demoWith('synchronous-buck', { 'parts.inductor.veM3': 1e-12 }), 'parts.inductor.veM3').allowed).toBe('1 mm ≤ veM3 / aeM2 ≤ 1 m');
+    // le = Ve/Ae (IEC 60205 effective core parameters [from memory]); 5e-7 m³ / 20e-6 m² = 25 mm in the demo, 1e-8 m³ gives 0.5 mm
+    expect(problemAt(demoWith('synchronous-buck', { 'parts.inductor.veM3': 1e-8 }), 'parts.inductor.veM3').allowed).toBe('1 mm ≤ veM3 / aeM2 ≤ 1 m');
   });
 
   it('refuses part limits at or below the ambient temperature', () => {

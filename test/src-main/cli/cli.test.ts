@@ -98,9 +98,9 @@ describe('wattledger refuses bad designs with every problem (exit 1)', () => {
     expect(run.code).toBe(1);
     expect(run.stdout).toBe('');
     expect(run.stderr).toContain('(3 problems)');
-    expect(run.stderr).toContain('path: spec.vinMaxV | value: -5 V | allowed: 0 V < vinMaxV ≤ 10 kV');
-    expect(run.stderr).toContain('path: spec.maxDuty | value: 1 | allowed: 0 < maxDuty < 1');
-    expect(run.stderr).toContain('path: parts.inductor.inductanceH | value: the text "big" | allowed: 0 H < inductanceH ≤ 1 H');
+    expect(run.stderr).toContain('path: spec.vinMaxV | value: -5 V | allowed: 200 mV ≤ vinMaxV ≤ 2 kV');
+    expect(run.stderr).toContain('path: spec.maxDuty | value: 1 | allowed: 0.05 ≤ maxDuty < 1');
+    expect(run.stderr).toContain('path: parts.inductor.inductanceH | value: the text "big" | allowed: 1 nH ≤ inductanceH ≤ 1 H');
   });
 
   it('names a missing file and a file that is not JSON (with line and column)', async () => {

@@ -34,7 +34,7 @@ describe('wattledger tolerance', () => {
   it('exits 2 for a bad seed or sample count', async () => {
     const io = memoryIo({ 'd.json': demoText('synchronous-buck') });
     expect(await runCli(['tolerance', 'd.json', '--seed', '-1'], io)).toBe(EXIT.usage); // exit codes as the other commands
-    expect(io.stderr).toMatch(/--seed.*0 to 4294967295/); // team brief rule 6: name the option and the range
+    expect(io.stderr).toContain('"--seed" is -1; allowed: a whole number, 0 ≤ --seed ≤ 4294967295.'); // team brief rule 6: name the option and the range
     expect(await runCli(['tolerance', 'd.json', '--samples', '1.5'], io)).toBe(EXIT.usage); // samples must be a whole number: usage error
   });
 });
