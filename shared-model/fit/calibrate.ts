@@ -21,7 +21,7 @@ import { parameterStatistics } from './intervals.ts';
 import { leastSquares } from './least-squares.ts';
 import { LOSS_GROUPS, lossByGroup } from './ledger-groups.ts';
 import { modelPoints, pointConditions, type ModelPoint } from './point-model.ts';
-import { applyParameters, defaultFitParameters, fitParameters, type FitParameter, type FitParameterName } from './parameters.ts';
+import { applyParameters, defaultFitParameters, fitParameters, type FitParameter } from './parameters.ts';
 import { calibrationSummary, calibrationWarnings } from './summary.ts';
 import type { Calibration, FittedParameter, PointComparison, ResidualRms } from './types.ts';
 
