@@ -43,6 +43,23 @@ export { DESIGN_SCHEMA_FILE, designJsonSchema, PARTS_SCHEMA_FILE, partsLibraryJs
 export type { DemoDesign } from './design/demos.ts';
 export { DEMO_DESIGNS, DEMO_PARTS_LIBRARY } from './design/demos.ts';
 
+// --- part import and export (spreadsheets) ---
+export type { FieldType, PartField } from './part-import/fields.ts';
+export { fieldsOfKind, PART_FIELDS, partField } from './part-import/fields.ts';
+export { FIELD_WORDS, KIND_WORDS } from './part-import/field-labels.ts';
+export type { HeaderParts } from './part-import/header-unit.ts';
+export { headerReadings, normaliseHeader } from './part-import/header-unit.ts';
+export type { CellRead } from './part-import/cells.ts';
+export { allowedText, readCell, unitExponent } from './part-import/cells.ts';
+export type { ColumnMapping, MappingProblem, PartMapping } from './part-import/mapping.ts';
+export { checkMapping, mappingDocument, PART_MAPPING_FORMAT, PART_MAPPING_VERSION, partMappingSchema } from './part-import/mapping.ts';
+export { guessColumn, guessMapping, reuseMapping } from './part-import/guess.ts';
+export type { ImportPreview, PreviewRow, RowProblem } from './part-import/preview.ts';
+export { idFromName, previewImport } from './part-import/preview.ts';
+export type { ImportApplied } from './part-import/apply.ts';
+export { applyImport, freeId } from './part-import/apply.ts';
+export { partsToCsv, shiftedText } from './part-import/export.ts';
+
 // --- operating point ---
 export type * from './operating-point/types.ts';
 export { solveOperatingPoint } from './operating-point/solve.ts';

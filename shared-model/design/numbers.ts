@@ -45,6 +45,7 @@ export const RANGES = {
   // --- voltages ---
   railV: { min: 0.2, max: 2000, why: `Input or output rail, 200 mV … 2 kV (${OURS}): from a sub-volt processor core rail or single-cell input to a 1.5 kV photovoltaic string with margin.` },
   ratingV: { min: 1, max: 10_000, why: `Voltage rating or stated-at voltage, 1 V … 10 kV (${OURS}): the lowest-voltage capacitors and MOSFETs are rated a few volts; no discrete part reaches 10 kV.` },
+  curveV: { min: 0, max: 10_000, why: `Voltage of a point on a datasheet curve, 0 V … 10 kV (${OURS}): curves start at 0 V; no discrete part reaches 10 kV.` },
   gateV: { min: 0.1, max: 30, why: `Gate threshold or plateau, 0.1 V … 30 V (${TRADE}: thresholds of GaN, silicon and SiC parts lie between about 0.5 V and 6 V, gate ratings below 30 V).` },
   driveV: { min: 1, max: 30, why: `Gate-drive voltage, 1 V … 30 V (${TRADE}: logic-level drives from 2.5 V, SiC drives up to 20 V; 30 V leaves margin).` },
   forwardV: { min: 0.05, max: 5, why: `Forward drop, 50 mV … 5 V (${TRADE}: Schottky knees from about 0.15 V, SiC body diodes and GaN reverse conduction up to about 4 V).` },
