@@ -46,6 +46,8 @@ export { DEMO_DESIGNS, DEMO_PARTS_LIBRARY } from './design/demos.ts';
 // --- operating point ---
 export type * from './operating-point/types.ts';
 export { solveOperatingPoint } from './operating-point/solve.ts';
+export { TOPOLOGIES, topologyOf } from './topology/registry.ts';
+export type { ConductionInterval, ConverterTopology, VoltageCoefficients } from './topology/types.ts';
 export { conductionParameters, nominalConditions, uniformTemps } from './operating-point/conditions.ts';
 export { isSynchronous } from './operating-point/circuit.ts';
 export { waveformStats, periodOf } from './waveform/stats.ts';
