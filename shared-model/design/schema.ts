@@ -21,7 +21,11 @@ export const specificationSchema = z.object({
   ambientC: q('ambientC'),
   /** Largest duty cycle the controller can command (0.05 ≤ maxDuty < 1). */
   maxDuty: q('maxDuty'),
-  /** Optional targets the results are checked against. */
+  /**
+   * Optional targets. Only `efficiencyAtRated` is read today: the report's summary says whether the rated
+   * point meets it and the Monte Carlo counts the samples that do. The two ripple targets are stored but
+   * not yet checked against any result (the sizing checks, issue 11, will).
+   */
   targets: z
     .object({
       efficiencyAtRated: q('efficiency').optional(),
