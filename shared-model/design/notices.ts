@@ -46,6 +46,29 @@ export function ignoredKeys(input: unknown, parsed: unknown, path: (string | num
   return out;
 }
 
+/**
+ * A Coss(VDS) table that ends below the highest voltage its FET switches (Vin,max for a buck, Vout for a
+ * boost, plus a diode's drop ignored): above the last point the capacitance is held at its last value
+ * (curves/coss-table.ts), an extrapolation the engineer should know about.
+ */
+export function cossTableNotices(design: Design): DesignNotice[] {
+  const swingV = design.topology.kind === 'buck' ? design.spec.vinMaxV : design.spec.voutV;
+  const out: DesignNotice[] = [];
+  for (const role of ['switch', 'rectifier'] as const) {
+    const part = design.parts[role];
+    if (part.kind !== 'mosfet' || part.outputCapacitance.kind !== 'table') continue;
+    const points = part.outputCapacitance.points;
+    const lastV = points[points.length - 1]!.vdsV;
+    if (lastV >= swingV) continue;
+    out.push({
+      path: `parts.${role}.outputCapacitance.points`,
+      value: lastV,
+      message: `The Coss(VDS) table of parts.${role} ends at ${formatEngineering(lastV, 'V', 4)} but the switch node swings to ${formatEngineering(swingV, 'V', 4)}: above the last point Coss is held at its last value (an extrapolation); add points up to ${formatEngineering(swingV, 'V', 4)} from the datasheet curve.`,
+    });
+  }
+  return out;
+}
+
 /** Advice on a valid design. */
 export function designNotices(design: Design): DesignNotice[] {
   const out: DesignNotice[] = [];
@@ -78,6 +101,7 @@ export function designNotices(design: Design): DesignNotice[] {
   }
   const reach = dutyReachNotice(design);
   if (reach) out.push(reach);
+  out.push(...cossTableNotices(design));
   if (topology.rectifier === 'diode' && (topology.deadTimeBeforeOnS > 0 || topology.deadTimeAfterOffS > 0))
     out.push({ path: 'topology.deadTimeBeforeOnS', value: topology.deadTimeBeforeOnS, message: 'Dead times apply to synchronous rectifiers only; with a diode they are ignored.' });
   return out;
