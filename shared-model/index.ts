@@ -63,6 +63,8 @@ export { partsToCsv, shiftedText } from './part-import/export.ts';
 // --- operating point ---
 export type * from './operating-point/types.ts';
 export { solveOperatingPoint } from './operating-point/solve.ts';
+export { TOPOLOGIES, topologyOf } from './topology/registry.ts';
+export type { ConductionInterval, ConverterTopology, VoltageCoefficients } from './topology/types.ts';
 export { conductionParameters, nominalConditions, uniformTemps } from './operating-point/conditions.ts';
 export { isSynchronous } from './operating-point/circuit.ts';
 export { waveformStats, periodOf } from './waveform/stats.ts';
@@ -247,9 +249,7 @@ export {
   formatKelvin,
   formatMarginFraction,
   formatPercent,
-  formatPlain,
   formatQuantity,
-  formatSi,
   formatVolts,
   formatWatts,
   formatWattsFixed,
