@@ -7,6 +7,7 @@
 import { z } from 'zod';
 import { capacitorSchema, controllerSchema, diodeSchema, inductorSchema, mosfetSchema, resistorSchema } from './parts.ts';
 import { quantity as q } from './numbers.ts';
+import { calibrationSchema, measurementSchema } from '../measurement/schema.ts';
 
 export const DESIGN_FORMAT = 'wattledger.design';
 export const DESIGN_VERSION = 1;
@@ -180,6 +181,10 @@ export const designSchema = z.object({
   sources: z.partialRecord(z.enum(ROLES), partSourceSchema).optional(),
   thermal: thermalSchema,
   margins: marginsSchema,
+  /** A bench measurement saved with the design (optional; shared-model/measurement). */
+  measurements: measurementSchema.optional(),
+  /** Set when fitted values were adopted: the measurement's hash and the values (shared-model/fit). */
+  calibration: calibrationSchema.optional(),
 });
 
 export type Specification = z.infer<typeof specificationSchema>;
