@@ -26,7 +26,7 @@ import { ledgerContext, type LedgerContext } from './kernel.ts';
 import type { JointLoop } from './joint-loop.ts';
 import { lossTerms } from './terms.ts';
 import { heatsinkRecords, partTemperatures } from './temperatures.ts';
-import { settlePoint, solvePoint, type SettleTarget } from './solve-point.ts';
+import { efficiencyOf, settlePoint, solvePoint, type SettleTarget } from './solve-point.ts';
 import { leanEvaluateWith, type LeanEvaluation } from './lean-evaluate.ts';
 import type { Evaluation, Hazard, RatingCheck } from './types.ts';
 
@@ -80,7 +80,7 @@ function evaluateWith(ctx: LedgerContext, conditions?: Partial<Conditions>, opti
     conditions: cond,
     converged: sol.converged,
     iterations: sol.iterations,
-    efficiency: inputPower > 0 ? outputPower / inputPower : 0,
+    efficiency: efficiencyOf(outputPower, inputPower, totalLoss),
     inputPower,
     outputPower,
     totalLoss,
