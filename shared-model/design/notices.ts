@@ -15,11 +15,12 @@ import type { DesignNotice } from './problems.ts';
 import { compactValue, pathToString } from './problems.ts';
 import { isObject } from './read.ts';
 import { formatEngineering } from '../units/engineering.ts';
+import { topologyOf } from '../topology/registry.ts';
 
 /** A notice when spec.maxDuty cannot reach the output at any input of the specified range (see the header). */
 export function dutyReachNotice(design: Design): DesignNotice | undefined {
   const { spec, topology } = design;
-  const needed = topology.kind === 'buck' ? spec.voutV / spec.vinMaxV : 1 - spec.vinMaxV / spec.voutV;
+  const needed = topologyOf(design).idealDuty(spec.vinMaxV, spec.voutV);
   if (!(needed > 0 && needed < 1) || spec.maxDuty > needed) return undefined;
   const d = (x: number): string => formatEngineering(x, '', 6);
   return {

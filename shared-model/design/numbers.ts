@@ -112,6 +112,13 @@ export const RANGES = {
   rippleRatio: { min: 0.01, max: 4, why: `Inductor ripple target as a fraction of the rated inductor current, 0.01 … 4 (${TRADE}: 0.2–0.4 in CCM, 2 at the DCM boundary).` },
   derating: { min: 0.1, max: 1, why: `Fraction of a rating that may be used, 0.1 … 1 (${TRADE}: 0.5–0.9).` },
   bankCount: { min: 1, max: 100, integer: true, why: `Capacitors in parallel, 1 … 100 (${OURS}).` },
+  // --- bench measurements and calibration (shared-model/measurement, shared-model/fit) ---
+  measuredLoadA: { min: 0, minExclusive: true, max: 1000, why: `Measured load current, above 0 up to 1 kA (${OURS}: the rated-load range; a point at no load has no efficiency).` },
+  measuredPowerW: { min: 0, minExclusive: true, max: 100_000, why: `Measured input power, above 0 up to 100 kW (${OURS}: a few hundred A at a few hundred V with margin).` },
+  measuredCurrentA: { min: 0, minExclusive: true, max: 2000, why: `Measured input current, above 0 up to 2 kA (${OURS}).` },
+  measuredC: { min: -100, max: 300, why: `Measured temperature, −100 °C … 300 °C (${OURS}: the range of thermocouples and cameras used on a bench).` },
+  measuredPercent: { min: 0, minExclusive: true, max: 100, maxExclusive: true, why: 'Efficiency in percent, strictly between 0 % and 100 %.' },
+  fittedValue: { min: -1e12, max: 1e12, why: `A fitted parameter or its interval bound, in the parameter's own unit (${OURS}: multipliers of order one, currents in A).` },
   lifeHours: { min: 1, max: 1e7, why: `Life in hours, 1 h … 10 million h (${OURS}).` },
 } as const satisfies Record<string, QuantityRange>;
 

@@ -1,5 +1,5 @@
 /** Field descriptions of the design-level sections (specification, topology, margins). */
-import { CONTACT_LABELS, contactSchema } from '../../shared-model/index.ts';
+import { CONTACT_LABELS, contactSchema, TOPOLOGIES } from '../../shared-model/index.ts';
 import { num, type ChoiceSpec, type FieldSpec } from './field-spec.ts';
 
 export const SPEC_FIELDS: FieldSpec[] = [
@@ -23,10 +23,8 @@ export const KIND_CHOICE: ChoiceSpec = {
   type: 'choice',
   key: 'kind',
   label: 'Converter',
-  options: [
-    { value: 'buck', label: 'Buck (step-down)' },
-    { value: 'boost', label: 'Boost (step-up)' },
-  ],
+  // One option per topology record, named by the record (shared-model/topology/).
+  options: Object.values(TOPOLOGIES).map((t) => ({ value: t.kind, label: `${t.title[0]!.toUpperCase()}${t.title.slice(1)}` })),
 };
 
 export const RECTIFIER_CHOICE: ChoiceSpec = {
