@@ -6,13 +6,17 @@
  *   inductor: valley → peak → valley (DCM: 0 → Ipk → 0 → 0)
  *   switch = inductor during the on interval; rectifier = inductor during the off interval
  *   input capacitor: buck, switch current − source DC; boost, inductor current − its mean
- *   output capacitor: buck, inductor current − Io; boost, rectifier current − Io
- *   sense resistor: source DC (input), switch, inductor, or Io (output).
+ *   output capacitor: k·(node current − Io), the node current being the inductor's (buck) or the
+ *     rectifier's (boost), k the bank's share of the ripple (load.ts; 1 for a constant-current load)
+ *   sense resistor: source DC (input), switch, inductor, or the load current Io + (1 − k)·(node − Io) (output).
  * Edges: turn-on at the valley (0 in DCM, not hard; soft too when the valley is negative, since the
  * reverse current discharges the switch node first), turn-off at the peak. Blocking voltages: buck
  * Vin + rectifier drop; boost Vo + rectifier drop (in DCM at zero current: the swing when the idle interval
  * starts; the ringing toward the resting value is not modelled, a conservative choice).
- * Boost small signal (CCM): ωz = D'²R/L, current-mode output pole ωp = 2/(R·C) (docs/methods.md §13).
+ * Boost small signal (CCM): ωz = D'²R/L, current-mode output pole ωp = (1/R + g)/C with g the load's
+ * incremental conductance (load.ts): 2/(R·C) for a resistor (docs/methods.md §13), 1/(R·C) for a current
+ * sink, 0 for a constant-power load (the power stage's constant-power output meets the load's −1/R;
+ * Erickson & Maksimović 2nd ed. ch. 12, the current-programmed boost's simple model [memory]).
  * Source: Erickson & Maksimović 2nd ed. ch. 2, 5 and 8 [memory for chapters]; docs/methods.md §1, §2, §13.
  */
 import type { Circuit } from './circuit.ts';
@@ -82,9 +86,12 @@ export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions
   const inputCapacitor = c.boost
     ? wave(tOn, tOff, tIdle, lo - iin, hi - iin, hi - iin, lo - iin, -iin)
     : wave(tOn, tOff, tIdle, lo - iin, hi - iin, -iin, -iin, -iin);
-  const outputCapacitor = c.boost
-    ? wave(tOn, tOff, tIdle, -io, -io, hi - io, lo - io, -io)
-    : wave(tOn, tOff, tIdle, lo - io, hi - io, hi - io, lo - io, -io);
+  // Output node: the current fed in (buck inductor, boost rectifier) less Io, of which the bank carries
+  // the share k and the load the rest (load.ts; k = 1 for a current sink).
+  const k = c.capacitorShare;
+  const nOn0 = c.boost ? 0 : lo;
+  const nOn1 = c.boost ? 0 : hi;
+  const outputCapacitor = wave(tOn, tOff, tIdle, k * (nOn0 - io), k * (nOn1 - io), k * (hi - io), k * (lo - io), k * -io);
   let sense: Waveform;
   switch (c.senseAt) {
     case 'switch':
@@ -97,7 +104,10 @@ export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions
       sense = { segments: [{ durationS: T, i0A: iin, i1A: iin }] };
       break;
     case 'output':
-      sense = { segments: [{ durationS: T, i0A: io, i1A: io }] };
+      // The load current: Io plus the load's share (1 − k) of the node ripple (load.ts).
+      sense = k === 1
+        ? { segments: [{ durationS: T, i0A: io, i1A: io }] }
+        : wave(tOn, tOff, tIdle, io + (1 - k) * (nOn0 - io), io + (1 - k) * (nOn1 - io), io + (1 - k) * (hi - io), io + (1 - k) * (lo - io), io + (1 - k) * -io);
       break;
     default:
       sense = { segments: [{ durationS: T, i0A: 0, i1A: 0 }] };
@@ -153,7 +163,10 @@ export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions
     const dp = 1 - s.d;
     op.smallSignal = {
       rhpZeroHz: (dp * dp * r) / s.inductanceH / (2 * Math.PI),
-      outputPoleHz: 2 / (r * c.outputCapacitanceF) / (2 * Math.PI),
+      // The current-programmed power stage feeds about constant power (output conductance 1/R) beside the
+      // load's own incremental conductance g (load.ts): ωp = (1/R + g)/C — 2/(RC) for a resistor.
+      // (A constant-power load behind an output sense resistor would put it a hair past the origin: shown as 0.)
+      outputPoleHz: Math.max(1 / r + c.loadConductanceS, 0) / c.outputCapacitanceF / (2 * Math.PI),
     };
   }
   return op;
