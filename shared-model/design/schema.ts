@@ -70,6 +70,18 @@ export const partsSchema = z.object({
   controller: controllerSchema,
 });
 
+/**
+ * Where a part of the design came from: a part of a parts library (design/parts-library.ts), by the
+ * library's id and the part's id. The design keeps its own copy of the values (parts), so it opens and
+ * evaluates when the library is missing or has changed; library-links/ says which copies differ.
+ * `libraryName` is the library's name when the link was made, to name it when it is not open.
+ */
+export const partSourceSchema = z.object({
+  libraryId: z.string().min(1).max(80),
+  libraryName: z.string().min(1).max(120),
+  partId: z.string().min(1).max(80),
+});
+
 export const ROLES = [
   'switch',
   'rectifier',
@@ -171,6 +183,8 @@ export const designSchema = z.object({
   spec: specificationSchema,
   topology: topologySchema,
   parts: partsSchema,
+  /** The library entry each part was taken from (roles without an entry were typed in or are the demo's). */
+  sources: z.partialRecord(z.enum(ROLES), partSourceSchema).optional(),
   thermal: thermalSchema,
   margins: marginsSchema,
   /** A bench measurement saved with the design (optional; shared-model/measurement). */
@@ -182,6 +196,7 @@ export const designSchema = z.object({
 export type Specification = z.infer<typeof specificationSchema>;
 export type Topology = z.infer<typeof topologySchema>;
 export type Parts = z.infer<typeof partsSchema>;
+export type PartSource = z.infer<typeof partSourceSchema>;
 export type ThermalPath = z.infer<typeof thermalPathSchema>;
 export type Heatsink = z.infer<typeof heatsinkSchema>;
 export type SurfaceMaterial = z.infer<typeof surfaceMaterialSchema>;
