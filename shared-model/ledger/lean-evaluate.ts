@@ -16,7 +16,7 @@ import type { LedgerContext } from './kernel.ts';
 import type { JointLoop } from './joint-loop.ts';
 import { newLeanPoint, type PointSummary } from './point-view.ts';
 import { partTemperaturesInto } from './temperatures.ts';
-import { picksOf, settlePoint, solvePoint, type SettleTarget } from './solve-point.ts';
+import { efficiencyOf, picksOf, settlePoint, solvePoint, type SettleTarget } from './solve-point.ts';
 import type { Mechanism, PartTemperature, RatingCheck } from './types.ts';
 import { isRegulated } from './regulated.ts';
 
@@ -120,7 +120,7 @@ export function leanEvaluateWith(ctx: LedgerContext, conditions?: Partial<Condit
   r.totalLoss = settle.totalLoss;
   r.inputPower = settle.inputPower;
   r.outputPower = op.outputPowerW;
-  r.efficiency = r.inputPower > 0 ? r.outputPower / r.inputPower : 0;
+  r.efficiency = efficiencyOf(r.outputPower, r.inputPower, r.totalLoss);
   r.dutyCycle = op.dutyCycle;
   r.conductionMode = op.mode;
   r.warnings = warnings;
