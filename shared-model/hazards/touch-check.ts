@@ -82,6 +82,7 @@ export function touchHazard(
     },
     marginK,
     exceeded: marginK < 0,
+    status: marginK < 0 ? 'too-hot' : 'within',
     caution: hazardCaution(row, fit, material, contact),
   };
 }

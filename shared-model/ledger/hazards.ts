@@ -4,7 +4,8 @@
  * (the material stated in thermal.touch). Table: design.thermal.customTouchLimits when not empty, else
  * the shipped table (hazards/touch-limits.ts).
  * Which row applies to which part depends on the design only (`touchPicks`, made once per context); the
- * margins and warnings follow each point's surface temperatures. A sweep keeps only the margins
+ * margins and warnings follow each point's surface temperatures. At a point in thermal runaway every
+ * touchable surface reads "runaway" (unknown, counted as too hot), never "within". A sweep keeps only the margins
  * (`out` null): same rows, same comparisons, same warnings.
  */
 import type { Contact, Design, Role, SurfaceMaterial, TouchLimitRow } from '../design/schema.ts';
@@ -57,6 +58,7 @@ export function burnHazards(
   warnings: Warning[],
   out: Hazard[] | null,
   margins?: { marginK: number }[],
+  runaway = false,
 ): void {
   for (let k = 0; k < picks.length; k++) {
     const p = picks[k]!;
@@ -64,13 +66,22 @@ export function burnHazards(
     let marginK: number;
     if (out) {
       const h = touchHazard(t.part, t.partName, t.surfaceC, p.row, p.fit, p.material, p.contact);
+      if (runaway) {
+        h.status = 'runaway';
+        h.exceeded = true;
+      }
       out.push(h);
       marginK = h.marginK;
     } else {
       marginK = touchMarginK(p.row, t.surfaceC);
       margins![k]!.marginK = marginK;
     }
-    if (marginK < 0) {
+    if (runaway) {
+      warnings.push({
+        code: 'burn-hazard', severity: 'danger', part: t.part, path: `thermal.touch.${t.part}`,
+        message: `Burn hazard unknown: the design runs away thermally at this point, so the ${t.part} surface has no steady temperature and may pass the ${p.row.limitC} °C touch limit (${p.row.standard}). ${p.caution}`,
+      });
+    } else if (marginK < 0) {
       warnings.push({
         code: 'burn-hazard', severity: 'danger', part: t.part, path: `thermal.touch.${t.part}`,
         message: `Burn hazard (estimate): the ${t.part} surface reaches about ${f1(t.surfaceC)} °C, above the ${p.row.limitC} °C touch limit (${p.row.standard}, ${p.material}, contact '${p.contact}'). ${p.caution}`,

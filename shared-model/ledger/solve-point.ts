@@ -149,7 +149,7 @@ export function settlePoint(
     });
   }
   ratingChecks(ctx.design, op, temps, warnings, into.checks, into.scratch);
-  burnHazards(picksOf(ctx), temps, warnings, into.hazards, into.hazardMargins);
+  burnHazards(picksOf(ctx), temps, warnings, into.hazards, into.hazardMargins, sol.runawayNode >= 0);
   modelNotes(ctx, warnings);
   into.totalLoss = totalLoss;
   into.inputPower = inputPower;

@@ -6,7 +6,7 @@
 import type { Design } from '../design/schema.ts';
 import type { ElectroThermalSolution } from '../thermal/fixed-point.ts';
 import type { DesignNetwork } from '../thermal/from-design.ts';
-import { surfaceTemperatureAt } from '../thermal/network.ts';
+import { surfaceTemperature } from '../thermal/network.ts';
 import type { Evaluation, PartTemperature } from './types.ts';
 
 /** Fills `t` with node i's record (every field written); returns t. */
@@ -20,10 +20,26 @@ function fillPartTemperature(design: Design, net: DesignNetwork, sol: ElectroThe
   t.celsius = celsius;
   t.limit = node.limitC;
   t.marginK = node.limitC - design.margins.temperatureMarginK - celsius;
-  t.surfaceC = Math.min(surfaceTemperatureAt(net.network, i, sol.temperaturesC, sol.powersW, sol.sinkTemperaturesC), celsius);
+  t.surfaceC = consistentSurface(net, sol, i, celsius, power);
   t.dissipationW = power;
   t.path = node.path;
   return t;
+}
+
+/**
+ * The touchable surface on the same thermal path as the part's reported temperature: between ambient and
+ * the junction (or hot spot). A heatsink path reads the heatsink; a direct path with ψJT reads
+ * Tj − ψJT·P with P the power that path carries to reach the reported Tj — (Tj − Ta)/θ when the record's
+ * Tj is capped in runaway (the drop of an uncapped power would put the case below ambient, even at
+ * hundreds of kelvin below zero). Never below ambient, never above the part itself.
+ */
+function consistentSurface(net: DesignNetwork, sol: ElectroThermalSolution, i: number, celsius: number, power: number): number {
+  const ambient = sol.ambientC;
+  const own = net.network.ownKPerW[i]!;
+  const base = net.network.sinkOf[i]! >= 0 ? celsius - own * power : ambient;
+  const carried = own > 0 ? Math.min(power, Math.max(celsius - base, 0) / own) : power;
+  const surface = surfaceTemperature(net.network, i, celsius, carried, sol.sinkTemperaturesC);
+  return Math.min(Math.max(surface, ambient), Math.max(celsius, ambient));
 }
 
 const newPartTemperature = (): PartTemperature => ({

@@ -69,7 +69,13 @@ export interface Hazard {
   row: TouchLimitRow;
   /** row.limitC − surfaceC, K (negative: too hot to touch). */
   marginK: number;
+  /**
+   * Too hot to touch: marginK < 0, or the point has no steady state (thermal runaway), where the surface
+   * temperature is unknown and may pass any limit.
+   */
   exceeded: boolean;
+  /** "within" the limit, "too-hot", or "runaway" (no steady state: unknown, never reported as within). */
+  status: 'within' | 'too-hot' | 'runaway';
   caution: string;
 }
 

@@ -164,7 +164,11 @@ export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions
     warnings: meta.warnings,
   };
   if (!s.dcm && io > 0) {
-    const figures = c.topology.smallSignal(s.d, vo / io, s.inductanceH, c.outputCapacitanceF, c.loadConductanceS);
+    // The load line of the regulated design (target Vout at this current): a point that cannot regulate
+    // has collapsed its own Vo (to 0 V under overload, R → 0 and a pole at infinity), and has no loop to
+    // close; its figures then say where the design's would lie (issue 10 §5: every figure finite).
+    const loadOhm = (meta.regulated ? vo : c.targetVoutV) / io;
+    const figures = c.topology.smallSignal(s.d, loadOhm, s.inductanceH, c.outputCapacitanceF, c.loadConductanceS);
     if (figures) op.smallSignal = figures;
   }
   return op;

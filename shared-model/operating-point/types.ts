@@ -133,5 +133,6 @@ export interface OperatingPoint {
   outputRipple: { capacitiveV: Volts; esrV: Volts; totalV: Volts };
   /** Boost only: right-half-plane zero and current-mode output pole. */
   smallSignal?: { rhpZeroHz: Hertz; outputPoleHz: Hertz };
+  // (At a point that does not regulate, smallSignal uses the design's load line, R = target Vout / Io.)
   warnings: Warning[];
 }

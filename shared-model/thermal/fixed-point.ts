@@ -12,6 +12,10 @@
  * Runaway (docs/methods.md §10): (a) the loop gain reaches 1 while the node is still warming (F > 0): there is no
  * fixed point above (with secant slopes, which can carry cross-effects, it must be seen twice in a row); (b) an iterate passes the node's ceiling (its limit + RUNAWAY_BAND_K): no fixed point
  * within the range where the models mean anything; (c) iterations run out with growing steps.
+ * The part blamed for a runaway is the one that drives it: within the runaway node's heatsink group (or the
+ * node alone), the node with the largest contribution to the loop gain, θpath·dP/dT with θpath its whole
+ * path to ambient (θJC + θCS + θSA on a heatsink) — not the first node of the group, which may merely be
+ * heated by its neighbour (a leaking Schottky warms the MOSFET on the same sink).
  * The solver never returns NaN. On runaway the result says converged: false and names the node; its
  * numbers describe no steady state: the losses are evaluated with the runaway node at its ceiling and
  * the other nodes at the last iterate, and every temperature is Ta + Θ·P of those losses, capped at the
@@ -53,6 +57,8 @@ export interface ElectroThermalSolution {
   /** Node that runs away, or −1. */
   runawayNode: number;
   runawayReason: RunawayReason | null;
+  /** The ambient the solve was made at, °C. */
+  ambientC: number;
 }
 
 /**
@@ -185,6 +191,7 @@ export function solveElectroThermal(
     }
   }
 
+  if (runawayNode >= 0) runawayNode = driverOf(net, g, runawayNode);
   if (runawayNode >= 0) {
     // The record of a point without a steady state: the runaway node at its ceiling, the others at the
     // last iterate; losses evaluated there once more so every number is finite and consistent.
@@ -208,6 +215,7 @@ export function solveElectroThermal(
   sol.residualK = residual;
   sol.runawayNode = runawayNode;
   sol.runawayReason = runawayReason;
+  sol.ambientC = ambientC;
   return sol;
 }
 
@@ -217,9 +225,32 @@ function argMaxAbs(x: Float64Array): number {
   return x.length > 0 ? k : -1;
 }
 
-/** The highest ceiling among the nodes on heatsink s (a sink is never reported hotter than its parts). */
+/**
+ * The highest ceiling among the nodes on heatsink s (a sink is never reported hotter than its parts);
+ * a heatsink that carries no node is not capped (it sits at ambient: no power reaches it).
+ */
 function sinkCeiling(net: ThermalNetwork, ceilingC: Float64Array, s: number): number {
   let v = -Infinity;
   for (let i = 0; i < net.size; i++) if (net.sinkOf[i] === s && ceilingC[i]! > v) v = ceilingC[i]!;
-  return v;
+  return v === -Infinity ? Infinity : v;
+}
+
+/**
+ * The node that drives a runaway found at `node`: the largest θpath·dP/dT in its heatsink group (see
+ * header). A node without a heatsink drives its own runaway. `g` holds each node's dP/dT, W/K.
+ */
+function driverOf(net: ThermalNetwork, g: Float64Array, node: number): number {
+  const s = net.sinkOf[node]!;
+  if (s < 0) return node;
+  let best = node;
+  let bestGain = -Infinity;
+  for (let i = 0; i < net.size; i++) {
+    if (net.sinkOf[i] !== s) continue;
+    const contribution = (net.ownKPerW[i]! + net.sinkKPerW[s]!) * g[i]!;
+    if (contribution > bestGain) {
+      bestGain = contribution;
+      best = i;
+    }
+  }
+  return best;
 }

@@ -45,7 +45,7 @@ export class ThermalWork {
     this.temperatures = new Float64Array(n);
     this.solution = {
       converged: false, iterations: 0, evaluatedC: this.T, powersW: this.P, temperaturesC: this.temperatures,
-      sinkTemperaturesC: this.sinkT, residualK: Infinity, loopGain: this.gain, runawayNode: -1, runawayReason: null,
+      sinkTemperaturesC: this.sinkT, residualK: Infinity, loopGain: this.gain, runawayNode: -1, runawayReason: null, ambientC: 0,
     };
   }
 }

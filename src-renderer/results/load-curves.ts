@@ -24,7 +24,10 @@ export interface CurveChart {
 function usableSplit(key: string, label: string, points: readonly SweepPoint[], tone: Tone): LineSeries[] {
   const usable = points.map((p) => isUsablePoint(p));
   const solid = points.map((p, i) => (usable[i] ? p.efficiency : null));
-  const dashed = points.map((p, i) => (!usable[i] || usable[i - 1] === false || usable[i + 1] === false ? p.efficiency : null));
+  // A point in thermal runaway has no steady state: a gap in both series (the note says why).
+  const dashed = points.map((p, i) =>
+    !runsAway(p) && (!usable[i] || usable[i - 1] === false || usable[i + 1] === false) ? p.efficiency : null,
+  );
   if (usable.every(Boolean)) return [{ key, label, values: solid, tone }];
   return [
     { key, label, values: solid, tone },
@@ -32,11 +35,14 @@ function usableSplit(key: string, label: string, points: readonly SweepPoint[], 
   ];
 }
 
-/** The sentence that says why a dashed part is drawn, from the sweep's own points. */
+const runsAway = (p: SweepPoint): boolean => p.warnings.some((w) => w.code === 'thermal-runaway');
+
+/** The sentence that says why a dashed part (or a gap) is drawn, from the sweep's own points. */
 function unusableNote(points: readonly SweepPoint[]): string | null {
-  const unregulated = points.filter((p) => !p.regulated);
-  const unsettled = points.filter((p) => p.regulated && !p.converged);
-  if (unregulated.length === 0 && unsettled.length === 0) return null;
+  const unregulated = points.filter((p) => !p.regulated && !runsAway(p));
+  const unsettled = points.filter((p) => !p.converged && !runsAway(p) && p.regulated);
+  const runaway = points.filter(runsAway);
+  if (unregulated.length === 0 && unsettled.length === 0 && runaway.length === 0) return null;
   const parts: string[] = [];
   if (unregulated.length > 0) {
     const lowest = unregulated.reduce((a, p) => (p.voutV < a.voutV ? p : a));
@@ -44,8 +50,13 @@ function unusableNote(points: readonly SweepPoint[]): string | null {
       `${unregulated.length} of ${points.length} points do not regulate (the output falls to as low as ${formatEngineering(lowest.voutV, 'V', 4)} at ${formatEngineering(lowest.loadA, 'A', 3)})`,
     );
   }
-  if (unsettled.length > 0) parts.push(`${unsettled.length} have no electro-thermal steady state`);
-  return `Dashed: ${parts.join('; ')}. Their efficiency is that of a lower output or of no steady state, not the design's; the peak, knee and figures of merit leave them out.`;
+  if (unsettled.length > 0) parts.push(`${unsettled.length} did not converge to an electro-thermal steady state`);
+  const gap =
+    runaway.length > 0
+      ? ` Gap: ${runaway.length} points from ${formatEngineering(runaway[0]!.loadA, 'A', 3)} run away thermally (no steady state, so no efficiency).`
+      : '';
+  if (parts.length === 0) return gap.trim();
+  return `Dashed: ${parts.join('; ')}. Their efficiency is that of a lower output or of no steady state, not the design's; the peak, knee and figures of merit leave them out.${gap}`;
 }
 
 const found = (l: Landmark): l is Landmark & { load: number; value: number } => l.load !== null && l.value !== null;

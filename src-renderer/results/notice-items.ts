@@ -50,6 +50,8 @@ export interface SurfaceRow {
   limitC: number;
   marginK: number;
   exceeded: boolean;
+  /** No steady state (thermal runaway): the surface temperature is unknown. */
+  runaway: boolean;
   standard: string;
   recalled: boolean;
   caution: string;
@@ -68,6 +70,7 @@ export function surfaceRows(hazards: readonly Hazard[], labelOf: (role: Role) =>
       limitC: h.row.limitC,
       marginK: h.marginK,
       exceeded: h.exceeded,
+      runaway: h.status === 'runaway',
       standard: `${h.row.standard}${h.row.clause ? ` ${h.row.clause}` : ''}`,
       recalled: h.row.recalled,
       caution: h.caution,

@@ -12,14 +12,20 @@ import { renderWarnings } from './point-view.ts';
 
 const kelvin = (k: number): string => `${k >= 0 ? '+' : ''}${fmt(k, 'K', 3)}`;
 
+const runsAway = (e: Evaluation): boolean => e.warnings.some((w) => w.code === 'thermal-runaway');
+const RUNAWAY = 'RUNAWAY: no steady state';
+
 function summary(e: Evaluation): string {
+  // A runaway point has no steady state: no efficiency or power is shown as if it had one (issue 10 §5).
+  const steady = (v: string) => (runsAway(e) ? RUNAWAY : v);
+  const efficiency = !e.regulated ? `not regulated (output ${fmt(e.operatingPoint.voutV, 'V', 4)} instead of ${fmt(e.operatingPoint.targetVoutV, 'V', 4)})` : fmt(e.efficiency, '%', 4);
   return renderTable(
     [{ title: 'Quantity' }, { title: 'Value', align: 'right' }],
     [
-      ['Efficiency', fmt(e.efficiency, '%', 4)],
-      ['Input power', fmt(e.inputPower, 'W', 4)],
-      ['Output power', fmt(e.outputPower, 'W', 4)],
-      ['Total loss', fmt(e.totalLoss, 'W', 4)],
+      ['Efficiency', steady(efficiency)],
+      ['Input power', steady(fmt(e.inputPower, 'W', 4))],
+      ['Output power', steady(fmt(e.outputPower, 'W', 4))],
+      ['Total loss', steady(fmt(e.totalLoss, 'W', 4))],
       ['Duty cycle', fmt(e.dutyCycle, '', 4)],
       ['Conduction mode', e.conductionMode],
       ['Converged', e.converged ? `yes (${e.iterations} iterations)` : `NO (${e.iterations} iterations)`],
@@ -83,7 +89,7 @@ function hazards(e: Evaluation): string {
       fmt(h.surfaceC, '°C', 4),
       fmt(h.row.limitC, '°C', 4),
       kelvin(h.marginK),
-      h.exceeded ? 'TOO HOT TO TOUCH' : 'ok',
+      h.status === 'runaway' ? 'RUNAWAY: UNKNOWN' : h.exceeded ? 'TOO HOT TO TOUCH' : 'ok',
       `${h.row.standard} ${h.row.clause}`.trim() + (h.row.recalled ? ' (value recalled, not confirmed)' : ''),
     ]),
   );
@@ -102,8 +108,8 @@ export function renderEvaluation(design: Design, e: Evaluation, notices: readonl
     `Conditions: ${describeConditions(e.conditions)}.`,
     '',
     section('Summary', summary(e)),
-    section('Loss ledger', ledger(e)),
-    section('Temperatures', temperatures(e)),
+    section('Loss ledger', runsAway(e) ? `  ${RUNAWAY}: the losses below are taken at the runaway limit (the part at its limit + 100 K), not at an operating point.\n${ledger(e)}` : ledger(e)),
+    section('Temperatures', runsAway(e) ? `  ${RUNAWAY}: the temperatures below are capped at each part's limit + 100 K.\n${temperatures(e)}` : temperatures(e)),
   ];
   if (e.heatsinks.length > 0) out.push(section('Heatsinks', heatsinks(e)));
   out.push(section('Burn hazards', hazards(e)));

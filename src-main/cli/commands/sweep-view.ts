@@ -5,7 +5,7 @@
  * A point that is not regulated (ledger/regulated.ts) says so in every view: `regulated: false` with the
  * output reached in JSON and CSV, and a mark in the table.
  */
-import type { Design, FiguresOfMerit, Landmark, Landmarks, LoadSweep } from '../../../shared-model/index.ts';
+import type { Design, FiguresOfMerit, Landmark, Landmarks, LoadSweep, SweepPoint } from '../../../shared-model/index.ts';
 import type { CsvCell } from '../../../shared-model/index.ts';
 import { csvLines, formatEngineering as fmt, isUsablePoint, unusableReason } from '../../../shared-model/index.ts';
 import { CAUTION_LINE, CAUTIONS } from '../cautions.ts';
@@ -21,7 +21,7 @@ export function sweepJson(design: Design, sweep: LoadSweep, landmarks: Landmarks
     ratedLoadA: sweep.ratedLoadA,
     spacing: sweep.spacing,
     units: { load: 'A', efficiency: 'ratio', totalLoss: 'W', temperatures: '°C', margins: 'K', losses: 'W' },
-    points: sweep.points.map((p) => ({
+    points: sweep.points.map((p) => (runaway(p) ? runawayGap(p) : {
       load: p.loadA,
       regulated: p.regulated,
       voutV: p.voutV,
@@ -43,6 +43,28 @@ export function sweepJson(design: Design, sweep: LoadSweep, landmarks: Landmarks
   };
 }
 
+/** The point has no steady state (thermal runaway): the sweep shows a gap there, with the reason. */
+function runaway(p: SweepPoint): boolean {
+  return p.warnings.some((w) => w.code === 'thermal-runaway');
+}
+
+/**
+ * A runaway point in JSON: no efficiency, loss or temperature (they would describe no steady state,
+ * issue 10 §5) — the load, the flags and the reason (the runaway warning's first sentence).
+ */
+function runawayGap(p: SweepPoint): Record<string, unknown> {
+  const w = p.warnings.find((x) => x.code === 'thermal-runaway');
+  const reason = (w?.message ?? 'Thermal runaway.').split(' — ')[0] ?? '';
+  return {
+    load: p.loadA,
+    regulated: p.regulated,
+    converged: false,
+    steadyState: false,
+    reason: `${reason}: no steady state at this load, so no efficiency, loss or temperature is given.`,
+    warnings: [...new Set(p.warnings.map((x) => x.code))],
+  };
+}
+
 /**
  * One row per point; column names carry their units. Written by the shared CSV writer (RFC 4180, CRLF,
  * text cells neutralised against spreadsheet formula injection: shared-model/csv/write.ts).
@@ -55,10 +77,15 @@ export function sweepCsv(sweep: LoadSweep): string {
     ...c.losses.map((l) => `loss_${l.part}_${l.mechanism.replace(/ /g, '_')}_W`),
     'warnings',
   ];
-  const rows = sweep.points.map((p): CsvCell[] => [
-    p.loadA, p.efficiency, p.totalLoss, p.inputPower, p.outputPower, p.dutyCycle, p.mode, String(p.converged), String(p.regulated), p.voutV,
-    ...p.temperaturesC, ...p.losses, [...new Set(p.warnings.map((w) => w.code))].join(' '),
-  ]);
+  // A runaway point is a gap: empty cells where a steady state's numbers would be (its warnings say why).
+  const rows = sweep.points.map((p): CsvCell[] => {
+    const codes = [...new Set(p.warnings.map((w) => w.code))].join(' ');
+    if (runaway(p)) return [p.loadA, '', '', '', '', '', '', 'false', String(p.regulated), '', ...p.temperaturesC.map(() => ''), ...p.losses.map(() => ''), codes];
+    return [
+      p.loadA, p.efficiency, p.totalLoss, p.inputPower, p.outputPower, p.dutyCycle, p.mode, String(p.converged), String(p.regulated), p.voutV,
+      ...p.temperaturesC, ...p.losses, codes,
+    ];
+  });
   return csvLines([head, ...rows]);
 }
 

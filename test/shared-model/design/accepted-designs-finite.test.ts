@@ -33,18 +33,11 @@ function nonFinite(value: unknown, path = '$'): string[] {
 }
 
 /**
- * Known engine defects this property finds, left to their owners and reported to the lead (each must be
- * removed from this list when fixed; the tally below prints how often each was met):
- *  - an unused heatsink in a runaway record reads −Infinity °C (thermal/fixed-point.ts sinkCeiling takes
- *    the highest ceiling of no node); runaway records belong to issue 10 §5;
- *  - a boost whose output collapses under a large load override reports outputPoleHz = Infinity
- *    (issue 10 §5 names it: "the boost's output pole … stay finite when Vout collapses").
+ * Known engine defects this property finds, left to their owners (each must be removed from this list
+ * when fixed; the tally below prints how often each was met). Empty: the runaway heatsink reading
+ * −Infinity and the collapsed boost's infinite output pole were fixed under issue 10 §5.
  */
-const KNOWN_DEFECTS: readonly RegExp[] = [
-  /\.heatsinks\.\d+\.celsius = -Infinity$/,
-  /\.points\.\d+\.heatsinksC\.\d+ = -Infinity$/,
-  /\.operatingPoint\.smallSignal\.outputPoleHz = Infinity$/,
-];
+const KNOWN_DEFECTS: readonly RegExp[] = [];
 const known = new Map<string, number>();
 function unexpected(found: string[]): string[] {
   return found.filter((f) => {
