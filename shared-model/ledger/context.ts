@@ -20,6 +20,7 @@ import { slotsOf, type Slots } from './slots.ts';
 import type { TouchPick } from './hazards.ts';
 import { topologyOf } from '../topology/registry.ts';
 import type { ConverterTopology } from '../topology/types.ts';
+import type { PulseSkipping } from '../light-load/pulse-skipping.ts';
 
 const NO_SCRATCH = new Float64Array(0);
 
@@ -28,8 +29,11 @@ export interface LedgerContext {
   synchronous: boolean;
   /** The design's topology record. */
   topology: ConverterTopology;
+  /** The switching frequency of the evaluation (the pulse rate while pulses skip). */
   frequencyHz: number;
   vinV: number;
+  /** The evaluation's pulse-skipping state (null: the design does not skip pulses). */
+  pulseSkipping: PulseSkipping | null;
   net: DesignNetwork;
   /** Runaway ceiling of each node (limit + RUNAWAY_BAND_K), °C. */
   ceilingC: Float64Array;
@@ -98,6 +102,7 @@ export function ledgerContext(design: Design, vinV = design.spec.vinNomV, freque
     synchronous,
     topology: topologyOf(design),
     frequencyHz,
+    pulseSkipping: null,
     vinV,
     net,
     ceilingC,
