@@ -14,7 +14,8 @@
  * Pulse rate (the equivalent switching frequency) f_p = Io/Q. The mode changes where f_p reaches the
  * switching frequency: I_change = Q·fs — above it the converter runs in DCM (or CCM) at fs with a higher
  * peak; below it the pulses keep Ipk,min and their rate falls with the load. At no load the rate is held at
- * MIN_RATE_FRACTION·fs (no pulses carry current then: the point is the controller's sleep current alone).
+ * MIN_RATE_FRACTION·fs and no pulse carries current (the feedback network's own draw is not modelled):
+ * the point is the controller's sleep current alone, with the output held.
  * The point is evaluated as the DCM point at the period 1/f_p, so every per-pulse loss (switching, gate,
  * Coss, core per cycle) scales with the pulse rate; the controller draws its quiescent current while a
  * pulse runs and the sleep current for the rest: Iq,eff = Iq·a + I_sleep·(1 − a), a = (t_on + t_off)·f_p.
@@ -105,7 +106,7 @@ export function pulseSkippingAt(design: Design, conditions: Conditions, conducti
   if (!(conditions.loadA < out.modeChangeLoadA)) return out;
   out.active = true;
   out.pulseRateHz = Math.max(conditions.loadA / pulse.outputChargeC, MIN_RATE_FRACTION * fs);
-  out.awakeFraction = Math.min(lengthS * out.pulseRateHz, 1);
+  out.awakeFraction = conditions.loadA > 0 ? Math.min(lengthS * out.pulseRateHz, 1) : 0;
   return out;
 }
 

@@ -173,6 +173,7 @@ export function buildReport(input: ReportInput): ReportModel {
     methods: methodsFor({
       mechanisms,
       loadKind: loadKindOf(design.spec),
+      pulseSkipping: design.topology.lightLoad === 'pulse-skipping',
       capacitorLife: rated.checks.some((c) => c.check === 'capacitor-life'),
       comparison: comparison !== null,
       tolerance: tolerance !== null,

@@ -59,8 +59,14 @@ export const LIGHT_LOAD_CHOICE: ChoiceSpec = {
   options: [
     { value: 'forced-pwm', label: 'Keep switching (current may reverse)' },
     { value: 'diode-emulation', label: 'Stop the rectifier at zero current (DCM)' },
+    { value: 'pulse-skipping', label: 'Pulse skipping (PFM): pulses at a minimum peak current' },
   ],
 };
+
+export const PULSE_SKIPPING_FIELDS: FieldSpec[] = [
+  num('minPeakCurrentA', 'Minimum peak current of a pulse', 'A'),
+  num('sleepCurrentA', 'Controller current while asleep', 'A'),
+];
 
 export const SENSE_CHOICE: ChoiceSpec = {
   type: 'choice',

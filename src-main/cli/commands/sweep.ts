@@ -48,7 +48,7 @@ export const sweepCommand: Command = {
   ],
   details: [
     'JSON: points (load A, efficiency, totalLoss W, temperatures °C by part, margins K, losses W, mode,',
-    'warnings) and landmarks (peak, knee, modeBoundary, thermalCeiling, regulationLimit), each with load',
+    'warnings) and landmarks (peak, knee, modeBoundary, pulseSkipping, thermalCeiling, regulationLimit), each with load',
     'and value, or null with a reason. The knee is our own definition, printed with it.',
   ],
   async run(args, io) {
