@@ -8,9 +8,10 @@ import { validateDesign } from '../../shared-model/index.ts';
 import type { Design } from '../../shared-model/index.ts';
 import { closeTo } from '../helpers/close-to.ts';
 import { field, fieldNote, pasteInto, readOperatingPoint, typeInto, valueAtKey } from './helpers/app-page.ts';
-import { demoDesign, expectedOperatingPoint } from './helpers/engine.ts';
+import { expectedOperatingPoint } from './helpers/engine.ts';
 import { e2eSuite } from './helpers/suite.ts';
 import type { Page } from 'playwright-core';
+import { demoDesign } from '../helpers/demo.ts';
 
 const suite = e2eSuite();
 

@@ -8,8 +8,9 @@ import type { Page } from 'playwright-core';
 import { validatePartsLibrary } from '../../shared-model/index.ts';
 import { closeTo } from '../helpers/close-to.ts';
 import { field, readOperatingPoint, valueAtKey } from './helpers/app-page.ts';
-import { demoDesign, expectedOperatingPoint } from './helpers/engine.ts';
+import { expectedOperatingPoint } from './helpers/engine.ts';
 import { e2eSuite } from './helpers/suite.ts';
+import { demoDesign } from '../helpers/demo.ts';
 
 const suite = e2eSuite();
 const list = (page: Page) => page.locator('nav[aria-label="Parts in the library"] li button');
