@@ -102,6 +102,8 @@ function collect(): PartField[] {
         forms.forEach((form, i) => {
           for (const [sub, s] of Object.entries(defOf(form).shape as Record<string, Schema>)) {
             if (sub === tag) continue;
+            // A digitised curve (an array of points, e.g. the Coss(VDS) table) is not one spreadsheet cell.
+            if (defOf(unwrap(s)).type === 'array') continue;
             add(`${key}.${sub}`, s, kind, !isOptional(s), { union: { key, tag, forms: [formNames[i] as string] } });
           }
         });
