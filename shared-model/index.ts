@@ -31,7 +31,8 @@ export { migrateDesign } from './design/migrate.ts';
 export { parseDesignText, serializeDesign } from './design/document-text.ts';
 export type { JsonSyntaxError } from './design/json-position.ts';
 export { findJsonSyntaxError } from './design/json-position.ts';
-export type { PartsLibrary } from './design/parts-library.ts';
+export { freeId, idFromName } from './design/ids.ts';
+export type { PartsLibrary, PartsLibraryValidation } from './design/parts-library.ts';
 export {
   PARTS_LIBRARY_FORMAT,
   PARTS_LIBRARY_VERSION,
@@ -39,9 +40,17 @@ export {
   partsOfKind,
   validatePartsLibrary,
 } from './design/parts-library.ts';
+export type { LibraryMigration } from './design/parts-library-migrate.ts';
+export { migratePartsLibrary } from './design/parts-library-migrate.ts';
+export { parsePartsLibraryText, serializePartsLibrary } from './design/parts-library-text.ts';
 export { DESIGN_SCHEMA_FILE, designJsonSchema, PARTS_SCHEMA_FILE, partsLibraryJsonSchema } from './design/json-schema.ts';
 export type { DemoDesign } from './design/demos.ts';
 export { DEMO_DESIGNS, DEMO_PARTS_LIBRARY } from './design/demos.ts';
+
+// --- library links (a design's parts against their library entries) ---
+export type { FieldDifference, LinkState, PartLink } from './library-links/link-status.ts';
+export { linkStatus, partDifferences, partOfRole } from './library-links/link-status.ts';
+export { takeLibraryPart, unlinkPart, updateFromLibrary } from './library-links/update-link.ts';
 
 // --- part import and export (spreadsheets) ---
 export type { FieldType, PartField } from './part-import/fields.ts';
@@ -55,9 +64,9 @@ export type { ColumnMapping, MappingProblem, PartMapping } from './part-import/m
 export { checkMapping, mappingDocument, PART_MAPPING_FORMAT, PART_MAPPING_VERSION, partMappingSchema } from './part-import/mapping.ts';
 export { guessColumn, guessMapping, reuseMapping } from './part-import/guess.ts';
 export type { ImportPreview, PreviewRow, RowProblem } from './part-import/preview.ts';
-export { idFromName, previewImport } from './part-import/preview.ts';
+export { previewImport } from './part-import/preview.ts';
 export type { ImportApplied } from './part-import/apply.ts';
-export { applyImport, freeId } from './part-import/apply.ts';
+export { applyImport } from './part-import/apply.ts';
 export { partsToCsv, shiftedText } from './part-import/export.ts';
 
 // --- operating point ---
@@ -85,6 +94,8 @@ export type * from './ledger/types.ts';
 export type { EvaluateOptions, LedgerEvaluator } from './ledger/evaluate.ts';
 export { evaluate, ledgerEvaluator, POWER_BALANCE_RTOL } from './ledger/evaluate.ts';
 export type { LeanEvaluation, LeanHazard, LeanTerm } from './ledger/lean-evaluate.ts';
+export type { RegulationFlags } from './ledger/regulated.ts';
+export { isRegulated, isUsablePoint, REGULATION_RTOL, unusableReason } from './ledger/regulated.ts';
 export { RUNAWAY_BAND_K } from './thermal/fixed-point.ts';
 export { TOUCH_LIMITS } from './hazards/touch-limits.ts';
 export type { RowFit } from './hazards/touch-check.ts';
@@ -117,11 +128,12 @@ export type { FrequencySide, FrequencySweep, FrequencySweepOptions } from './swe
 export { checkFrequencySweepOptions, sweepFrequency } from './sweep/frequency-sweep.ts';
 export type { AxisOptions, GridAxis, GridOptions, LoadGrid } from './sweep/grid.ts';
 export { checkGridOptions, sweepGrid } from './sweep/grid.ts';
-export type { FigureOfMeritPoint, FiguresOfMerit } from './sweep/figures-of-merit.ts';
+export type { EfficiencyPoint, Figure, FigureOfMeritPoint, FiguresOfMerit } from './sweep/figures-of-merit.ts';
 export {
   AVERAGE_EFFICIENCY_FRACTIONS,
   figuresOfMerit,
   figuresOfMeritOf,
+  figureValue,
   LIGHT_LOAD_FRACTION,
 } from './sweep/figures-of-merit.ts';
 export type {
@@ -213,6 +225,8 @@ export { calibrate } from './fit/calibrate.ts';
 export { modelPoints } from './fit/point-model.ts';
 
 export { CALIBRATION_CAUTION } from './fit/caution.ts';
+export type { CalibrationSection, CalibrationSectionPoint } from './fit/report-section.ts';
+export { calibrationSection } from './fit/report-section.ts';
 
 // --- design-review report ---
 export type * from './report/types.ts';
@@ -234,6 +248,7 @@ export {
   formatAmps,
   formatCelsius,
   formatDuty,
+  formatFigurePercent,
   formatFixed,
   formatHertz,
   formatHours,
