@@ -4,7 +4,7 @@
  * export file, and naming copies.
  */
 import { PARTS_LIBRARY_FORMAT, PARTS_LIBRARY_VERSION, partSchema, validatePartsLibrary } from '../../shared-model/index.ts';
-import type { Part, PartKind, PartsLibrary } from '../../shared-model/index.ts';
+import type { Part, PartKind, PartsLibrary, Problem } from '../../shared-model/index.ts';
 import { groupByPath } from './paths.ts';
 
 export const LIBRARY_FORMAT = PARTS_LIBRARY_FORMAT;
@@ -104,11 +104,12 @@ export function partsOfKind<K extends PartKind>(parts: readonly Part[], kind: K)
  * Every problem of a part record, by dotted path, in the engine's own sentences (field, value found,
  * allowed range): the part is checked as a one-part library and the "parts[0]." prefix removed.
  */
-export function partProblems(part: unknown): ReadonlyMap<string, { path: string; message: string }[]> {
+export function partProblems(part: unknown): ReadonlyMap<string, Problem[]> {
   const check = validatePartsLibrary({ format: PARTS_LIBRARY_FORMAT, version: PARTS_LIBRARY_VERSION, name: 'draft', notes: '', parts: [part] });
   if (check.ok) return groupByPath([]);
   return groupByPath(
     check.problems.map((problem) => ({
+      ...problem,
       path: problem.path.replace(/^parts\[0\]\.?/, ''),
       message: problem.message.replaceAll('parts[0].', ''),
     })),
