@@ -31,7 +31,8 @@ export { migrateDesign } from './design/migrate.ts';
 export { parseDesignText, serializeDesign, unrepresentable } from './design/document-text.ts';
 export type { JsonSyntaxError } from './design/json-position.ts';
 export { findJsonSyntaxError } from './design/json-position.ts';
-export type { PartsLibrary } from './design/parts-library.ts';
+export { freeId, idFromName } from './design/ids.ts';
+export type { PartsLibrary, PartsLibraryValidation } from './design/parts-library.ts';
 export {
   PARTS_LIBRARY_FORMAT,
   PARTS_LIBRARY_VERSION,
@@ -39,9 +40,17 @@ export {
   partsOfKind,
   validatePartsLibrary,
 } from './design/parts-library.ts';
+export type { LibraryMigration } from './design/parts-library-migrate.ts';
+export { migratePartsLibrary } from './design/parts-library-migrate.ts';
+export { parsePartsLibraryText, serializePartsLibrary } from './design/parts-library-text.ts';
 export { DESIGN_SCHEMA_FILE, designJsonSchema, PARTS_SCHEMA_FILE, partsLibraryJsonSchema } from './design/json-schema.ts';
 export type { DemoDesign } from './design/demos.ts';
 export { DEMO_DESIGNS, DEMO_PARTS_LIBRARY } from './design/demos.ts';
+
+// --- library links (a design's parts against their library entries) ---
+export type { FieldDifference, LinkState, PartLink } from './library-links/link-status.ts';
+export { linkStatus, partDifferences, partOfRole } from './library-links/link-status.ts';
+export { takeLibraryPart, unlinkPart, updateFromLibrary } from './library-links/update-link.ts';
 
 // --- part import and export (spreadsheets) ---
 export type { FieldType, PartField } from './part-import/fields.ts';
@@ -55,14 +64,16 @@ export type { ColumnMapping, MappingProblem, PartMapping } from './part-import/m
 export { checkMapping, mappingDocument, PART_MAPPING_FORMAT, PART_MAPPING_VERSION, partMappingSchema } from './part-import/mapping.ts';
 export { guessColumn, guessMapping, reuseMapping } from './part-import/guess.ts';
 export type { ImportPreview, PreviewRow, RowProblem } from './part-import/preview.ts';
-export { idFromName, previewImport } from './part-import/preview.ts';
+export { previewImport } from './part-import/preview.ts';
 export type { ImportApplied } from './part-import/apply.ts';
-export { applyImport, freeId } from './part-import/apply.ts';
+export { applyImport } from './part-import/apply.ts';
 export { partsToCsv, shiftedText } from './part-import/export.ts';
 
 // --- operating point ---
 export type * from './operating-point/types.ts';
 export { solveOperatingPoint } from './operating-point/solve.ts';
+export { TOPOLOGIES, topologyOf } from './topology/registry.ts';
+export type { ConductionInterval, ConverterTopology, VoltageCoefficients } from './topology/types.ts';
 export { conductionParameters, nominalConditions, uniformTemps } from './operating-point/conditions.ts';
 export { isSynchronous } from './operating-point/circuit.ts';
 export { waveformStats, periodOf } from './waveform/stats.ts';
@@ -197,6 +208,30 @@ export {
   monteCarlo,
 } from './tolerance/monte-carlo.ts';
 
+// --- bench measurements and calibration ---
+export type { CalibrationRecord, MeasuredPoint, MeasuredTemperatures, Measurement } from './measurement/schema.ts';
+export { calibrationSchema, measuredPointSchema, measurementSchema } from './measurement/schema.ts';
+export type { ColumnKey, ColumnSpec } from './measurement/columns.ts';
+export { columnOf, COLUMNS as MEASUREMENT_COLUMNS, INPUT_COLUMNS, REQUIRED_COLUMNS } from './measurement/columns.ts';
+export type { MeasurementProblem, MeasurementRead, ReadMeasurementOptions } from './measurement/read.ts';
+export { inputPowerOf, readMeasurement } from './measurement/read.ts';
+export type { MeasuredBalance } from './measurement/loss.ts';
+export { measuredBalance } from './measurement/loss.ts';
+export { measurementHash, measurementText } from './measurement/hash.ts';
+export type { LeastSquaresOptions, LeastSquaresProblem, LeastSquaresResult, StopReason } from './fit/least-squares.ts';
+export { leastSquares } from './fit/least-squares.ts';
+export type { IdentifiabilityIssue, ParameterStatistics } from './fit/intervals.ts';
+export { CORRELATION_LIMIT, FLAT_DIRECTION_RATIO, parameterStatistics } from './fit/intervals.ts';
+export { studentTCdf, studentTQuantile } from './fit/student-t.ts';
+export type { FitParameter, FitParameterName } from './fit/parameters.ts';
+export { applyParameters, defaultFitParameters, fitParameters, SCALE_BOUNDS } from './fit/parameters.ts';
+export type * from './fit/types.ts';
+export type { CalibrationOptions, CalibrationOutcome } from './fit/calibrate.ts';
+export { calibrate } from './fit/calibrate.ts';
+export { modelPoints, pointConditions } from './fit/point-model.ts';
+export { LOSS_GROUPS, lossByGroup } from './fit/ledger-groups.ts';
+export { CALIBRATION_CAUTION } from './fit/caution.ts';
+
 // --- design-review report ---
 export type * from './report/types.ts';
 export { REPORT_FORMAT, REPORT_VERSION } from './report/types.ts';
@@ -223,9 +258,7 @@ export {
   formatKelvin,
   formatMarginFraction,
   formatPercent,
-  formatPlain,
   formatQuantity,
-  formatSi,
   formatVolts,
   formatWatts,
   formatWattsFixed,

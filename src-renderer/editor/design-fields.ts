@@ -1,5 +1,5 @@
 /** Field descriptions of the design-level sections (specification, topology, margins). */
-import { CONTACT_LABELS, contactSchema } from '../../shared-model/index.ts';
+import { CONTACT_LABELS, contactSchema, TOPOLOGIES } from '../../shared-model/index.ts';
 import { num, type ChoiceSpec, type FieldSpec } from './field-spec.ts';
 
 export const IDENTITY_FIELDS: FieldSpec[] = [
@@ -21,6 +21,21 @@ export const SPEC_FIELDS: FieldSpec[] = [
   num('maxDuty', 'Largest duty cycle', '', { help: 'A fraction below 1 ("0.9" or "90 %").' }),
 ];
 
+export const LOAD_KIND_CHOICE: ChoiceSpec = {
+  type: 'choice',
+  key: 'loadKind',
+  label: 'The load is',
+  options: [
+    { value: 'constant-current', label: 'A constant current' },
+    { value: 'resistive', label: 'A resistor (Vout / load current)' },
+    { value: 'constant-power', label: 'A constant power (Vout × load current)' },
+  ],
+};
+
+/** What the load-kind choice means, shown under it. */
+export const LOAD_KIND_HELP =
+  'Sets how the output ripple current divides between the output capacitors and the load: a resistor takes a share, a constant-power load pushes more into the capacitors.';
+
 export const TARGET_FIELDS: FieldSpec[] = [
   num('efficiencyAtRated', 'Efficiency at rated load', '', { optional: true, help: 'The report says whether the rated point meets it; the Monte Carlo counts the samples that do.' }),
   num('outputRippleV', 'Output ripple, peak to peak', 'V', { optional: true, help: 'Kept with the design; not yet checked against the results.' }),
@@ -31,10 +46,8 @@ export const KIND_CHOICE: ChoiceSpec = {
   type: 'choice',
   key: 'kind',
   label: 'Converter',
-  options: [
-    { value: 'buck', label: 'Buck (step-down)' },
-    { value: 'boost', label: 'Boost (step-up)' },
-  ],
+  // One option per topology record, named by the record (shared-model/topology/).
+  options: Object.values(TOPOLOGIES).map((t) => ({ value: t.kind, label: `${t.title[0]!.toUpperCase()}${t.title.slice(1)}` })),
 };
 
 export const RECTIFIER_CHOICE: ChoiceSpec = {
