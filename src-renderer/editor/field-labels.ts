@@ -5,8 +5,8 @@
  * the label the user sees, with its section where the label alone is ambiguous (parts, thermal paths,
  * heatsinks). Returns the unit the field is entered in, so a value can be written the same way.
  */
-import { ROLES, type Design, type Role } from '../../shared-model/index.ts';
-import { partOfRole, partPath, ROLE_LABELS } from '../state/design-actions.ts';
+import { partInRole, ROLE_LABELS, ROLES, type Design, type Role } from '../../shared-model/index.ts';
+import { partPath } from '../state/design-actions.ts';
 import {
   CONTACT_CHOICE,
   DEAD_TIME_FIELDS,
@@ -72,7 +72,7 @@ export function fieldName(path: string, design: Design): FieldName | null {
       const role = rest[0];
       if (!isRole(role)) return null;
       if (rest[1] === 'count') return { label: `${ROLE_LABELS[role]} — Number in parallel`, unit: '' };
-      const part = partOfRole(design, role);
+      const part = partInRole(design, role);
       const keys = rest.slice(partPath(role).length - 1);
       if (keys.length === 0 || !part) return { label: ROLE_LABELS[role], unit: null };
       const fields = PART_FIELDS[part.kind];
