@@ -30,6 +30,7 @@ import { efficiencyOf, settlePoint, solvePoint, type Settled } from './solve-poi
 import { keepRecords } from './keep.ts';
 import { leanEvaluateWith, type LeanEvaluation } from './lean-evaluate.ts';
 import type { Evaluation, Hazard, RatingCheck } from './types.ts';
+import { isRegulated } from './regulated.ts';
 
 export { DEFAULT_TOLERANCE_K, POWER_BALANCE_RTOL } from './solve-point.ts';
 
@@ -79,6 +80,7 @@ function evaluateWith(ctx: LedgerContext, conditions?: Partial<Conditions>, opti
   const outputPower = op.outputPowerW;
   return {
     conditions: cond,
+    regulated: isRegulated(op.voutV, ctx.design.spec.voutV),
     converged: sol.converged,
     iterations: sol.iterations,
     efficiency: efficiencyOf(outputPower, inputPower, totalLoss),

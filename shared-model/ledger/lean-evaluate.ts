@@ -19,6 +19,7 @@ import { partTemperaturesInto } from './temperatures.ts';
 import { efficiencyOf, picksOf, settlePoint, solvePoint, type Settled } from './solve-point.ts';
 import { keepMargins, type Keeper } from './keep.ts';
 import type { Mechanism, PartTemperature, RatingCheck } from './types.ts';
+import { isRegulated } from './regulated.ts';
 
 /** One loss term's number (the Evaluation's LossTerm without formula and inputs). */
 export interface LeanTerm {
@@ -38,6 +39,8 @@ export interface LeanHazard {
 
 export interface LeanEvaluation {
   conditions: Conditions;
+  /** As Evaluation.regulated. */
+  regulated: boolean;
   converged: boolean;
   iterations: number;
   efficiency: number;
@@ -74,6 +77,7 @@ function recordsOf(ctx: LedgerContext): LeanRecords {
   const index = ctx.net.index;
   const evaluation: LeanEvaluation = {
     conditions: { vinV: 0, loadA: 0, switchingFrequencyHz: 0, ambientC: 0 },
+    regulated: false,
     converged: false,
     iterations: 0,
     efficiency: 0,
@@ -112,6 +116,7 @@ export function leanEvaluateWith(ctx: LedgerContext, conditions?: Partial<Condit
   settlePoint(ctx, point, r.temperatures, warnings, keeper, settle);
   for (let s = 0; s < r.heatsinks.length; s++) r.heatsinks[s]!.celsius = sol.sinkTemperaturesC[s]!;
   r.conditions = cond;
+  r.regulated = isRegulated(op.voutV, ctx.design.spec.voutV);
   r.converged = sol.converged;
   r.iterations = sol.iterations;
   r.totalLoss = settle.totalLoss;
