@@ -18,6 +18,12 @@ export const specificationSchema = z.object({
   vinMaxV: q('railV'),
   voutV: q('railV'),
   ratedLoadA: q('loadA'),
+  /**
+   * What the load is: a constant-current sink (absent: the default), a resistor R = Vout/I at each
+   * evaluated load I, or a constant-power load Vout·I. It sets how the output ripple current divides
+   * between the output capacitor bank and the load (operating-point/load.ts).
+   */
+  loadKind: z.enum(['constant-current', 'resistive', 'constant-power']).optional(),
   switchingFrequencyHz: q('switchingHz'),
   ambientC: q('ambientC'),
   /** Largest duty cycle the controller can command (0.05 ≤ maxDuty < 1). */

@@ -15,7 +15,7 @@ import { ResultsState } from './results.svelte.ts';
 import { ThemeState } from './theme.svelte.ts';
 import type { PartStash } from './topology-edits.ts';
 
-export type Screen = 'design' | 'library' | 'import' | 'report';
+export type Screen = 'design' | 'library' | 'import' | 'bench' | 'report';
 
 export interface RecoveryOffer {
   recovered: Recovered;
