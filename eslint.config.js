@@ -32,6 +32,18 @@ const rendererChartDoor = {
   ],
 };
 
+/** Chart wrappers: Chart.js types only; the registered `Chart` comes from chart-kit.ts. */
+const rendererChartKitDoor = {
+  patterns: [
+    ...rendererDoor.patterns,
+    {
+      group: ['chart.js', 'chart.js/*', 'chartjs-*'],
+      allowTypeImports: true,
+      message: 'Chart.js is set up in one place: import Chart (and plugins) from src-renderer/charts/chart-kit.ts; type imports are fine.',
+    },
+  ],
+};
+
 const mainDoor = {
   patterns: [
     { group: ['**/src-renderer/**', 'svelte', 'svelte/*', 'chart.js', 'chart.js/*'], message: 'Main never imports the renderer.' },
@@ -70,6 +82,11 @@ export default tseslint.config(
   },
   {
     files: ['src-renderer/charts/**/*.ts', 'src-renderer/charts/**/*.svelte'],
+    rules: { 'no-restricted-imports': ['error', rendererChartKitDoor] },
+  },
+  {
+    // The one place Chart.js is set up (registered pieces, defaults): the only value import of it.
+    files: ['src-renderer/charts/chart-kit.ts'],
     rules: { 'no-restricted-imports': ['error', rendererDoor] },
   },
   {

@@ -43,9 +43,28 @@ export { DESIGN_SCHEMA_FILE, designJsonSchema, PARTS_SCHEMA_FILE, partsLibraryJs
 export type { DemoDesign } from './design/demos.ts';
 export { DEMO_DESIGNS, DEMO_PARTS_LIBRARY } from './design/demos.ts';
 
+// --- part import and export (spreadsheets) ---
+export type { FieldType, PartField } from './part-import/fields.ts';
+export { fieldsOfKind, PART_FIELDS, partField } from './part-import/fields.ts';
+export { FIELD_WORDS, KIND_WORDS } from './part-import/field-labels.ts';
+export type { HeaderParts } from './part-import/header-unit.ts';
+export { headerReadings, normaliseHeader } from './part-import/header-unit.ts';
+export type { CellRead } from './part-import/cells.ts';
+export { allowedText, readCell, unitExponent } from './part-import/cells.ts';
+export type { ColumnMapping, MappingProblem, PartMapping } from './part-import/mapping.ts';
+export { checkMapping, mappingDocument, PART_MAPPING_FORMAT, PART_MAPPING_VERSION, partMappingSchema } from './part-import/mapping.ts';
+export { guessColumn, guessMapping, reuseMapping } from './part-import/guess.ts';
+export type { ImportPreview, PreviewRow, RowProblem } from './part-import/preview.ts';
+export { idFromName, previewImport } from './part-import/preview.ts';
+export type { ImportApplied } from './part-import/apply.ts';
+export { applyImport, freeId } from './part-import/apply.ts';
+export { partsToCsv, shiftedText } from './part-import/export.ts';
+
 // --- operating point ---
 export type * from './operating-point/types.ts';
 export { solveOperatingPoint } from './operating-point/solve.ts';
+export { TOPOLOGIES, topologyOf } from './topology/registry.ts';
+export type { ConductionInterval, ConverterTopology, VoltageCoefficients } from './topology/types.ts';
 export { conductionParameters, nominalConditions, uniformTemps } from './operating-point/conditions.ts';
 export { isSynchronous } from './operating-point/circuit.ts';
 export { waveformStats, periodOf } from './waveform/stats.ts';
@@ -190,6 +209,30 @@ export type { SizingOptions } from './sizing/size-design.ts';
 export { sizeDesign, sizeFromCorners } from './sizing/size-design.ts';
 export type { HandInput, HandSizing } from './sizing/hand-method.ts';
 export { handSizing } from './sizing/hand-method.ts';
+
+// --- bench measurements and calibration ---
+export type { CalibrationRecord, MeasuredPoint, MeasuredTemperatures, Measurement } from './measurement/schema.ts';
+export { calibrationSchema, measuredPointSchema, measurementSchema } from './measurement/schema.ts';
+export type { ColumnKey, ColumnSpec } from './measurement/columns.ts';
+export { columnOf, COLUMNS as MEASUREMENT_COLUMNS, INPUT_COLUMNS, REQUIRED_COLUMNS } from './measurement/columns.ts';
+export type { MeasurementProblem, MeasurementRead, ReadMeasurementOptions } from './measurement/read.ts';
+export { inputPowerOf, readMeasurement } from './measurement/read.ts';
+export type { MeasuredBalance } from './measurement/loss.ts';
+export { measuredBalance } from './measurement/loss.ts';
+export { measurementHash, measurementText } from './measurement/hash.ts';
+export type { LeastSquaresOptions, LeastSquaresProblem, LeastSquaresResult, StopReason } from './fit/least-squares.ts';
+export { leastSquares } from './fit/least-squares.ts';
+export type { IdentifiabilityIssue, ParameterStatistics } from './fit/intervals.ts';
+export { CORRELATION_LIMIT, FLAT_DIRECTION_RATIO, parameterStatistics } from './fit/intervals.ts';
+export { studentTCdf, studentTQuantile } from './fit/student-t.ts';
+export type { FitParameter, FitParameterName } from './fit/parameters.ts';
+export { applyParameters, defaultFitParameters, fitParameters, SCALE_BOUNDS } from './fit/parameters.ts';
+export type * from './fit/types.ts';
+export type { CalibrationOptions, CalibrationOutcome } from './fit/calibrate.ts';
+export { calibrate } from './fit/calibrate.ts';
+export { modelPoints, pointConditions } from './fit/point-model.ts';
+export { LOSS_GROUPS, lossByGroup } from './fit/ledger-groups.ts';
+export { CALIBRATION_CAUTION } from './fit/caution.ts';
 
 // --- design-review report ---
 export type * from './report/types.ts';

@@ -7,6 +7,8 @@
  *   spec.loadA           → spec.ratedLoadA
  *   topology.deadTimeS   → topology.deadTimeBeforeOnS and topology.deadTimeAfterOffS (same value)
  *   thermal.customTouchLimits did not exist → [] (the shipped table is used)
+ * The optional `measurements` and `calibration` sections (issue 12) were added within version 1: a document
+ * without them is unchanged, so they need no migration step.
  * Migration does not validate: validateDesign() checks the result. It never modifies its input.
  */
 import { DESIGN_FORMAT, DESIGN_VERSION } from './schema.ts';

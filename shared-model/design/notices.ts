@@ -15,11 +15,12 @@ import type { DesignNotice } from './problems.ts';
 import { compactValue, pathToString } from './problems.ts';
 import { isObject } from './read.ts';
 import { formatEngineering } from '../units/engineering.ts';
+import { topologyOf } from '../topology/registry.ts';
 
 /** A notice when spec.maxDuty cannot reach the output at any input of the specified range (see the header). */
 export function dutyReachNotice(design: Design): DesignNotice | undefined {
   const { spec, topology } = design;
-  const needed = topology.kind === 'buck' ? spec.voutV / spec.vinMaxV : 1 - spec.vinMaxV / spec.voutV;
+  const needed = topologyOf(design).idealDuty(spec.vinMaxV, spec.voutV);
   if (!(needed > 0 && needed < 1) || spec.maxDuty > needed) return undefined;
   const d = (x: number): string => formatEngineering(x, '', 6);
   return {
@@ -41,6 +42,29 @@ export function ignoredKeys(input: unknown, parsed: unknown, path: (string | num
         out.push({ path: where, value: compactValue(value), message: `${where} is not a WattLedger key and was ignored (misspelt?).` });
       else out.push(...ignoredKeys(value, parsed[key], [...path, key]));
     }
+  }
+  return out;
+}
+
+/**
+ * A Coss(VDS) table that ends below the highest voltage its FET switches (Vin,max for a buck, Vout for a
+ * boost, plus a diode's drop ignored): above the last point the capacitance is held at its last value
+ * (curves/coss-table.ts), an extrapolation the engineer should know about.
+ */
+export function cossTableNotices(design: Design): DesignNotice[] {
+  const swingV = design.topology.kind === 'buck' ? design.spec.vinMaxV : design.spec.voutV;
+  const out: DesignNotice[] = [];
+  for (const role of ['switch', 'rectifier'] as const) {
+    const part = design.parts[role];
+    if (part.kind !== 'mosfet' || part.outputCapacitance.kind !== 'table') continue;
+    const points = part.outputCapacitance.points;
+    const lastV = points[points.length - 1]!.vdsV;
+    if (lastV >= swingV) continue;
+    out.push({
+      path: `parts.${role}.outputCapacitance.points`,
+      value: lastV,
+      message: `The Coss(VDS) table of parts.${role} ends at ${formatEngineering(lastV, 'V', 4)} but the switch node swings to ${formatEngineering(swingV, 'V', 4)}: above the last point Coss is held at its last value (an extrapolation); add points up to ${formatEngineering(swingV, 'V', 4)} from the datasheet curve.`,
+    });
   }
   return out;
 }
@@ -77,6 +101,7 @@ export function designNotices(design: Design): DesignNotice[] {
   }
   const reach = dutyReachNotice(design);
   if (reach) out.push(reach);
+  out.push(...cossTableNotices(design));
   if (topology.rectifier === 'diode' && (topology.deadTimeBeforeOnS > 0 || topology.deadTimeAfterOffS > 0))
     out.push({ path: 'topology.deadTimeBeforeOnS', value: topology.deadTimeBeforeOnS, message: 'Dead times apply to synchronous rectifiers only; with a diode they are ignored.' });
   return out;

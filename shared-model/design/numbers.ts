@@ -45,6 +45,7 @@ export const RANGES = {
   // --- voltages ---
   railV: { min: 0.2, max: 2000, why: `Input or output rail, 200 mV … 2 kV (${OURS}): from a sub-volt processor core rail or single-cell input to a 1.5 kV photovoltaic string with margin.` },
   ratingV: { min: 1, max: 10_000, why: `Voltage rating or stated-at voltage, 1 V … 10 kV (${OURS}): the lowest-voltage capacitors and MOSFETs are rated a few volts; no discrete part reaches 10 kV.` },
+  curveV: { min: 0, max: 10_000, why: `Voltage of a point on a datasheet curve, 0 V … 10 kV (${OURS}): curves start at 0 V; no discrete part reaches 10 kV.` },
   gateV: { min: 0.1, max: 30, why: `Gate threshold or plateau, 0.1 V … 30 V (${TRADE}: thresholds of GaN, silicon and SiC parts lie between about 0.5 V and 6 V, gate ratings below 30 V).` },
   driveV: { min: 1, max: 30, why: `Gate-drive voltage, 1 V … 30 V (${TRADE}: logic-level drives from 2.5 V, SiC drives up to 20 V; 30 V leaves margin).` },
   forwardV: { min: 0.05, max: 5, why: `Forward drop, 50 mV … 5 V (${TRADE}: Schottky knees from about 0.15 V, SiC body diodes and GaN reverse conduction up to about 4 V).` },
@@ -111,6 +112,13 @@ export const RANGES = {
   rippleRatio: { min: 0.01, max: 4, why: `Inductor ripple target as a fraction of the rated inductor current, 0.01 … 4 (${TRADE}: 0.2–0.4 in CCM, 2 at the DCM boundary).` },
   derating: { min: 0.1, max: 1, why: `Fraction of a rating that may be used, 0.1 … 1 (${TRADE}: 0.5–0.9).` },
   bankCount: { min: 1, max: 100, integer: true, why: `Capacitors in parallel, 1 … 100 (${OURS}).` },
+  // --- bench measurements and calibration (shared-model/measurement, shared-model/fit) ---
+  measuredLoadA: { min: 0, minExclusive: true, max: 1000, why: `Measured load current, above 0 up to 1 kA (${OURS}: the rated-load range; a point at no load has no efficiency).` },
+  measuredPowerW: { min: 0, minExclusive: true, max: 100_000, why: `Measured input power, above 0 up to 100 kW (${OURS}: a few hundred A at a few hundred V with margin).` },
+  measuredCurrentA: { min: 0, minExclusive: true, max: 2000, why: `Measured input current, above 0 up to 2 kA (${OURS}).` },
+  measuredC: { min: -100, max: 300, why: `Measured temperature, −100 °C … 300 °C (${OURS}: the range of thermocouples and cameras used on a bench).` },
+  measuredPercent: { min: 0, minExclusive: true, max: 100, maxExclusive: true, why: 'Efficiency in percent, strictly between 0 % and 100 %.' },
+  fittedValue: { min: -1e12, max: 1e12, why: `A fitted parameter or its interval bound, in the parameter's own unit (${OURS}: multipliers of order one, currents in A).` },
   lifeHours: { min: 1, max: 1e7, why: `Life in hours, 1 h … 10 million h (${OURS}).` },
 } as const satisfies Record<string, QuantityRange>;
 

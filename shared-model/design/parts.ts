@@ -34,7 +34,18 @@ export const rdsTemperatureLawSchema = z.discriminatedUnion('law', [
   }),
 ]);
 
-/** Output capacitance: a small-signal Coss at a voltage, or charge and energy at a voltage. */
+/** One point of a Coss(VDS) curve digitised from a datasheet. */
+export const cossPointSchema = z.object({ vdsV: q('curveV'), cossF: q('parasiticF') });
+export type CossPoint = z.infer<typeof cossPointSchema>;
+
+/** Fewest and most points of a digitised curve. */
+export const CURVE_POINTS = { min: 3, max: 200 } as const;
+
+/**
+ * Output capacitance: a small-signal Coss at a voltage, charge and energy at a voltage, or the Coss(VDS)
+ * curve as a table (VDS rising, Coss never rising: checked in rules-parts.ts; Qoss and Eoss by
+ * integration, curves/coss-table.ts).
+ */
 export const outputCapacitanceSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('capacitance'), cossF: q('parasiticF'), atV: q('ratingV') }),
   z.object({
@@ -42,6 +53,16 @@ export const outputCapacitanceSchema = z.discriminatedUnion('kind', [
     qossC: q('outputChargeC'),
     eossJ: q('energyJ'),
     atV: q('ratingV'),
+  }),
+  z.object({
+    kind: z.literal('table'),
+    points: z
+      .array(cossPointSchema)
+      .min(CURVE_POINTS.min)
+      .max(CURVE_POINTS.max)
+      .describe(
+        'Coss(VDS) curve digitised from the datasheet, 3 to 200 points: VDS strictly rising, Coss never rising with VDS; straight lines between points, the first Coss held below the first point and the last held above the last point (a design notice says when the switched voltage lies above the table). Qoss = ∫C dv and Eoss = ∫v·C dv are integrated from it.',
+      ),
   }),
 ]);
 

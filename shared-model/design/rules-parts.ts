@@ -5,6 +5,8 @@
  *   Qgs + Qgd ≤ Qg and Qgs2 ≤ Qgs (Qgs2 is the part of Qgs after the threshold); one of Qgs2 or Qgs is
  *   needed to estimate the current-rise time [common practice: datasheet gate-charge curve].
  *   A two-point RDS(on) law needs its hot point above 25 °C.
+ *   A Coss(VDS) table rises in VDS point by point and Coss never rises with VDS (the depletion region
+ *   only widens with voltage: Sze & Ng, Physics of Semiconductor Devices, 3rd ed., §2.3 [memory]).
  *   Inductance falls with current (roll-off ≤ L); the magnetic path length le = Ve/Ae of a real core
  *   lies between 1 mm and 1 m [common practice].
  *   A resistor's derating starts before its zero-power temperature.
@@ -14,6 +16,30 @@
 import type { Problem } from './problems.ts';
 import { inUnit, problem } from './problems.ts';
 import { at, num, str } from './read.ts';
+import { tableShapeProblem } from '../curves/table.ts';
+
+/** The Coss(VDS) table of a MOSFET at `p`: VDS rising, Coss positive and never rising. */
+function cossTable(doc: unknown, p: string, out: Problem[]): void {
+  if (str(doc, `${p}.outputCapacitance.kind`) !== 'table') return;
+  const points = at(doc, `${p}.outputCapacitance.points`);
+  if (!Array.isArray(points)) return;
+  const xs = points.map((point) => num(point, 'vdsV') ?? Number.NaN);
+  const ys = points.map((point) => num(point, 'cossF') ?? Number.NaN);
+  if (xs.some((x) => !Number.isFinite(x)) || ys.some((y) => !Number.isFinite(y))) return; // the schema reports these
+  const bad = tableShapeProblem(xs, ys, 'non-increasing');
+  if (!bad) return;
+  const i = bad.index;
+  const where = `${p}.outputCapacitance.points[${i}]`;
+  const here = `(${inUnit(xs[i]!, 'vdsV')}, ${inUnit(ys[i]!, 'cossF')})`;
+  const before = i > 0 ? ` after (${inUnit(xs[i - 1]!, 'vdsV')}, ${inUnit(ys[i - 1]!, 'cossF')})` : '';
+  const [key, value, allowed, reason] =
+    bad.kind === 'not-positive'
+      ? ['cossF', ys[i]!, 'cossF > 0', 'its Coss must be above zero']
+      : bad.kind === 'x-not-rising'
+        ? ['vdsV', xs[i]!, `vdsV > ${inUnit(xs[i - 1]!, 'vdsV')}`, 'each point must lie at a higher VDS than the one before it (sort the rows by voltage)']
+        : ['cossF', ys[i]!, `cossF ≤ ${inUnit(ys[i - 1]!, 'cossF')}`, 'Coss must not rise with VDS (the datasheet curve falls as the voltage rises; check the columns are VDS then Coss)'];
+  out.push(problem(`${where}.${key}`, value, allowed, `Point ${i + 1} ${here}${before} of the Coss(VDS) table ${p}.outputCapacitance: ${reason}.`));
+}
 
 function mosfet(doc: unknown, role: string, out: Problem[]): void {
   const p = `parts.${role}`;
@@ -42,6 +68,7 @@ function mosfet(doc: unknown, role: string, out: Problem[]): void {
   if (qgs !== undefined && qgs2 !== undefined && qgs2 > qgs)
     out.push(problem(`${p}.qgs2C`, qgs2, `qgs2C ≤ ${p}.qgsC (${inUnit(qgs, 'qgsC')})`,
       `${p}.qgs2C (${inUnit(qgs2, 'qgs2C')}) is the part of qgsC after the threshold, so it cannot exceed qgsC (${inUnit(qgs, 'qgsC')}).`));
+  cossTable(doc, p, out);
   const hot = num(doc, `${p}.rdsTemperatureLaw.hotC`);
   if (str(doc, `${p}.rdsTemperatureLaw.law`) === 'two-point' && hot !== undefined && hot <= 25)
     out.push(problem(`${p}.rdsTemperatureLaw.hotC`, hot, 'hotC > 25 °C',

@@ -10,6 +10,7 @@
  *   a thermal path for it. An output-ripple target must be smaller than the output voltage.
  */
 import type { Problem } from './problems.ts';
+import { topologyOfKind } from '../topology/registry.ts';
 import { inUnit, problem } from './problems.ts';
 import { at, num, str } from './read.ts';
 
@@ -33,20 +34,20 @@ function inputVoltageOrder(doc: unknown, out: Problem[]): void {
 }
 
 function conversionDirection(doc: unknown, out: Problem[]): void {
-  const kind = str(doc, 'topology.kind');
+  const topology = topologyOfKind(str(doc, 'topology.kind'));
   const vout = num(doc, 'spec.voutV');
   if (vout === undefined) return;
   const min = num(doc, 'spec.vinMinV');
   const max = num(doc, 'spec.vinMaxV');
-  if (kind === 'buck' && min !== undefined && vout >= min) {
+  if (topology?.steps === 'down' && min !== undefined && vout >= min) {
     const allowed = `voutV < spec.vinMinV (${inUnit(min, 'spec.vinMinV')})`;
     out.push(problem('spec.voutV', vout, allowed,
-      `A buck only steps down: spec.voutV (${inUnit(vout, 'spec.voutV')}) must be below the lowest input voltage spec.vinMinV (${inUnit(min, 'spec.vinMinV')}).`));
+      `A ${topology.kind} only steps down: spec.voutV (${inUnit(vout, 'spec.voutV')}) must be below the lowest input voltage spec.vinMinV (${inUnit(min, 'spec.vinMinV')}).`));
   }
-  if (kind === 'boost' && max !== undefined && vout <= max) {
+  if (topology?.steps === 'up' && max !== undefined && vout <= max) {
     const allowed = `voutV > spec.vinMaxV (${inUnit(max, 'spec.vinMaxV')})`;
     out.push(problem('spec.voutV', vout, allowed,
-      `A boost only steps up: spec.voutV (${inUnit(vout, 'spec.voutV')}) must be above the highest input voltage spec.vinMaxV (${inUnit(max, 'spec.vinMaxV')}).`));
+      `A ${topology.kind} only steps up: spec.voutV (${inUnit(vout, 'spec.voutV')}) must be above the highest input voltage spec.vinMaxV (${inUnit(max, 'spec.vinMaxV')}).`));
   }
   const ripple = num(doc, 'spec.targets.outputRippleV');
   if (ripple !== undefined && ripple >= vout)
@@ -62,12 +63,12 @@ function deadTimes(doc: unknown, out: Problem[]): void {
   const dmax = num(doc, 'spec.maxDuty');
   const vout = num(doc, 'spec.voutV');
   const vinMin = num(doc, 'spec.vinMinV');
-  const kind = str(doc, 'topology.kind');
+  const topology = topologyOfKind(str(doc, 'topology.kind'));
   if (before === undefined || after === undefined || fs === undefined || fs <= 0 || dmax === undefined) return;
-  // Ideal duty at the lowest input (the longest on time the design needs): buck Vo/Vin, boost 1 − Vin/Vo.
+  // Ideal duty at the lowest input (the longest on time the design needs; the topology record).
   let duty = dmax;
   if (vout !== undefined && vinMin !== undefined && vinMin > 0 && vout > 0) {
-    const ideal = kind === 'buck' ? vout / vinMin : kind === 'boost' ? 1 - vinMin / vout : dmax;
+    const ideal = topology ? topology.idealDuty(vinMin, vout) : dmax;
     if (ideal > 0 && ideal < 1) duty = Math.min(ideal, dmax);
   }
   const offTime = (1 - duty) / fs;

@@ -28,6 +28,8 @@
 import { qgs2Of, turnOffGateCurrentA, turnOnGateCurrentA } from '../losses/gate-charge.ts';
 import { controllerSchema, mosfetSchema } from './parts.ts';
 import type { Problem } from './problems.ts';
+import { topologyOfKind } from '../topology/registry.ts';
+import type { ConverterTopology } from '../topology/types.ts';
 import { inUnit, problem } from './problems.ts';
 import { at, num, str } from './read.ts';
 
@@ -37,7 +39,7 @@ export const MAX_RIPPLE_OVER_CURRENT = 100;
 export const MAX_SENSE_DROP_FRACTION = 0.5;
 
 interface IdealPoint {
-  kind: 'buck' | 'boost';
+  topology: ConverterTopology;
   vinV: number;
   voutV: number;
   loadA: number;
@@ -51,19 +53,19 @@ interface IdealPoint {
 
 /** The ideal CCM point at the input voltage found at `vinPath` and rated load; undefined when unreadable. */
 function idealPoint(doc: unknown, vinPath: string): IdealPoint | undefined {
-  const kind = str(doc, 'topology.kind');
+  const topology = topologyOfKind(str(doc, 'topology.kind'));
   const vinV = num(doc, vinPath);
   const voutV = num(doc, 'spec.voutV');
   const loadA = num(doc, 'spec.ratedLoadA');
   const fs = num(doc, 'spec.switchingFrequencyHz');
-  if (vinV === undefined || voutV === undefined || loadA === undefined || fs === undefined) return undefined;
+  if (topology === undefined || vinV === undefined || voutV === undefined || loadA === undefined || fs === undefined) return undefined;
   if (!(vinV > 0 && voutV > 0 && loadA > 0 && fs > 0)) return undefined;
   const periodS = 1 / fs;
-  if (kind === 'buck' && voutV < vinV)
-    return { kind, vinV, voutV, loadA, periodS, duty: voutV / vinV, inductorA: loadA, onVoltsV: vinV - voutV };
-  if (kind === 'boost' && voutV > vinV)
-    return { kind, vinV, voutV, loadA, periodS, duty: 1 - vinV / voutV, inductorA: (loadA * voutV) / vinV, onVoltsV: vinV };
-  return undefined;
+  const duty = topology.idealDuty(vinV, voutV);
+  if (!(duty > 0 && duty < 1)) return undefined;
+  // Charge balance (topology/types.ts): the output receives IL over the delivering intervals.
+  const inductorA = topology.intervals.on.toOutput ? loadA : loadA / (1 - duty);
+  return { topology, vinV, voutV, loadA, periodS, duty, inductorA, onVoltsV: topology.idealOnVoltsV(vinV, voutV) };
 }
 
 /** Ideal CCM peak-to-peak inductor ripple, A. */
@@ -113,7 +115,8 @@ function edgesFitPeriod(doc: unknown, out: Problem[]): void {
 
 /** Charge the output bank gives and takes back each period at the ideal point, C (see the header). */
 function bankCharge(p: IdealPoint, inductanceH: number): number {
-  if (p.kind === 'boost') return p.loadA * p.duty * p.periodS;
+  // The on interval feeds no output (boost): the bank alone carries the load for D·T.
+  if (!p.topology.intervals.on.toOutput) return p.loadA * p.duty * p.periodS;
   const ripple = rippleOf(p, inductanceH);
   if (ripple <= 2 * p.loadA) return (ripple * p.periodS) / 8;
   const peak = Math.sqrt(2 * p.loadA * ripple);
@@ -131,7 +134,7 @@ function outputBank(doc: unknown, out: Problem[]): void {
   if (swing < p.voutV) return;
   const path = 'parts.outputCapacitor.part.capacitanceF';
   const minC = charge / (p.voutV * n);
-  const rc = p.kind === 'boost'
+  const rc = !p.topology.intervals.on.toOutput
     ? ` (the load resistance times the bank, ${inUnit(((p.voutV / p.loadA) * n * c), 'deadTimeBeforeOnS')}, is not longer than the on time ${inUnit(p.duty * p.periodS, 'deadTimeBeforeOnS')})`
     : '';
   out.push(problem(path, c, `capacitanceF ≥ ${inUnit(minC, path)} with parts.outputCapacitor.count ${n}`,

@@ -7,6 +7,7 @@
 import { z } from 'zod';
 import { capacitorSchema, controllerSchema, diodeSchema, inductorSchema, mosfetSchema, resistorSchema } from './parts.ts';
 import { quantity as q } from './numbers.ts';
+import { calibrationSchema, measurementSchema } from '../measurement/schema.ts';
 
 export const DESIGN_FORMAT = 'wattledger.design';
 export const DESIGN_VERSION = 1;
@@ -21,7 +22,11 @@ export const specificationSchema = z.object({
   ambientC: q('ambientC'),
   /** Largest duty cycle the controller can command (0.05 ≤ maxDuty < 1). */
   maxDuty: q('maxDuty'),
-  /** Optional targets the results are checked against. */
+  /**
+   * Optional targets. Only `efficiencyAtRated` is read today: the report's summary says whether the rated
+   * point meets it and the Monte Carlo counts the samples that do. The two ripple targets are stored but
+   * not yet checked against any result (the sizing checks, issue 11, will).
+   */
   targets: z
     .object({
       efficiencyAtRated: q('efficiency').optional(),
@@ -162,6 +167,10 @@ export const designSchema = z.object({
   parts: partsSchema,
   thermal: thermalSchema,
   margins: marginsSchema,
+  /** A bench measurement saved with the design (optional; shared-model/measurement). */
+  measurements: measurementSchema.optional(),
+  /** Set when fitted values were adopted: the measurement's hash and the values (shared-model/fit). */
+  calibration: calibrationSchema.optional(),
 });
 
 export type Specification = z.infer<typeof specificationSchema>;

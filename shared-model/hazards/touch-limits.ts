@@ -5,7 +5,7 @@
  * with low confidence"): each row says so (`recalled: true`) and names its standard and clause. Users
  * must confirm the limit against the current edition of the standard that applies to their product.
  * Contact assumptions (design.thermal.contact):
- *   'brief'         — a handle or surface touched or held briefly;
+ *   'brief'         — a handle held or touched for short periods, or an external surface;
  *   'held'          — held continuously in normal use;
  *   'surface-1min'  — skin contact with the surface for up to 1 minute;
  *   'surface-10min' — up to 10 minutes;

@@ -18,13 +18,16 @@ import { designNetwork, type DesignNetwork } from '../thermal/from-design.ts';
 import { RUNAWAY_BAND_K, ThermalWork } from '../thermal/fixed-point.ts';
 import { slotsOf, type Slots } from './slots.ts';
 import type { TouchPick } from './hazards.ts';
+import { topologyOf } from '../topology/registry.ts';
+import type { ConverterTopology } from '../topology/types.ts';
 
 const NO_SCRATCH = new Float64Array(0);
 
 export interface LedgerContext {
   design: Design;
   synchronous: boolean;
-  boost: boolean;
+  /** The design's topology record. */
+  topology: ConverterTopology;
   frequencyHz: number;
   vinV: number;
   net: DesignNetwork;
@@ -93,7 +96,7 @@ export function ledgerContext(design: Design, vinV = design.spec.vinNomV, freque
   return {
     design,
     synchronous,
-    boost: design.topology.kind === 'boost',
+    topology: topologyOf(design),
     frequencyHz,
     vinV,
     net,

@@ -153,7 +153,8 @@ export function fillRectifierInputs(ctx: LedgerContext, op: PointView, T: Float6
     l.leakageA = leakageAt(rect, tR);
     l.reverseV = op.stress.rectifierV;
     l.reverseFraction = op.dutyCycle;
-    l.idleV = ctx.boost ? op.voutV - ctx.vinV : op.voutV;
+    const idle = ctx.topology.rectifierIdleBlocks;
+    l.idleV = idle.input * ctx.vinV + idle.output * op.voutV;
     l.idleFraction = op.idleFraction;
     l.temperatureC = tR;
   }

@@ -13,7 +13,7 @@
  * Source: docs/methods.md §1 (exact RMS of straight-line pieces).
  */
 import type { Circuit } from '../operating-point/circuit.ts';
-import { switchStressV, turnOffVoltageV, turnOnVoltageV } from '../operating-point/assemble.ts';
+import { rectifierStressV, switchStressV, turnOffVoltageV, turnOnVoltageV } from '../operating-point/assemble.ts';
 import type { Shape } from '../operating-point/shape.ts';
 import type { Conditions, ConductionMode, Segment, SwitchingEdge } from '../operating-point/types.ts';
 import type { Warning } from '../warnings.ts';
@@ -153,17 +153,13 @@ export function leanPointAt(c: Circuit, s: Shape, p: LeanPoint, asRecord = false
   intervalStats(p.stats.switch, v, r);
   v[3] = 0; v[4] = 0; v[5] = hi; v[6] = lo; v[7] = 0;
   intervalStats(p.stats.rectifier, v, r);
-  if (c.boost) {
-    v[3] = lo - iin; v[4] = hi - iin; v[5] = hi - iin; v[6] = lo - iin; v[7] = -iin;
-    intervalStats(p.stats.inputCapacitor, v, r);
-    v[3] = -io; v[4] = -io; v[5] = hi - io; v[6] = lo - io; v[7] = -io;
-    intervalStats(p.stats.outputCapacitor, v, r);
-  } else {
-    v[3] = lo - iin; v[4] = hi - iin; v[5] = -iin; v[6] = -iin; v[7] = -iin;
-    intervalStats(p.stats.inputCapacitor, v, r);
-    v[3] = lo - io; v[4] = hi - io; v[5] = hi - io; v[6] = lo - io; v[7] = -io;
-    intervalStats(p.stats.outputCapacitor, v, r);
-  }
+  // Capacitor currents from the topology record's intervals (as assemble.ts).
+  v[3] = lo - iin; v[4] = hi - iin; v[7] = -iin;
+  if (c.offFromInput) { v[5] = hi - iin; v[6] = lo - iin; } else { v[5] = -iin; v[6] = -iin; }
+  intervalStats(p.stats.inputCapacitor, v, r);
+  v[5] = hi - io; v[6] = lo - io; v[7] = -io;
+  if (c.onToOutput) { v[3] = lo - io; v[4] = hi - io; } else { v[3] = -io; v[4] = -io; }
+  intervalStats(p.stats.outputCapacitor, v, r);
   if (c.senseAt === 'switch') {
     v[3] = lo; v[4] = hi; v[5] = 0; v[6] = 0; v[7] = 0;
   } else if (c.senseAt === 'inductor') {
@@ -185,7 +181,7 @@ export function leanPointAt(c: Circuit, s: Shape, p: LeanPoint, asRecord = false
   off.currentA = hi;
   off.voltageV = turnOffVoltageV(c, s, vo1);
   off.hard = hi > 0;
-  p.stress.rectifierV = c.boost ? vo1 : c.vinV;
+  p.stress.rectifierV = rectifierStressV(c, vo1);
   if (asRecord) {
     if (conditions) p.conditions = conditions;
     p.outputPowerW = vo * io;

@@ -7,8 +7,9 @@
  * `source`: the loss is paid by the source at an unchanged duty cycle, so it goes to the solver's
  * `sourceLossOf` (added to the source current) rather than to `lossOf` (which moves the duty):
  *   - controller bias and gate drive (supplied from the input beside the power stage);
- *   - in a buck, the charge pulses of Coss, junction capacitance, reverse recovery and diode leakage, which
- *     flow from Vin through the switch, bypassing the inductor;
+ *   - where the topology record says `chargePulsesFromSource` (buck), the charge pulses of Coss, junction
+ *     capacitance, reverse recovery and diode leakage, which flow from Vin through the switch, bypassing the
+ *     inductor;
  *   - the input capacitor's ESR (the solver holds the input stiff);
  *   - losses of the ripple: core loss, AC winding loss, and the slope part of every resistive conduction
  *     loss (R·Σ(t/T)·Δi²/12, split off in the kernel). For a linear circuit these are paid by the curvature
@@ -23,6 +24,7 @@
  */
 import type { Design, Role } from '../design/schema.ts';
 import type { LossModel } from '../losses/model.ts';
+import { topologyOf } from '../topology/registry.ts';
 import { capacitorEsr, type CapacitorEsrInputs } from '../losses/capacitor-esr.ts';
 import { conduction, type ConductionInputs } from '../losses/conduction.ts';
 import { coreLoss, type CoreLossInputs } from '../losses/core-loss.ts';
@@ -93,7 +95,8 @@ export interface Slots {
 }
 
 export function slotsOf(design: Design, synchronous: boolean): Slots {
-  const buck = design.topology.kind === 'buck';
+  // The switch-node charge pulses: paid by the source where they bypass the inductor (topology record).
+  const pulsesFromSource = topologyOf(design).chargePulsesFromSource;
   const rect = design.parts.rectifier;
   const s: Slots = {
     swConduction: slot('switch', conduction, conductionIn()),
@@ -103,7 +106,7 @@ export function slotsOf(design: Design, synchronous: boolean): Slots {
     swTurnOff: slot('switch', turnOff, {
       voltageV: 0, currentA: 0, frequencyHz: 0, plateauV: 0, pullDownOhm: 0, gateOhm: 0, qgs2C: 0, qgdC: 0,
     }),
-    swCoss: slot('switch', outputCapacitance, { voltageV: 0, frequencyHz: 0, ctrlEossJ: 0, syncQossC: 0, syncEossJ: 0 }, buck),
+    swCoss: slot('switch', outputCapacitance, { voltageV: 0, frequencyHz: 0, ctrlEossJ: 0, syncQossC: 0, syncEossJ: 0 }, pulsesFromSource),
     swGate: slot('switch', gateDrive, gateIn(), true),
     windingDc: slot('inductor', windingDc, { irmsA: 0, dcrOhm: 0, temperatureC: 0 }),
     core: slot('inductor', coreLoss, { kiWPerM3: 0, alpha: 1, beta: 2, veM3: 0, fluxPerAmpT: 0, segments: [] }, true),
@@ -115,20 +118,20 @@ export function slotsOf(design: Design, synchronous: boolean): Slots {
   };
   if (synchronous) {
     s.swDeadTime = slot('switch', deadTime, deadIn());
-    s.swRecovery = slot('switch', reverseRecovery, recoveryIn(), buck);
+    s.swRecovery = slot('switch', reverseRecovery, recoveryIn(), pulsesFromSource);
     s.rectConduction = slot('rectifier', conduction, conductionIn());
     s.rectGate = slot('rectifier', gateDrive, gateIn(), true);
     s.rectDeadTime = slot('rectifier', deadTime, deadIn());
   } else {
     if (rect.kind === 'diode' && rect.technology === 'schottky') {
-      s.swJunction = slot('switch', junctionCapacitance, { cjF: 0, voltageV: 0, frequencyHz: 0 }, buck);
+      s.swJunction = slot('switch', junctionCapacitance, { cjF: 0, voltageV: 0, frequencyHz: 0 }, pulsesFromSource);
     } else {
-      s.swRecovery = slot('switch', reverseRecovery, recoveryIn(), buck);
+      s.swRecovery = slot('switch', reverseRecovery, recoveryIn(), pulsesFromSource);
     }
     s.diodeForward = slot('rectifier', diodeForward, { vf0V: 0, rdOhm: 0, iavgA: 0, irmsA: 0, temperatureC: 0 });
     s.diodeLeakage = slot('rectifier', reverseLeakage, {
       leakageA: 0, reverseV: 0, reverseFraction: 0, idleV: 0, idleFraction: 0, temperatureC: 0,
-    }, buck);
+    }, pulsesFromSource);
   }
   if (design.parts.inductor.acWinding.kind !== 'none') {
     s.windingAc = slot('inductor', windingAc, { acRmsA: 0, dcrOhm: 0, factor: 1, temperatureC: 0 }, true);

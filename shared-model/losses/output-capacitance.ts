@@ -11,10 +11,13 @@
  * Qoss = Coss·V and Eoss = ½·Coss·V²; a charge/energy pair is scaled with constant charge- and
  * energy-equivalent capacitances, Qoss(V) = Qoss(V0)·V/V0 and Eoss(V) = Eoss(V0)·(V/V0)². Exact at V0;
  * below V0 a strongly non-linear Coss holds more charge than this scaling says (model limit).
+ * A Coss(VDS) table (datasheet curve) is integrated instead: Qoss = ∫C dv, Eoss = ∫v·C dv
+ * (curves/coss-table.ts), which keeps the extra charge a non-linear Coss holds at low voltage.
  * A soft (zero-voltage) turn-on has no Coss loss: the caller passes V = 0.
  * Source: docs/methods.md §4 (half-bridge form, check values); Erickson & Maksimović 2nd ed. ch. 4 [memory].
  */
 import type { OutputCapacitance } from '../design/parts.ts';
+import { cossTableAt } from '../curves/coss-table.ts';
 import { input, nonNegativeFinite, type LossModel } from './model.ts';
 
 export interface OutputCapacitanceInputs {
@@ -28,15 +31,17 @@ export interface OutputCapacitanceInputs {
   syncEossJ: number;
 }
 
-/** Qoss of a FET at voltage V, C, scaled as stated in the header. */
+/** Qoss of a FET at voltage V, C, scaled as stated in the header (a table: integrated). */
 export function qossAt(spec: OutputCapacitance, voltageV: number): number {
   const v = voltageV > 0 ? voltageV : 0;
+  if (spec.kind === 'table') return cossTableAt(spec.points, v).qossC;
   return spec.kind === 'capacitance' ? spec.cossF * v : (spec.qossC * v) / spec.atV;
 }
 
-/** Eoss of a FET at voltage V, J, scaled as stated in the header. */
+/** Eoss of a FET at voltage V, J, scaled as stated in the header (a table: integrated). */
 export function eossAt(spec: OutputCapacitance, voltageV: number): number {
   const v = voltageV > 0 ? voltageV : 0;
+  if (spec.kind === 'table') return cossTableAt(spec.points, v).eossJ;
   if (spec.kind === 'capacitance') return 0.5 * spec.cossF * v * v;
   const r = v / spec.atV;
   return spec.eossJ * r * r;
@@ -49,7 +54,7 @@ export function cossAt(spec: OutputCapacitance, voltageV: number): { qossC: numb
 
 export const outputCapacitance: LossModel<OutputCapacitanceInputs> = {
   mechanism: 'output capacitance',
-  formula: '(Eoss,ctrl(V) + V · Qoss,sync(V) − Eoss,sync(V)) · fs; sync terms are 0 without a synchronous FET; Qoss ∝ V and Eoss ∝ V² from the stated voltage',
+  formula: '(Eoss,ctrl(V) + V · Qoss,sync(V) − Eoss,sync(V)) · fs; sync terms are 0 without a synchronous FET; Qoss ∝ V and Eoss ∝ V² from the stated voltage, or ∫C dv and ∫v·C dv of a Coss(VDS) table',
   watts: (x) =>
     nonNegativeFinite((x.ctrlEossJ + x.voltageV * x.syncQossC - x.syncEossJ) * x.frequencyHz),
   describe: (x) => [

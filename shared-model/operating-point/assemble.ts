@@ -5,14 +5,17 @@
  * idle (1 − D − D2)·T in DCM):
  *   inductor: valley → peak → valley (DCM: 0 → Ipk → 0 → 0)
  *   switch = inductor during the on interval; rectifier = inductor during the off interval
- *   input capacitor: buck, switch current − source DC; boost, inductor current − its mean
- *   output capacitor: buck, inductor current − Io; boost, rectifier current − Io
+ *   input capacitor: the inductor current in the intervals that draw from the input − source DC
+ *     (buck: switch current − Iin; boost: inductor current − its mean)
+ *   output capacitor: the inductor current in the intervals that deliver to the output − Io
+ *     (buck: inductor current − Io; boost: rectifier current − Io)
  *   sense resistor: source DC (input), switch, inductor, or Io (output).
  * Edges: turn-on at the valley (0 in DCM, not hard; soft too when the valley is negative, since the
  * reverse current discharges the switch node first), turn-off at the peak. Blocking voltages: buck
  * Vin + rectifier drop; boost Vo + rectifier drop (in DCM at zero current: the swing when the idle interval
  * starts; the ringing toward the resting value is not modelled, a conservative choice).
- * Boost small signal (CCM): ωz = D'²R/L, current-mode output pole ωp = 2/(R·C) (docs/methods.md §13).
+ * Blocking voltages and small-signal figures come from the topology record (topology/boost.ts: ωz = D'²R/L,
+ * current-mode output pole ωp = 2/(R·C), docs/methods.md §13).
  * Source: Erickson & Maksimović 2nd ed. ch. 2, 5 and 8 [memory for chapters]; docs/methods.md §1, §2, §13.
  */
 import type { Circuit } from './circuit.ts';
@@ -53,18 +56,23 @@ export function rectifierDrop(c: Circuit, i: number): number {
  */
 export function turnOnVoltageV(c: Circuit, s: Shape, vo1: number): number {
   const drop = rectifierDrop(c, s.dcm ? 0 : s.iv);
-  return c.boost ? vo1 + drop : s.vin1 + drop;
+  return c.switchIn * s.vin1 + c.switchOut * vo1 + drop;
 }
 
 /** Voltage the control switch blocks just after it turns off (at the peak current). */
 export function turnOffVoltageV(c: Circuit, s: Shape, vo1: number): number {
   const drop = rectifierDrop(c, s.ipk);
-  return c.boost ? vo1 + drop : s.vin1 + drop;
+  return c.switchIn * s.vin1 + c.switchOut * vo1 + drop;
 }
 
-/** Voltage the control switch blocks, for its rating (boost: Vo' + rectifier drop at the peak; buck: Vin + that drop). */
+/** Voltage the control switch blocks, for its rating (the record's switchBlocks at Vin and Vo', plus the rectifier drop at the peak). */
 export function switchStressV(c: Circuit, s: Shape, vo1: number): number {
-  return c.boost ? vo1 + rectifierDrop(c, s.ipk) : c.vinV + rectifierDrop(c, s.ipk);
+  return c.switchIn * c.vinV + c.switchOut * vo1 + rectifierDrop(c, s.ipk);
+}
+
+/** Voltage the rectifier blocks while the switch conducts (the record's rectifierBlocks at Vin and Vo'). */
+export function rectifierStressV(c: Circuit, vo1: number): number {
+  return c.rectIn * c.vinV + c.rectOut * vo1;
 }
 
 export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions, meta: PointMeta): OperatingPoint {
@@ -79,12 +87,13 @@ export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions
   const sw = wave(tOn, tOff, tIdle, lo, hi, 0, 0, 0);
   const rect = wave(tOn, tOff, tIdle, 0, 0, hi, lo, 0);
   const iin = s.iin;
-  const inputCapacitor = c.boost
+  // Capacitor currents from the record's intervals: input [from input]·iL − Iin, output [to output]·iL − Io.
+  const inputCapacitor = c.offFromInput
     ? wave(tOn, tOff, tIdle, lo - iin, hi - iin, hi - iin, lo - iin, -iin)
     : wave(tOn, tOff, tIdle, lo - iin, hi - iin, -iin, -iin, -iin);
-  const outputCapacitor = c.boost
-    ? wave(tOn, tOff, tIdle, -io, -io, hi - io, lo - io, -io)
-    : wave(tOn, tOff, tIdle, lo - io, hi - io, hi - io, lo - io, -io);
+  const outputCapacitor = c.onToOutput
+    ? wave(tOn, tOff, tIdle, lo - io, hi - io, hi - io, lo - io, -io)
+    : wave(tOn, tOff, tIdle, -io, -io, hi - io, lo - io, -io);
   let sense: Waveform;
   switch (c.senseAt) {
     case 'switch':
@@ -105,7 +114,6 @@ export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions
   const inductorStats: CurrentStats = waveformStats(inductor);
   const vo = s.vo;
   const vo1 = vo + c.rOutputSenseOhm * io;
-  const vin = c.vinV;
   const turnOnV = turnOnVoltageV(c, s, vo1);
   const turnOffV = turnOffVoltageV(c, s, vo1);
   const ripple = capacitorVoltageRipple(outputCapacitor, c.outputCapacitanceF, c.esrOhm);
@@ -144,17 +152,13 @@ export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions
       turnOn: { currentA: lo, voltageV: turnOnV, hard: !s.dcm && lo > 0 },
       turnOff: { currentA: hi, voltageV: turnOffV, hard: hi > 0 },
     },
-    stress: { switchV: switchStressV(c, s, vo1), rectifierV: c.boost ? vo1 : vin },
+    stress: { switchV: switchStressV(c, s, vo1), rectifierV: rectifierStressV(c, vo1) },
     outputRipple: ripple,
     warnings: meta.warnings,
   };
-  if (c.boost && !s.dcm && io > 0) {
-    const r = vo / io;
-    const dp = 1 - s.d;
-    op.smallSignal = {
-      rhpZeroHz: (dp * dp * r) / s.inductanceH / (2 * Math.PI),
-      outputPoleHz: 2 / (r * c.outputCapacitanceF) / (2 * Math.PI),
-    };
+  if (!s.dcm && io > 0) {
+    const figures = c.topology.smallSignal(s.d, vo / io, s.inductanceH, c.outputCapacitanceF);
+    if (figures) op.smallSignal = figures;
   }
   return op;
 }

@@ -4,6 +4,9 @@
  * Each conduction interval sees an inductor voltage that is affine in the interval's mean current ī:
  *   on interval (control switch conducts):   vL = +(Eon − Ron · ī)
  *   off interval (rectifier conducts):       vL = −(Eoff + Roff · ī)
+ * read from the topology record's intervals (topology/types.ts): the on interval draws from the input and,
+ * when it also delivers to the output (`onToOutput`, buck), sees −Vo' and the ESR; the off interval
+ * delivers to the output and, when it also draws from the input (`offFromInput`, boost), sees +Vin':
  * Buck:  Eon = Vin' − Vo' + ESR·Io,  Ron = RDS,sw + DCR + Rsense(switch|inductor) + ESR
  *        Eoff = Vo' + VF0 − ESR·Io,  Roff = Rrect + DCR + Rsense(inductor) + ESR
  * Boost: Eon = Vin',                 Ron = RDS,sw + DCR + Rsense(switch|inductor)
@@ -19,11 +22,25 @@
  */
 import type { Design } from '../design/schema.ts';
 import type { Conditions, ConductionParameters } from './types.ts';
+import { topologyOf } from '../topology/registry.ts';
+import { buck } from '../topology/buck.ts';
+import type { ConverterTopology } from '../topology/types.ts';
 
 export type SenseLocation = Design['topology']['senseLocation'];
 
 export interface Circuit {
-  boost: boolean;
+  topology: ConverterTopology;
+  /**
+   * The record's interval flags and blocking-voltage coefficients, copied as plain fields for the hot
+   * loop (topology/types.ts): the on interval delivers to the output; the off interval draws from the input.
+   */
+  onToOutput: boolean;
+  offFromInput: boolean;
+  /** Switch blocking voltage = switchIn·Vin + switchOut·Vo' (+ rectifier drop); rectifier: rectIn, rectOut. */
+  switchIn: number;
+  switchOut: number;
+  rectIn: number;
+  rectOut: number;
   /** Rectifier stops at zero current (diode, or synchronous with diode emulation): DCM possible. */
   blocksReverse: boolean;
   synchronous: boolean;
@@ -61,7 +78,7 @@ export function circuitOf(design: Design, conditions: Conditions, conduction: Co
 /** An empty circuit record (all fields present) for circuitInto. */
 export function newCircuit(): Circuit {
   return {
-    boost: false, blocksReverse: false, synchronous: false, senseAt: 'none', vinV: 0, targetVoutV: 0, loadA: 0,
+    topology: buck, onToOutput: true, offFromInput: false, switchIn: 1, switchOut: 0, rectIn: 1, rectOut: 0, blocksReverse: false, synchronous: false, senseAt: 'none', vinV: 0, targetVoutV: 0, loadA: 0,
     periodS: 0, rOnOhm: 0, rOffOhm: 0, esrOhm: 0, vf0V: 0, rRectOhm: 0, rInputSenseOhm: 0, rOutputSenseOhm: 0,
     inductanceH: 0, rolloffA: 0, rolloffH: 0, outputCapacitanceF: 0,
   };
@@ -79,7 +96,16 @@ export function circuitInto(design: Design, conditions: Conditions, conduction: 
   const bank = parts.outputCapacitor;
   const esr = conduction.outputCapacitorEsrOhm ?? bank.part.esrOhm / bank.count;
   const rolloff = parts.inductor.rolloff;
-  out.boost = topology.kind === 'boost';
+  const kind = topologyOf(design);
+  if (out.topology !== kind) {
+    out.topology = kind;
+    out.onToOutput = kind.intervals.on.toOutput;
+    out.offFromInput = kind.intervals.off.fromInput;
+    out.switchIn = kind.switchBlocks.input;
+    out.switchOut = kind.switchBlocks.output;
+    out.rectIn = kind.rectifierBlocks.input;
+    out.rectOut = kind.rectifierBlocks.output;
+  }
   out.blocksReverse = !synchronous || topology.lightLoad === 'diode-emulation';
   out.synchronous = synchronous;
   out.senseAt = where;

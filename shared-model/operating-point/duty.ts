@@ -1,7 +1,8 @@
 /**
  * Duty cycle from volt-second balance, and what happens when the target cannot be reached.
  *
- * The volt-second residual r(D) (shape.ts) rises with D from r(0) < 0. Buck: r is monotonic, so the root
+ * The volt-second residual r(D) (shape.ts) rises with D from r(0) < 0. When the on interval delivers to
+ * the output (the topology record's intervals; buck) r is monotonic, so the root
  * lies in [0, Dmax] or the duty limit is reached. Boost: r rises to a maximum and falls again (the
  * resistive drops grow as IL = Io/D'), so the ratio has a ceiling (docs/methods.md §3: 1/(2√(RL/R)) at
  * D' = √(RL/R)); the root taken is the one on the rising side (lower D).
@@ -50,7 +51,9 @@ export function solveVoltSecond(c: Circuit, dMax: number, s: Shape): DutySolutio
   if (r0 > 0) return { d: 0, vo: achievableVout(c, 0, s), limit: 'step-down' };
   const rMax = r(dMax);
   if (rMax >= 0) return { d: brentRoot(r, 0, dMax, r0, rMax, D_TOL), vo, limit: 'none' };
-  if (!c.boost) return { d: dMax, vo: achievableVout(c, dMax, s), limit: 'duty-limit' };
+  // Where the inductor carries the load over the whole period (buck) the residual rises monotonically;
+  // otherwise IL = Io/D' and the drops give the ratio a ceiling (boost).
+  if (c.onToOutput) return { d: dMax, vo: achievableVout(c, dMax, s), limit: 'duty-limit' };
   const dPeak = goldenMax(r, 0, dMax, 1e-12);
   const rPeak = r(dPeak);
   if (rPeak >= 0) return { d: brentRoot(r, 0, dPeak, r0, rPeak, D_TOL), vo, limit: 'none' };
@@ -71,5 +74,5 @@ export function dutyLimitOf(c: Circuit, dMax: number, s: Shape): DutyLimit {
   if (r0 === 0) return 'none';
   if (r0 > 0) return 'step-down';
   if (shapeAt(c, dMax, vo, s).residualV >= 0) return 'none';
-  return c.boost ? solveVoltSecond(c, dMax, s).limit : 'duty-limit';
+  return c.onToOutput ? 'duty-limit' : solveVoltSecond(c, dMax, s).limit;
 }

@@ -1,6 +1,9 @@
 /**
  * The inductor-current shape for a given duty cycle D (and output voltage), CCM or DCM.
  *
+ * The topology enters only through the record's interval flags (topology/types.ts, copied into the
+ * circuit): whether the on interval delivers to the output (buck) and whether the off interval draws from
+ * the input (boost).
  * CCM: mean IL from charge balance (buck IL = Io, boost IL = Io/D'); the off interval, whose voltage
  *   is known, sets the ripple: ΔI = (Eoff + Roff·IL) · D'·T / L; valley/peak = IL ∓ ΔI/2.
  * DCM (when the rectifier blocks reverse current and the CCM valley would be < 0): for a given D the
@@ -60,14 +63,18 @@ export function shapeOfOwn(c: Circuit, s: Shape): Shape {
   const vo1 = vo + c.rOutputSenseOhm * io;
   const dp = Math.max(1 - d, 1e-12);
   const roff = c.rOffOhm + esr;
-  const ron = c.boost ? c.rOnOhm : c.rOnOhm + esr;
+  // The interval flags of the topology record (circuit.ts): buck onToOutput, boost offFromInput.
+  const onOut = c.onToOutput;
+  const offIn = c.offFromInput;
+  const ron = onOut ? c.rOnOhm + esr : c.rOnOhm;
 
-  // CCM attempt.
-  let il = c.boost ? io / dp : io;
-  let iin = c.boost ? il : d * il;
+  // CCM attempt. Charge balance: the output receives IL over the delivering intervals, the input supplies
+  // it over the drawing intervals.
+  let il = onOut ? io : io / dp;
+  let iin = offIn ? il : d * il;
   let vin1 = c.vinV - rIn * iin;
-  let eon = c.boost ? vin1 : vin1 - vo1 + esr * io;
-  let eoff = c.boost ? vo1 + c.vf0V - vin1 - esr * io : vo1 + c.vf0V - esr * io;
+  let eon = onOut ? vin1 - vo1 + esr * io : vin1;
+  let eoff = offIn ? vo1 + c.vf0V - vin1 - esr * io : vo1 + c.vf0V - esr * io;
   let L = inductanceAt(c, il);
   const vOff = eoff + roff * il;
   const ripple = (vOff * dp * T) / L;
@@ -87,43 +94,32 @@ export function shapeOfOwn(c: Circuit, s: Shape): Shape {
     return s;
   }
 
-  // DCM.
-  let ipk: number;
-  let d2: number;
-  if (!c.boost) {
-    const a = eoff;
-    const b = roff / 2;
-    L = inductanceAt(c, io);
-    const qa = L + b * d * T;
-    const qb = T * (a * d - 2 * b * io);
+  // DCM. The off interval and the output charge balance fix Ipk and D2 for the given D:
+  //   Ipk·L = (a + b·Ipk)·D2·T,   Io = Ipk·([onToOutput]·D + D2)/2,
+  // with a + b·Ipk = Eoff + Roff·Ipk/2 (Eoff holds −Vin' = −Vin + Rin·Iin when the off interval draws from
+  // the input, Iin = Ipk·D/2 + Io there): a quadratic qa·Ipk² + qb·Ipk − qc = 0 with one positive root.
+  // The inductance is taken at the mean current, iterated (the mean follows from Ipk when the inductor
+  // does not carry the load over the whole period).
+  const a = offIn ? vo1 + c.vf0V - esr * io - c.vinV + rIn * io : vo1 + c.vf0V - esr * io;
+  const b = offIn ? roff / 2 + (rIn * d) / 2 : roff / 2;
+  let ipk = 0;
+  let d2 = 0;
+  for (let k = 0; k < 50; k++) {
+    const qa = onOut ? L + b * d * T : L;
+    const qb = onOut ? T * (a * d - 2 * b * io) : -(2 * b * io * T);
     const qc = 2 * a * io * T;
     const root = Math.sqrt(Math.max(qb * qb + 4 * qa * qc, 0));
     ipk = qb > 0 ? (2 * qc) / (qb + root) : (root - qb) / (2 * qa);
-    d2 = ipk > 0 ? Math.min(Math.max((2 * io) / ipk - d, 0), dp) : 0;
-    il = io;
-    iin = (d * ipk) / 2;
-    vin1 = c.vinV - rIn * iin;
-    eon = vin1 - vo1 + esr * io;
-  } else {
-    const a0 = vo1 + c.vf0V - esr * io - c.vinV + rIn * io;
-    const b = roff / 2 + (rIn * d) / 2;
-    ipk = 0;
-    d2 = 0;
-    for (let k = 0; k < 50; k++) {
-      const p = 2 * b * io * T;
-      const root = Math.sqrt(Math.max(p * p + 8 * L * a0 * io * T, 0));
-      ipk = (p + root) / (2 * L);
-      d2 = ipk > 0 ? Math.min((2 * io) / ipk, dp) : 0;
-      il = (ipk * (d + d2)) / 2;
-      const next = inductanceAt(c, il);
-      if (Math.abs(next - L) <= 1e-13 * L) break;
-      L = next;
-    }
-    iin = il;
-    vin1 = c.vinV - rIn * iin;
-    eon = vin1;
-    eoff = vo1 + c.vf0V - vin1 - esr * io;
+    d2 = ipk > 0 ? Math.min(Math.max((2 * io) / ipk - (onOut ? d : 0), 0), dp) : 0;
+    il = onOut ? io : (ipk * (d + d2)) / 2;
+    const next = inductanceAt(c, il);
+    if (Math.abs(next - L) <= 1e-13 * L) break;
+    L = next;
   }
+  iin = offIn ? (ipk * (d + d2)) / 2 : (d * ipk) / 2;
+  vin1 = c.vinV - rIn * iin;
+  eon = onOut ? vin1 - vo1 + esr * io : vin1;
+  eoff = offIn ? vo1 + c.vf0V - vin1 - esr * io : vo1 + c.vf0V - esr * io;
   s.dcm = true;
   s.d2 = d2;
   s.idle = Math.max(1 - d - d2, 0);

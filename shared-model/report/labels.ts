@@ -19,8 +19,12 @@ export function roleLabel(role: string): string {
   return (ROLE_LABELS as Record<string, string>)[role] ?? role;
 }
 
+/**
+ * Each contact assumption in words, as the editor offers it and the report states it: the wording of the
+ * touch-limit rows chosen for it (hazards/touch-limits.ts), so the label and the limit applied say the same.
+ */
 export const CONTACT_LABELS: Readonly<Record<Contact, string>> = {
-  brief: 'touched or held briefly',
+  brief: 'held or touched for short periods',
   held: 'held continuously in normal use',
   'surface-1min': 'skin contact up to 1 minute',
   'surface-10min': 'skin contact up to 10 minutes',

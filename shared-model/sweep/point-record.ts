@@ -1,8 +1,12 @@
 /**
  * Compact per-point records for sweeps: an Evaluation (or the ledger's lean evaluation of the same point,
  * which carries the same numbers and warnings) reduced to numbers aligned with shared columns.
- * Columns are discovered as points arrive (a mechanism may appear only in some modes); `finish` pads the
- * earlier points so every array has the final column count (an absent loss term is 0 W).
+ * The columns come from the first point: the ledger's term slots depend only on the design, never on the
+ * operating conditions, so every point of one design has the same terms, parts and heat sinks (a mechanism
+ * that does not occur at a point, such as turn-on overlap in DCM, is there with 0 W; ledger/slots.ts).
+ * A term, part or heat sink not seen before still gets a column of its own, and `finish` pads the earlier
+ * points (0 W, ambient) — a safeguard for a caller that feeds records of different designs, not a case
+ * one design's sweep reaches.
  */
 import type { Role, TouchLimitRow } from '../design/schema.ts';
 import type { Mechanism, TemperatureKind } from '../ledger/types.ts';

@@ -1,4 +1,5 @@
 /** Field descriptions of the design-level sections (specification, topology, margins). */
+import { CONTACT_LABELS, contactSchema, TOPOLOGIES } from '../../shared-model/index.ts';
 import { num, type ChoiceSpec, type FieldSpec } from './field-spec.ts';
 
 export const SPEC_FIELDS: FieldSpec[] = [
@@ -13,19 +14,17 @@ export const SPEC_FIELDS: FieldSpec[] = [
 ];
 
 export const TARGET_FIELDS: FieldSpec[] = [
-  num('efficiencyAtRated', 'Efficiency at rated load', '', { optional: true }),
-  num('outputRippleV', 'Output ripple, peak to peak', 'V', { optional: true }),
-  num('inductorRippleRatio', 'Inductor ripple / rated current', '', { optional: true }),
+  num('efficiencyAtRated', 'Efficiency at rated load', '', { optional: true, help: 'The report says whether the rated point meets it; the Monte Carlo counts the samples that do.' }),
+  num('outputRippleV', 'Output ripple, peak to peak', 'V', { optional: true, help: 'Kept with the design; not yet checked against the results.' }),
+  num('inductorRippleRatio', 'Inductor ripple / rated current', '', { optional: true, help: 'Kept with the design; not yet checked against the results.' }),
 ];
 
 export const KIND_CHOICE: ChoiceSpec = {
   type: 'choice',
   key: 'kind',
   label: 'Converter',
-  options: [
-    { value: 'buck', label: 'Buck (step-down)' },
-    { value: 'boost', label: 'Boost (step-up)' },
-  ],
+  // One option per topology record, named by the record (shared-model/topology/).
+  options: Object.values(TOPOLOGIES).map((t) => ({ value: t.kind, label: `${t.title[0]!.toUpperCase()}${t.title.slice(1)}` })),
 };
 
 export const RECTIFIER_CHOICE: ChoiceSpec = {
@@ -80,15 +79,14 @@ export const SURFACE_OPTIONS = [
   { value: 'plastic', label: 'plastic' },
 ] as const;
 
+/** Says which limit the chosen contact brings (the report repeats it beside each touch check). */
+export const CONTACT_HELP =
+  'Each touchable surface is checked against the strictest row of the touch-limit table for this contact and its material.';
+
 export const CONTACT_CHOICE: ChoiceSpec = {
   type: 'choice',
   key: 'contact',
   label: 'How a person may touch it',
-  options: [
-    { value: 'brief', label: 'brief touch (about 1 s)' },
-    { value: 'held', label: 'held for a few seconds' },
-    { value: 'surface-1min', label: 'contact up to 1 minute' },
-    { value: 'surface-10min', label: 'contact up to 10 minutes' },
-    { value: 'surface-8h', label: 'contact up to 8 hours' },
-  ],
+  // The engine's wording, also printed in the report: the label says what the applied limit is for.
+  options: contactSchema.options.map((value) => ({ value, label: CONTACT_LABELS[value] })),
 };

@@ -13,13 +13,14 @@ import {
   formatQuantity,
   formatSi,
   roleLabel,
+  topologyOf,
 } from '../../shared-model/index.ts';
 
 export const SEVERITY_TEXT: Readonly<Record<Severity, string>> = { danger: 'Danger', caution: 'Caution', info: 'Note' };
 
 export function topologySentence(d: Design): string {
   const t = d.topology;
-  const kind = t.kind === 'buck' ? 'buck (step-down)' : 'boost (step-up)';
+  const kind = topologyOf(d).title;
   const rect = t.rectifier === 'synchronous' ? 'synchronous rectifier (MOSFET)' : 'diode rectifier';
   const light =
     t.rectifier === 'synchronous'

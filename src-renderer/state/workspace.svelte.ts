@@ -33,6 +33,8 @@ export class Workspace {
   readonly messages = new Messages();
   readonly theme = new ThemeState();
   screen: Screen = $state('design');
+  /** The results column takes the editor's room too ("Widen"); Escape or the same button returns. */
+  resultsWide = $state(false);
   recoveryOffer: RecoveryOffer | null = $state(null);
   /** Set by the menu's report commands; the report screen prints or saves once its report is shown. */
   reportRequest: ReportRequest | null = $state(null);

@@ -1,6 +1,6 @@
 /**
- * The engine's share of the keystroke budget of issue 5: one 200-point load sweep plus all its landmarks
- * refined on the engine — the work the app redoes on every edit of the design.
+ * The engine's share of a keystroke: one 200-point load sweep plus all its landmarks refined on the engine
+ * (`sweepWithLandmarks`, the call the app makes on every edit of the design).
  *   - time in the bench's own process (default young generation) and in a child process started with
  *     `node --max-semi-space-size=1` (a 1 MB semi-space), which reproduced the garbage-collection cost
  *     measured in headless Chromium before the sweep was made lean;
@@ -10,20 +10,12 @@
  */
 import { spawnSync } from 'node:child_process';
 import { Session } from 'node:inspector/promises';
-import { findLandmarks, sweepLoad } from '../../shared-model/index.ts';
-import type { Design } from '../../shared-model/index.ts';
 
 /** The flag that makes the bench run only the sweep+landmarks timing (in the small-young-generation child). */
 export const YOUNG_CHILD_FLAG = '--young-generation-child';
 
 /** Semi-space of the child, MB. */
 export const CHILD_SEMI_SPACE_MB = 1;
-
-/** One keystroke's engine work: the default sweep and its refined landmarks. */
-export function sweepWithLandmarks(design: Design): void {
-  const sweep = sweepLoad(design);
-  findLandmarks(sweep, { design });
-}
 
 /** Bytes allocated per call of `fn` (mean over `calls`), by the sampling heap profiler; fn is warmed up first. */
 export async function sampledBytesPerCall(fn: () => void, calls: number): Promise<number> {
@@ -53,8 +45,9 @@ export async function sampledBytesPerCall(fn: () => void, calls: number): Promis
 }
 
 export interface ChildTiming {
-  cpuMs: number;
-  wallMs: number;
+  /** ms per call, one value per run. */
+  cpuMs: number[];
+  wallMs: number[];
 }
 
 /**

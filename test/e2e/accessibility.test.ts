@@ -77,8 +77,10 @@ describe('theme toggle', () => {
     suite.run(async (app) => {
       const { page } = app;
       expect(await themeInUse(page)).toBe('light');
+      await expect(page.getByTestId('theme-toggle').innerText()).resolves.toMatch(/off$/); // issue 16 §5: the label shows the state
       await page.getByRole('button', { name: 'Dark theme' }).click();
       expect(await themeInUse(page)).toBe('dark');
+      await expect(page.getByTestId('theme-toggle').innerText()).resolves.toMatch(/on$/);
       await expect(page.getByRole('button', { name: 'Dark theme' }).getAttribute('aria-pressed')).resolves.toBe('true');
       await page.reload();
       await page.locator('main').waitFor();

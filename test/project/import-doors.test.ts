@@ -63,6 +63,19 @@ describe('lint doors (eslint no-restricted-imports)', () => {
     ];
     expect(await restrictedImportMessages(allowed)).toEqual([[], [], []]);
   }, 120_000);
+
+  it('keeps Chart.js set up in one place: a chart wrapper takes Chart from chart-kit.ts, never from chart.js (types are free)', async () => {
+    const probes: Probe[] = [
+      { folder: 'src-renderer/charts', source: "import { Chart } from 'chart.js';\nexport const c = Chart;\n" },
+      { folder: 'src-renderer/charts/report', source: "import { Chart } from 'chart.js';\nexport const c = Chart;\n" },
+      { folder: 'src-renderer/charts', source: "import annotationPlugin from 'chartjs-plugin-annotation';\nexport const a = annotationPlugin;\n" },
+      { folder: 'src-renderer/charts/report', source: "import type { Chart } from 'chart.js';\nimport { Chart as Kit } from '../chart-kit.ts';\nexport type C = Chart;\nexport const k = Kit;\n" },
+    ];
+    const messages = await restrictedImportMessages(probes);
+    expect(messages.slice(0, 3).map((m) => m.length)).toEqual([1, 1, 1]);
+    expect(messages[0]?.[0]).toContain('chart-kit.ts');
+    expect(messages[3]).toEqual([]); // control: a type import and the kit's Chart pass
+  }, 120_000);
 });
 
 /** Type-checks one file with the compiler options of a folder's tsconfig.json. */

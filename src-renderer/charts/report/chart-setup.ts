@@ -1,44 +1,10 @@
 /**
- * Chart.js set-up shared by the report charts: the parts of Chart.js they use, registered once, the
- * common options (fixed size, no animation, print-friendly colours and fonts), and a small plugin that
+ * What the report charts share beyond the one Chart.js set-up (../chart-kit.ts registers every piece they
+ * use): the common options (fixed size, no animation, print-friendly colours and fonts), and a small plugin that
  * draws vertical marker lines and labelled points with their text.
  */
-import {
-  BarController,
-  BarElement,
-  CategoryScale,
-  Chart,
-  Legend,
-  LinearScale,
-  LineController,
-  LineElement,
-  LogarithmicScale,
-  PointElement,
-  ScatterController,
-  Title,
-  type Plugin,
-} from 'chart.js';
+import type { Plugin } from 'chart.js';
 import type { PointMark, XMark } from './chart-spec.ts';
-
-let registered = false;
-
-export function registerReportCharts(): void {
-  if (registered) return;
-  Chart.register(
-    BarController,
-    BarElement,
-    CategoryScale,
-    Legend,
-    LinearScale,
-    LineController,
-    LineElement,
-    LogarithmicScale,
-    PointElement,
-    ScatterController,
-    Title,
-  );
-  registered = true;
-}
 
 export const INK = '#1a1a1a';
 export const GRID = '#d4d4d4';
