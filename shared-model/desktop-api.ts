@@ -63,6 +63,11 @@ export interface DesktopApi {
   openRecent(path: string): Promise<OpenedFile | { error: string }>;
   listRecent(): Promise<string[]>;
   saveDesign(request: SaveRequest): Promise<SaveOutcome>;
+  /** Parts library files (design/parts-library.ts): open with a dialog, reopen from their own recent list, save (atomic, with .bak). */
+  openLibrary(): Promise<OpenedFile | null>;
+  openRecentLibrary(path: string): Promise<OpenedFile | { error: string }>;
+  listRecentLibraries(): Promise<string[]>;
+  saveLibrary(request: SaveRequest): Promise<SaveOutcome>;
   exportFile(request: ExportRequest): Promise<SaveOutcome>;
   /** Prints the current window (the report view) to a PDF file chosen by the user. */
   printToPdf(request: PdfRequest): Promise<SaveOutcome>;

@@ -31,7 +31,8 @@ export { migrateDesign } from './design/migrate.ts';
 export { parseDesignText, serializeDesign, unrepresentable } from './design/document-text.ts';
 export type { JsonSyntaxError } from './design/json-position.ts';
 export { findJsonSyntaxError } from './design/json-position.ts';
-export type { PartsLibrary } from './design/parts-library.ts';
+export { freeId, idFromName } from './design/ids.ts';
+export type { PartsLibrary, PartsLibraryValidation } from './design/parts-library.ts';
 export {
   PARTS_LIBRARY_FORMAT,
   PARTS_LIBRARY_VERSION,
@@ -39,9 +40,17 @@ export {
   partsOfKind,
   validatePartsLibrary,
 } from './design/parts-library.ts';
+export type { LibraryMigration } from './design/parts-library-migrate.ts';
+export { migratePartsLibrary } from './design/parts-library-migrate.ts';
+export { parsePartsLibraryText, serializePartsLibrary } from './design/parts-library-text.ts';
 export { DESIGN_SCHEMA_FILE, designJsonSchema, PARTS_SCHEMA_FILE, partsLibraryJsonSchema } from './design/json-schema.ts';
 export type { DemoDesign } from './design/demos.ts';
 export { DEMO_DESIGNS, DEMO_PARTS_LIBRARY } from './design/demos.ts';
+
+// --- library links (a design's parts against their library entries) ---
+export type { FieldDifference, LinkState, PartLink } from './library-links/link-status.ts';
+export { linkStatus, partDifferences, partOfRole } from './library-links/link-status.ts';
+export { takeLibraryPart, unlinkPart, updateFromLibrary } from './library-links/update-link.ts';
 
 // --- part import and export (spreadsheets) ---
 export type { FieldType, PartField } from './part-import/fields.ts';
@@ -55,9 +64,9 @@ export type { ColumnMapping, MappingProblem, PartMapping } from './part-import/m
 export { checkMapping, mappingDocument, PART_MAPPING_FORMAT, PART_MAPPING_VERSION, partMappingSchema } from './part-import/mapping.ts';
 export { guessColumn, guessMapping, reuseMapping } from './part-import/guess.ts';
 export type { ImportPreview, PreviewRow, RowProblem } from './part-import/preview.ts';
-export { idFromName, previewImport } from './part-import/preview.ts';
+export { previewImport } from './part-import/preview.ts';
 export type { ImportApplied } from './part-import/apply.ts';
-export { applyImport, freeId } from './part-import/apply.ts';
+export { applyImport } from './part-import/apply.ts';
 export { partsToCsv, shiftedText } from './part-import/export.ts';
 
 // --- operating point ---
@@ -260,9 +269,7 @@ export {
   formatKelvin,
   formatMarginFraction,
   formatPercent,
-  formatPlain,
   formatQuantity,
-  formatSi,
   formatVolts,
   formatWatts,
   formatWattsFixed,

@@ -6,11 +6,11 @@
  * passes the schema may still get problems from validateDesign().
  */
 import { z } from 'zod';
-import { partsLibrarySchema } from './parts-library.ts';
+import { partsLibrarySchema, PARTS_LIBRARY_VERSION } from './parts-library.ts';
 import { designSchema } from './schema.ts';
 
 export const DESIGN_SCHEMA_FILE = 'wattledger-design.v1.schema.json';
-export const PARTS_SCHEMA_FILE = 'wattledger-parts.v1.schema.json';
+export const PARTS_SCHEMA_FILE = `wattledger-parts.v${PARTS_LIBRARY_VERSION}.schema.json`;
 
 const NOTE =
   'Generated from the zod schema by `npm run schema`; do not edit. Units are SI and named by key suffix ' +
@@ -28,7 +28,7 @@ export function designJsonSchema(): Record<string, unknown> {
   return { ...z.toJSONSchema(designSchema), title: 'WattLedger design document, version 1', description: NOTE };
 }
 
-/** JSON Schema of the parts library document, version 1. */
+/** JSON Schema of the parts library document, current version. */
 export function partsLibraryJsonSchema(): Record<string, unknown> {
-  return { ...z.toJSONSchema(partsLibrarySchema), title: 'WattLedger parts library, version 1', description: NOTE };
+  return { ...z.toJSONSchema(partsLibrarySchema), title: `WattLedger parts library, version ${PARTS_LIBRARY_VERSION}`, description: NOTE };
 }

@@ -18,6 +18,12 @@ export const specificationSchema = z.object({
   vinMaxV: q('railV'),
   voutV: q('railV'),
   ratedLoadA: q('loadA'),
+  /**
+   * What the load is: a constant-current sink (absent: the default), a resistor R = Vout/I at each
+   * evaluated load I, or a constant-power load Vout·I. It sets how the output ripple current divides
+   * between the output capacitor bank and the load (operating-point/load.ts).
+   */
+  loadKind: z.enum(['constant-current', 'resistive', 'constant-power']).optional(),
   switchingFrequencyHz: q('switchingHz'),
   ambientC: q('ambientC'),
   /** Largest duty cycle the controller can command (0.05 ≤ maxDuty < 1). */
@@ -62,6 +68,18 @@ export const partsSchema = z.object({
   outputCapacitor: capacitorSlot,
   senseResistor: resistorSchema.optional(),
   controller: controllerSchema,
+});
+
+/**
+ * Where a part of the design came from: a part of a parts library (design/parts-library.ts), by the
+ * library's id and the part's id. The design keeps its own copy of the values (parts), so it opens and
+ * evaluates when the library is missing or has changed; library-links/ says which copies differ.
+ * `libraryName` is the library's name when the link was made, to name it when it is not open.
+ */
+export const partSourceSchema = z.object({
+  libraryId: z.string().min(1).max(80),
+  libraryName: z.string().min(1).max(120),
+  partId: z.string().min(1).max(80),
 });
 
 export const ROLES = [
@@ -165,6 +183,8 @@ export const designSchema = z.object({
   spec: specificationSchema,
   topology: topologySchema,
   parts: partsSchema,
+  /** The library entry each part was taken from (roles without an entry were typed in or are the demo's). */
+  sources: z.partialRecord(z.enum(ROLES), partSourceSchema).optional(),
   thermal: thermalSchema,
   margins: marginsSchema,
   /** A bench measurement saved with the design (optional; shared-model/measurement). */
@@ -176,6 +196,7 @@ export const designSchema = z.object({
 export type Specification = z.infer<typeof specificationSchema>;
 export type Topology = z.infer<typeof topologySchema>;
 export type Parts = z.infer<typeof partsSchema>;
+export type PartSource = z.infer<typeof partSourceSchema>;
 export type ThermalPath = z.infer<typeof thermalPathSchema>;
 export type Heatsink = z.infer<typeof heatsinkSchema>;
 export type SurfaceMaterial = z.infer<typeof surfaceMaterialSchema>;

@@ -157,13 +157,20 @@ export function leanPointAt(c: Circuit, s: Shape, p: LeanPoint, asRecord = false
   v[3] = lo - iin; v[4] = hi - iin; v[7] = -iin;
   if (c.offFromInput) { v[5] = hi - iin; v[6] = lo - iin; } else { v[5] = -iin; v[6] = -iin; }
   intervalStats(p.stats.inputCapacitor, v, r);
-  v[5] = hi - io; v[6] = lo - io; v[7] = -io;
-  if (c.onToOutput) { v[3] = lo - io; v[4] = hi - io; } else { v[3] = -io; v[4] = -io; }
+  // Output bank: its share k of the node current less Io (operating-point/load.ts, as assemble.ts).
+  const k = c.capacitorShare;
+  const nOn0 = c.onToOutput ? lo : 0;
+  const nOn1 = c.onToOutput ? hi : 0;
+  v[3] = k * (nOn0 - io); v[4] = k * (nOn1 - io); v[5] = k * (hi - io); v[6] = k * (lo - io); v[7] = k * -io;
   intervalStats(p.stats.outputCapacitor, v, r);
   if (c.senseAt === 'switch') {
     v[3] = lo; v[4] = hi; v[5] = 0; v[6] = 0; v[7] = 0;
   } else if (c.senseAt === 'inductor') {
     v[3] = lo; v[4] = hi; v[5] = hi; v[6] = lo; v[7] = 0;
+  } else if (c.senseAt === 'output' && k !== 1) {
+    // The load current: Io plus the load's share (1 − k) of the node ripple (load.ts).
+    v[3] = io + (1 - k) * (nOn0 - io); v[4] = io + (1 - k) * (nOn1 - io); v[5] = io + (1 - k) * (hi - io);
+    v[6] = io + (1 - k) * (lo - io); v[7] = io + (1 - k) * -io;
   } else {
     // At the input or output the sense resistor carries DC over the whole period (none: 0 A).
     const dc = c.senseAt === 'input' ? iin : c.senseAt === 'output' ? io : 0;

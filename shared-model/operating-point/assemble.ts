@@ -7,15 +7,16 @@
  *   switch = inductor during the on interval; rectifier = inductor during the off interval
  *   input capacitor: the inductor current in the intervals that draw from the input − source DC
  *     (buck: switch current − Iin; boost: inductor current − its mean)
- *   output capacitor: the inductor current in the intervals that deliver to the output − Io
- *     (buck: inductor current − Io; boost: rectifier current − Io)
- *   sense resistor: source DC (input), switch, inductor, or Io (output).
+ *   output capacitor: k·(node current − Io), the node current being the inductor current in the intervals
+ *     that deliver to the output (buck: the inductor's; boost: the rectifier's), k the bank's share of its
+ *     ripple (load.ts; 1 for a constant-current load)
+ *   sense resistor: source DC (input), switch, inductor, or the load current Io + (1 − k)·(node − Io) (output).
  * Edges: turn-on at the valley (0 in DCM, not hard; soft too when the valley is negative, since the
  * reverse current discharges the switch node first), turn-off at the peak. Blocking voltages: buck
  * Vin + rectifier drop; boost Vo + rectifier drop (in DCM at zero current: the swing when the idle interval
  * starts; the ringing toward the resting value is not modelled, a conservative choice).
  * Blocking voltages and small-signal figures come from the topology record (topology/boost.ts: ωz = D'²R/L,
- * current-mode output pole ωp = 2/(R·C), docs/methods.md §13).
+ * current-mode output pole ωp = (1/R + g)/C with g the load's incremental conductance, load.ts).
  * Source: Erickson & Maksimović 2nd ed. ch. 2, 5 and 8 [memory for chapters]; docs/methods.md §1, §2, §13.
  */
 import type { Circuit } from './circuit.ts';
@@ -91,9 +92,12 @@ export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions
   const inputCapacitor = c.offFromInput
     ? wave(tOn, tOff, tIdle, lo - iin, hi - iin, hi - iin, lo - iin, -iin)
     : wave(tOn, tOff, tIdle, lo - iin, hi - iin, -iin, -iin, -iin);
-  const outputCapacitor = c.onToOutput
-    ? wave(tOn, tOff, tIdle, lo - io, hi - io, hi - io, lo - io, -io)
-    : wave(tOn, tOff, tIdle, -io, -io, hi - io, lo - io, -io);
+  // Output node: the current fed in (the intervals that deliver to the output) less Io, of which the bank
+  // carries the share k and the load the rest (load.ts; k = 1 for a current sink).
+  const k = c.capacitorShare;
+  const nOn0 = c.onToOutput ? lo : 0;
+  const nOn1 = c.onToOutput ? hi : 0;
+  const outputCapacitor = wave(tOn, tOff, tIdle, k * (nOn0 - io), k * (nOn1 - io), k * (hi - io), k * (lo - io), k * -io);
   let sense: Waveform;
   switch (c.senseAt) {
     case 'switch':
@@ -106,7 +110,10 @@ export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions
       sense = { segments: [{ durationS: T, i0A: iin, i1A: iin }] };
       break;
     case 'output':
-      sense = { segments: [{ durationS: T, i0A: io, i1A: io }] };
+      // The load current: Io plus the load's share (1 − k) of the node ripple (load.ts).
+      sense = k === 1
+        ? { segments: [{ durationS: T, i0A: io, i1A: io }] }
+        : wave(tOn, tOff, tIdle, io + (1 - k) * (nOn0 - io), io + (1 - k) * (nOn1 - io), io + (1 - k) * (hi - io), io + (1 - k) * (lo - io), io + (1 - k) * -io);
       break;
     default:
       sense = { segments: [{ durationS: T, i0A: 0, i1A: 0 }] };
@@ -157,7 +164,7 @@ export function buildOperatingPoint(c: Circuit, s: Shape, conditions: Conditions
     warnings: meta.warnings,
   };
   if (!s.dcm && io > 0) {
-    const figures = c.topology.smallSignal(s.d, vo / io, s.inductanceH, c.outputCapacitanceF);
+    const figures = c.topology.smallSignal(s.d, vo / io, s.inductanceH, c.outputCapacitanceF, c.loadConductanceS);
     if (figures) op.smallSignal = figures;
   }
   return op;

@@ -4,6 +4,7 @@
  * - DCM (info), reverse inductor current in forced PWM (info), inductance beyond its roll-off point.
  * - Duty limit / conversion-ratio limit / a boost asked to step down: the point is shown at the limit
  *   with the output it reaches, never as regulated.
+ * - A resistive or constant-power load outside the load model's validity (load.ts).
  * - Inductor peak against Isat at the ambient temperature: Isat(T) = Isat · (1 + tc · (T − T_isat));
  *   the ledger repeats the check at the hot-spot temperature.
  * - Blocking voltage against VDS / VR (beyond the derating margin: caution; beyond the rating: danger);
@@ -16,6 +17,7 @@ import type { Warning } from '../warnings.ts';
 import type { Circuit } from './circuit.ts';
 import type { DutyLimit } from './duty.ts';
 import type { OperatingPoint } from './types.ts';
+import { loadModelWarnings } from './load.ts';
 
 const f4 = (x: number) => (Number.isFinite(x) ? Number(x.toPrecision(4)).toString() : String(x));
 
@@ -116,5 +118,6 @@ export function addWarnings(ctx: CheckContext, op: CheckedPoint): void {
     out.push({ code: 'saturation', severity: 'danger', part: 'inductor', path: 'parts.inductor.isatA',
       message: `Inductor peak ${f4(op.inductor.peakA)} A exceeds its saturation current ${f4(isatAmb)} A at the ${f4(op.conditions.ambientC)} °C ambient (it falls further when hot).` });
   }
+  loadModelWarnings(c, out);
   ratingWarnings(design, op, out);
 }

@@ -14,7 +14,8 @@
  * with Vin' = Vin − Rsense(input) · Iin, Vo' = Vo + Rsense(output) · Io, Rrect = Rd (diode) or RDS
  * (synchronous), VF0 = 0 for a synchronous rectifier. The ESR terms are the output capacitor current
  * (i − Io) flowing through the bank's ESR while the inductor feeds the output node; in buck CCM they
- * cancel, so the docs/methods.md §1 duty formulas are reproduced exactly.
+ * cancel, so the docs/methods.md §1 duty formulas are reproduced exactly. A resistive or constant-power
+ * load takes part of that ripple current: the node then sees ESR·k (load.ts), used in place of ESR.
  * Assumptions: stiff input (the input capacitor holds Vin; the source supplies DC), constant output
  * voltage over the period for the drops, dead times and switching transitions ignored here (the loss
  * ledger prices them). Source: Erickson & Maksimović 2nd ed. ch. 2–3 (volt-second balance with
@@ -22,6 +23,7 @@
  */
 import type { Design } from '../design/schema.ts';
 import type { Conditions, ConductionParameters } from './types.ts';
+import { capacitorShare, loadConductanceS, loadKindOf } from './load.ts';
 import { topologyOf } from '../topology/registry.ts';
 import { buck } from '../topology/buck.ts';
 import type { ConverterTopology } from '../topology/types.ts';
@@ -64,6 +66,10 @@ export interface Circuit {
   rolloffA: number;
   rolloffH: number;
   outputCapacitanceF: number;
+  /** The load's incremental conductance seen from the output node, S (load.ts; 0: a current sink). */
+  loadConductanceS: number;
+  /** Fraction of the node's ripple current the output bank carries, 1/(1 + g·ESR) (load.ts). */
+  capacitorShare: number;
 }
 
 /** Whether the design's rectifier is a synchronous MOSFET (topology and part agree). */
@@ -80,7 +86,7 @@ export function newCircuit(): Circuit {
   return {
     topology: buck, onToOutput: true, offFromInput: false, switchIn: 1, switchOut: 0, rectIn: 1, rectOut: 0, blocksReverse: false, synchronous: false, senseAt: 'none', vinV: 0, targetVoutV: 0, loadA: 0,
     periodS: 0, rOnOhm: 0, rOffOhm: 0, esrOhm: 0, vf0V: 0, rRectOhm: 0, rInputSenseOhm: 0, rOutputSenseOhm: 0,
-    inductanceH: 0, rolloffA: 0, rolloffH: 0, outputCapacitanceF: 0,
+    inductanceH: 0, rolloffA: 0, rolloffH: 0, outputCapacitanceF: 0, loadConductanceS: 0, capacitorShare: 1,
   };
 }
 
@@ -124,6 +130,8 @@ export function circuitInto(design: Design, conditions: Conditions, conduction: 
   out.rolloffA = rolloff ? rolloff.currentA : 0;
   out.rolloffH = rolloff ? rolloff.inductanceH : 0;
   out.outputCapacitanceF = bank.part.capacitanceF * bank.count;
+  out.loadConductanceS = loadConductanceS(loadKindOf(spec), spec.voutV, conditions.loadA, out.rOutputSenseOhm);
+  out.capacitorShare = capacitorShare(out.loadConductanceS, esr);
   return out;
 }
 

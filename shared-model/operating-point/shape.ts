@@ -58,7 +58,8 @@ export function shapeOfOwn(c: Circuit, s: Shape): Shape {
   const vo = s.vo;
   const T = c.periodS;
   const io = c.loadA;
-  const esr = c.esrOhm;
+  // The ESR seen at the node: the bank's share k of the ripple current flows through it (load.ts).
+  const esr = c.esrOhm * c.capacitorShare;
   const rIn = c.rInputSenseOhm;
   const vo1 = vo + c.rOutputSenseOhm * io;
   const dp = Math.max(1 - d, 1e-12);

@@ -4,6 +4,7 @@
  * taken by an earlier imported row, gets the first free "-2", "-3"... suffix, and every such change is
  * listed, so nothing is overwritten and nothing is renamed silently.
  */
+import { freeId } from '../design/ids.ts';
 import type { Part } from '../design/parts.ts';
 
 export interface ImportApplied {
@@ -11,12 +12,6 @@ export interface ImportApplied {
   parts: Part[];
   added: Part[];
   renamed: { from: string; to: string; name: string }[];
-}
-
-/** An id not in `taken`: base, base-2, base-3, ... */
-export function freeId(base: string, taken: ReadonlySet<string>): string {
-  if (!taken.has(base)) return base;
-  for (let n = 2; ; n++) if (!taken.has(`${base}-${n}`)) return `${base}-${n}`;
 }
 
 /** The library with `incoming` appended (see the file header). */

@@ -13,6 +13,7 @@
  *   - an id, when no column gives one, is made from the name (apply.ts keeps ids unique).
  */
 import type { CsvReadProblem, CsvTable } from '../csv/read.ts';
+import { idFromName } from '../design/ids.ts';
 import type { Part, PartKind } from '../design/parts.ts';
 import { partSchema } from '../design/parts.ts';
 import { problemsFromZod } from '../design/zod-problems.ts';
@@ -63,11 +64,6 @@ interface Given {
 
 const where = (row: number, g: Pick<Given, 'header' | 'field'>): string =>
   g.header !== undefined ? `Row ${row}, column "${g.header}" (${g.field.label})` : `Row ${row}, fixed value of ${g.field.label}`;
-
-/** An id made from a name: lower case, runs of other characters as one hyphen. */
-export function idFromName(name: string): string {
-  return name.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'part';
-}
 
 function set(target: Record<string, unknown>, path: string, value: unknown): void {
   const [head, tail] = path.split('.') as [string, string | undefined];

@@ -24,6 +24,7 @@ import type { WorstCase } from '../tolerance/worst-case.ts';
 import { summarize } from './summary.ts';
 import { REPORT_CAUTIONS } from './cautions.ts';
 import { methodsFor } from './methods.ts';
+import { loadKindOf } from '../operating-point/load.ts';
 import { sha256Hex } from './sha256.ts';
 import type {
   FamilyCurve,
@@ -171,6 +172,7 @@ export function buildReport(input: ReportInput): ReportModel {
     tolerance,
     methods: methodsFor({
       mechanisms,
+      loadKind: loadKindOf(design.spec),
       capacitorLife: rated.checks.some((c) => c.check === 'capacitor-life'),
       comparison: comparison !== null,
       tolerance: tolerance !== null,

@@ -1,23 +1,15 @@
 /**
  * The report's number formats: one function per kind of number, so the report view, the CSV files and
  * the tests that read the printed PDF all write a value the same way. Format only: nothing here computes
- * physics. Fixed precision keeps the table columns aligned (trailing zeros are kept: "1.10 W").
+ * physics. Numbers with SI prefixes go through the one formatter, `formatEngineering` (units/engineering.ts),
+ * in its table style, as the results on screen do. Fixed precision keeps the table columns aligned (trailing zeros are kept: "1.10 W").
  * Negative numbers use the minus sign U+2212; a value that is not finite is written "—".
  */
 
+import { formatEngineering } from '../units/engineering.ts';
+
 const MINUS = '\u2212';
 const DASH = '—';
-
-const PREFIXES: readonly [string, number][] = [
-  ['p', -12],
-  ['n', -9],
-  ['µ', -6],
-  ['m', -3],
-  ['', 0],
-  ['k', 3],
-  ['M', 6],
-  ['G', 9],
-];
 
 const signed = (text: string, negative: boolean): string => (negative ? `${MINUS}${text}` : text);
 
@@ -29,34 +21,8 @@ export function formatFixed(value: number, decimals: number): string {
   return signed(text, value < 0 && !zero);
 }
 
-/**
- * `significantDigits` significant digits with an SI prefix and trailing zeros kept: 1.104 W → "1.10 W",
- * 0.0042 W → "4.20 mW", 4.7e-6 H → "4.70 µH". Zero is "0 W".
- */
-export function formatSi(value: number, unit: string, significantDigits = 3): string {
-  if (!Number.isFinite(value)) return DASH;
-  const space = unit === '' ? '' : ' ';
-  if (value === 0) return `0${space}${unit}`;
-  const a = Math.abs(value);
-  const rounded = Number(a.toPrecision(significantDigits));
-  let exp = Math.floor(Math.log10(rounded) / 3) * 3;
-  if (rounded / 10 ** exp >= 1000) exp += 3;
-  if (rounded / 10 ** exp < 1) exp -= 3;
-  exp = Math.min(9, Math.max(-12, exp));
-  const prefix = PREFIXES.find(([, e]) => e === exp)!;
-  return signed(`${formatPlain(rounded / 10 ** exp, significantDigits)}${space}${prefix[0]}${unit}`, value < 0);
-}
-
-/** `significantDigits` significant digits without prefix or exponent, trailing zeros kept ("0.950"). */
-export function formatPlain(value: number, significantDigits = 3): string {
-  if (!Number.isFinite(value)) return DASH;
-  if (value === 0) return '0';
-  const a = Math.abs(value);
-  const rounded = Number(a.toPrecision(significantDigits));
-  const intDigits = Math.floor(Math.log10(rounded) + 1e-12) + 1;
-  const decimals = Math.min(20, Math.max(0, significantDigits - intDigits));
-  return signed(rounded.toFixed(decimals), value < 0);
-}
+/** Significant digits with an SI prefix, trailing zeros kept: the one formatter's table style. */
+const si = (value: number, unit: string, significantDigits = 3): string => formatEngineering(value, unit, significantDigits, 'table');
 
 /** Efficiency or any ratio as a percentage with fixed decimals: 0.93728 → "93.73 %". */
 export function formatPercent(fraction: number, decimals = 2): string {
@@ -65,7 +31,7 @@ export function formatPercent(fraction: number, decimals = 2): string {
 }
 
 /** A power in watts, 3 significant digits with prefix ("1.10 W", "42.0 mW"). */
-export const formatWatts = (watts: number): string => formatSi(watts, 'W', 3);
+export const formatWatts = (watts: number): string => si(watts, 'W', 3);
 
 /** A temperature in °C with one decimal ("47.3 °C"). */
 export const formatCelsius = (celsius: number): string => (Number.isFinite(celsius) ? `${formatFixed(celsius, 1)} °C` : DASH);
@@ -74,13 +40,13 @@ export const formatCelsius = (celsius: number): string => (Number.isFinite(celsi
 export const formatKelvin = (kelvin: number): string => (Number.isFinite(kelvin) ? `${formatFixed(kelvin, 1)} K` : DASH);
 
 /** A current in amperes, 3 significant digits ("5.00 A", "250 mA"). */
-export const formatAmps = (amps: number): string => formatSi(amps, 'A', 3);
+export const formatAmps = (amps: number): string => si(amps, 'A', 3);
 
 /** A voltage, 3 significant digits ("14.4 V"). */
-export const formatVolts = (volts: number): string => formatSi(volts, 'V', 3);
+export const formatVolts = (volts: number): string => si(volts, 'V', 3);
 
 /** A frequency, 3 significant digits ("500 kHz"). */
-export const formatHertz = (hertz: number): string => formatSi(hertz, 'Hz', 3);
+export const formatHertz = (hertz: number): string => si(hertz, 'Hz', 3);
 
 /** A duty cycle or other fraction of a period as a percentage with one decimal ("27.5 %"). */
 export const formatDuty = (fraction: number): string => formatPercent(fraction, 1);
@@ -101,10 +67,10 @@ export function formatQuantity(value: number, unit: string): string {
   if (unit === 'K') return formatKelvin(value);
   const bare = unit === '' || unit.startsWith('/') || unit.startsWith('%') || unit === 'h' || unit === 'W/m³' || unit.includes('/');
   if (bare) {
-    const text = formatPlain(value, 3);
+    const text = formatEngineering(value, '', 3, 'table');
     return unit === '' ? text : `${text} ${unit}`;
   }
-  return formatSi(value, unit, 3);
+  return si(value, unit, 3);
 }
 
 /**

@@ -5,14 +5,15 @@
 import type { Contact, Design, Role } from '../design/schema.ts';
 import type { RatingCheck } from '../ledger/types.ts';
 
+/** Each part role in words: the one table the editor, the results, the report and the command line use. */
 export const ROLE_LABELS: Readonly<Record<Role, string>> = {
   switch: 'Control switch',
   rectifier: 'Rectifier',
   inductor: 'Inductor',
   inputCapacitor: 'Input capacitors',
   outputCapacitor: 'Output capacitors',
-  senseResistor: 'Sense resistor',
-  controller: 'Controller',
+  senseResistor: 'Current-sense resistor',
+  controller: 'Controller and gate driver',
 };
 
 export function roleLabel(role: string): string {

@@ -7,6 +7,7 @@
  */
 import type { Mechanism } from '../ledger/types.ts';
 import type { MethodEntry } from './types.ts';
+import type { LoadKind } from '../operating-point/load.ts';
 
 const EM = 'Erickson & Maksimović, Fundamentals of Power Electronics, 2nd ed.';
 const MUR = 'Mohan, Undeland & Robbins, Power Electronics';
@@ -24,6 +25,36 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
       'Steady state only: no control-loop dynamics, start-up or load transients.',
       'Switching edges are instantaneous in the current waveforms (transition times do not enter the RMS currents).',
       'Capacitor ESL is ignored in the output ripple.',
+    ],
+  },
+  {
+    id: 'load-constant-current',
+    title: 'The load: a constant current',
+    formula:
+      'The load draws Io whatever the output ripple: the output capacitor bank carries all of the ripple of the current fed into the ' +
+      'output node (buck: the inductor current; boost: the rectifier current), I_C = i_node − Io.',
+    source: 'Kirchhoff\'s current law at the output node; WattLedger methods §22.',
+    limits: ['An electronic load in constant-current mode, for example; a resistor, or a constant-power load such as a regulated downstream converter, shares the ripple differently (the design field "The load is").'],
+  },
+  {
+    id: 'load-resistive',
+    title: 'The load: a resistor R = Vo/Io at each load',
+    formula:
+      'The node ripple divides between the bank\'s ESR and the load (the bank an AC short over a period): I_C = k · (i_node − Io), ' +
+      'k = R/(R + ESR); the load carries the rest; the node sees k · ESR. R follows the load along a sweep.',
+    source: 'Current divider (Kirchhoff\'s laws); WattLedger methods §22, checked against an exact time-domain simulation.',
+    limits: ['The capacitor\'s own voltage ripple drives no load current: R·C of at least 10 switching periods (a warning says when not).'],
+  },
+  {
+    id: 'load-constant-power',
+    title: 'The load: a constant power Vo·Io',
+    formula:
+      'Linearised about its operating point the load is a negative incremental resistance −R = −Vo/Io: I_C = k · (i_node − Io), ' +
+      'k = 1/(1 − ESR/R) > 1, so the bank carries more ripple than with a current sink; the node sees k · ESR.',
+    source: 'First-order expansion of i = P/v (common practice); WattLedger methods §22, checked against an exact time-domain simulation of the linearised load.',
+    limits: [
+      'Valid while the bank\'s share stays moderate (k ≤ 1.5, ESR ≤ R/3) and R·C is at least 10 switching periods; a warning says when not.',
+      'Steady state only: a constant-power load lowers the damping of the output filter; stability is the control loop\'s task, not modelled here.',
     ],
   },
   {
@@ -248,6 +279,8 @@ const BY_MECHANISM: Readonly<Record<Mechanism, string>> = {
 
 export interface MethodSelection {
   mechanisms: Iterable<Mechanism>;
+  /** What the load is (the design's spec.loadKind, absent: constant current): picks its load-model entry. */
+  loadKind: LoadKind;
   capacitorLife: boolean;
   comparison: boolean;
   tolerance: boolean;
@@ -255,7 +288,7 @@ export interface MethodSelection {
 
 /** The catalogue entries that apply, in catalogue order. */
 export function methodsFor(selection: MethodSelection): MethodEntry[] {
-  const wanted = new Set<string>(['operating-point', 'thermal-network', 'electro-thermal', 'ratings', 'burn-hazard', 'landmarks', 'figures-of-merit']);
+  const wanted = new Set<string>(['operating-point', `load-${selection.loadKind}`, 'thermal-network', 'electro-thermal', 'ratings', 'burn-hazard', 'landmarks', 'figures-of-merit']);
   for (const m of selection.mechanisms) wanted.add(BY_MECHANISM[m]);
   if (selection.capacitorLife) wanted.add('capacitor-life');
   if (selection.comparison) wanted.add('comparison');

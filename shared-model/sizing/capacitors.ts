@@ -12,7 +12,7 @@
  * Input bank: its RMS current from the solved point (exact, docs/methods.md §1).
  * Assumptions: capacitance without bias or temperature derating; the load current constant.
  * Source: C·dv/dt = i; Erickson & Maksimović, Fundamentals of Power Electronics, 2nd ed., ch. 2
- * (capacitor charge balance, from memory for the chapter); docs/methods.md §22.
+ * (capacitor charge balance, from memory for the chapter); docs/methods.md §23.
  */
 import type { Design } from '../design/schema.ts';
 import type { Waveform } from '../operating-point/types.ts';
@@ -21,7 +21,7 @@ import type { SolvedCorner } from './corners.ts';
 import { derived, sized } from './sized.ts';
 import type { OutputCapacitorSizing, SizedValue } from './types.ts';
 
-const CHARGE_SOURCE = 'C·dv/dt = i; Erickson & Maksimović, Fundamentals of Power Electronics, 2nd ed., ch. 2 (from memory for the chapter); docs/methods.md §22';
+const CHARGE_SOURCE = 'C·dv/dt = i; Erickson & Maksimović, Fundamentals of Power Electronics, 2nd ed., ch. 2 (from memory for the chapter); docs/methods.md §23';
 
 /** Charge of a periodic piecewise-linear current above its mean over one period, C. */
 export function chargeAboveMean(w: Waveform): number {

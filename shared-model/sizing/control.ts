@@ -14,7 +14,7 @@
  *   1/(2π√(LC)) (Erickson & Maksimović 2nd ed. ch. 7–8, 12, from memory).
  * - Crossover: below fs/10 and below fz/5 (both common practice); the lowest is recommended. An ESR zero
  *   below that crossover flattens the loop gain's roll-off: the compensator then needs a pole at it.
- * Source: docs/methods.md §13, §17, §22.
+ * Source: docs/methods.md §13, §17, §23.
  */
 import type { Design } from '../design/schema.ts';
 import type { SolvedCorner } from './corners.ts';
@@ -27,7 +27,7 @@ const op = (c: SolvedCorner) => c.evaluation.operatingPoint;
 const f3 = (x: number) => Number(x.toPrecision(3)).toString();
 
 export function sizeDuty(design: Design, corners: readonly SolvedCorner[]): DutySizing {
-  const spec = { unit: '', formula: 'solved duty (power balance with the design losses)', source: 'docs/methods.md §1, §22' };
+  const spec = { unit: '', formula: 'solved duty (power balance with the design losses)', source: 'docs/methods.md §1, §23' };
   const max = sized(corners, (c) => op(c).dutyCycle, { ...spec, reason: 'The duty is largest at the lowest input voltage: {corner}.' });
   const min = sized(corners, (c) => op(c).dutyCycle, { ...spec, smallest: true, reason: 'The duty is smallest at the highest input voltage: {corner}.' });
   const limitReached = corners.some((c) => op(c).warnings.some((w) => w.code === 'duty-limit')) || max.value >= design.spec.maxDuty;

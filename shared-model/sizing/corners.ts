@@ -10,7 +10,7 @@
  * Each corner is a full electro-thermal evaluation of the design with its parts (evaluate): the duty is
  * solved from the power balance with the design's own losses, never from an assumed efficiency.
  * Source: Erickson & Maksimović, Fundamentals of Power Electronics, 2nd ed., ch. 2 (ripple of the buck
- * and boost, from memory for the chapter); the maximum at Vo/2 is worked here (docs/methods.md §22).
+ * and boost, from memory for the chapter); the maximum at Vo/2 is worked here (docs/methods.md §23).
  */
 import type { Design } from '../design/schema.ts';
 import type { Evaluation } from '../ledger/types.ts';

@@ -9,7 +9,7 @@
  *   Cout = ΔI/(8·fs·ΔV); ESRmax = ΔV/ΔI; fp = 1/(2π·R·C); m_a ≥ Vo/(2L).
  * Crossover: min(fs/10, fRHPZ/5) (common practice). Sense loss Isw,rms²·Rs.
  * Source: Erickson & Maksimović, Fundamentals of Power Electronics, 2nd ed., ch. 2 (ripple, capacitor
- * charge), ch. 8 (RHP zero), from memory for chapters; Ridley 1991 (slope); docs/methods.md §1, §13, §17, §22.
+ * charge), ch. 8 (RHP zero), from memory for chapters; Ridley 1991 (slope); docs/methods.md §1, §13, §17, §23.
  */
 export interface HandInput {
   kind: 'buck' | 'boost';

@@ -11,7 +11,7 @@
  * Assumptions: CCM at rated load (in DCM λ = L·Ipk still holds, the ratio loses its meaning — noted);
  * inductance taken at its operating current when it rolls off.
  * Source: Erickson & Maksimović, Fundamentals of Power Electronics, 2nd ed., ch. 2 (inductor ripple,
- * from memory for the chapter); docs/methods.md §1, §22.
+ * from memory for the chapter); docs/methods.md §1, §23.
  */
 import type { Design } from '../design/schema.ts';
 import type { SolvedCorner } from './corners.ts';
@@ -19,7 +19,7 @@ import { sized } from './sized.ts';
 import type { InductorSizing } from './types.ts';
 
 export const DEFAULT_RIPPLE_RATIO = 0.3;
-const ERICKSON = 'Erickson & Maksimović, Fundamentals of Power Electronics, 2nd ed., ch. 2 (from memory for the chapter); docs/methods.md §22';
+const ERICKSON = 'Erickson & Maksimović, Fundamentals of Power Electronics, 2nd ed., ch. 2 (from memory for the chapter); docs/methods.md §23';
 
 const voltSeconds = (c: SolvedCorner) => c.evaluation.operatingPoint.inductanceH * c.evaluation.operatingPoint.inductor.rippleA;
 const meanA = (c: SolvedCorner) => c.evaluation.operatingPoint.inductor.averageA;

@@ -4,7 +4,7 @@
  * design's own losses at the corners of the input range (corners.ts), each result naming its corner.
  * The design's current parts provide the losses that set the duty; the required values are then read
  * against those parts by the design checks (checks.ts).
- * Source: docs/methods.md §22 (and the sections each file names).
+ * Source: docs/methods.md §23 (and the sections each file names).
  */
 import type { Design } from '../design/schema.ts';
 import { sizeInputCapacitor, sizeOutputCapacitor } from './capacitors.ts';

@@ -5,7 +5,7 @@ import type { SolvedCorner } from './corners.ts';
 import { worstCorner } from './corners.ts';
 import type { SizedValue } from './types.ts';
 
-export const SIZING_SOURCE = 'docs/methods.md §22';
+export const SIZING_SOURCE = 'docs/methods.md §23';
 
 export interface SizedSpec {
   unit: string;

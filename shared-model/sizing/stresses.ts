@@ -7,7 +7,7 @@
  * whose ripple grows with Vin). Required rating = stress / derating, with the voltage derating of the
  * design (margins.voltageDerating, default 0.8 in the demos) and the current derating setting (default
  * 0.8 — common practice). Ringing and spikes are not modelled: measure them.
- * Source: common practice (derating); docs/methods.md §1 (currents), §22.
+ * Source: common practice (derating); docs/methods.md §1 (currents), §23.
  */
 import type { Design } from '../design/schema.ts';
 import { DEFAULT_CURRENT_DERATING } from '../compare/role-fit.ts';

@@ -6,8 +6,10 @@
  * Ideal ratio M = 1/(1 − D); the switch and the rectifier block Vo (+ the rectifier drop at the edge); the
  * node rests at Vin in the DCM idle interval, where the rectifier blocks Vo − Vin.
  * The switch-node charge pulses are drawn from the output: they take volt-seconds and move the duty.
- * Small signal (CCM): right-half-plane zero ωz = D'²·R/L, current-mode output pole ωp = 2/(R·C)
- * (docs/methods.md §13).
+ * Small signal (CCM): right-half-plane zero ωz = D'²·R/L, current-mode output pole ωp = (1/R + g)/C with g
+ * the load's incremental conductance — 2/(R·C) for a resistor (docs/methods.md §13), 1/(R·C) for a constant
+ * current, 0 for a constant power (the power stage's constant-power output meets the load's −1/R;
+ * Erickson & Maksimović 2nd ed. ch. 12, the current-programmed boost's simple model [memory]; §22).
  * Source: Erickson & Maksimović 2nd ed. ch. 2 and 8 [memory for chapters]; docs/methods.md §1, §13.
  */
 import type { ConverterTopology } from './types.ts';
@@ -28,12 +30,16 @@ export const boost: ConverterTopology = {
   rectifierIdleBlocks: { input: -1, output: 1 },
   idleNode: 'Vin',
   chargePulsesFromSource: false,
-  smallSignal: (d, loadOhm, inductanceH, capacitanceF) => {
+  smallSignal: (d, loadOhm, inductanceH, capacitanceF, loadConductanceS) => {
     const dp = 1 - d;
     return {
       rhpZeroHz: (dp * dp * loadOhm) / inductanceH / (2 * Math.PI),
-      outputPoleHz: 2 / (loadOhm * capacitanceF) / (2 * Math.PI),
+      // The current-programmed power stage feeds about constant power (output conductance 1/R) beside the
+      // load's own incremental conductance g: ωp = (1/R + g)/C. (A constant-power load behind an output
+      // sense resistor would put it a hair past the origin: shown as 0.)
+      outputPoleHz: Math.max(1 / loadOhm + loadConductanceS, 0) / capacitanceF / (2 * Math.PI),
     };
   },
-  smallSignalMethod: 'RHP zero ωz = D′²·R/L; current-mode output pole ωp = 2/(R·C) (docs/methods.md §13)',
+  smallSignalMethod:
+    'RHP zero ωz = D′²·R/L; current-mode output pole ωp = (1/R + g)/C with g the load\'s incremental conductance: 2/(R·C) for a resistor (docs/methods.md §13), 1/(R·C) for a constant current, 0 for a constant power (docs/methods.md §22)',
 };

@@ -86,8 +86,12 @@ export interface ConverterTopology {
    * volt-seconds (true for a buck); false where they are drawn from the output and move the duty.
    */
   chargePulsesFromSource: boolean;
-  /** Small-signal figures of a CCM point at duty d, load resistance R = Vo/Io, inductance and output capacitance. */
-  smallSignal(d: number, loadOhm: number, inductanceH: number, capacitanceF: number): SmallSignalFigures | undefined;
+  /**
+   * Small-signal figures of a CCM point at duty d, load resistance R = Vo/Io, inductance, output capacitance
+   * and the load's incremental conductance g (operating-point/load.ts: 1/R resistive, 0 constant current,
+   * −1/R constant power).
+   */
+  smallSignal(d: number, loadOhm: number, inductanceH: number, capacitanceF: number, loadConductanceS: number): SmallSignalFigures | undefined;
   /** The small-signal formulas in words and their source (report). */
   smallSignalMethod: string;
 }

@@ -150,7 +150,24 @@ export function parseEngineering(text: string, expectedUnit?: string): Engineeri
   return { ok: true, value, unit: chosen.unit ?? expectedUnit ?? '' };
 }
 
-const trimNumber = (x: number, digits: number): string => String(Number(x.toPrecision(digits)));
+/**
+ * How a formatted number is written. `entry` (the default): the shortest text, trailing zeros dropped and
+ * an ASCII minus, as a person types it back into a field ("4.7 µH", "-1.5 V"). `table`: the digits asked
+ * for with trailing zeros kept and the minus sign U+2212, so a column of numbers lines up ("4.70 µH",
+ * "−1.50 V") — the results on screen and the report print values this way. Both read back with
+ * `parseEngineering`.
+ */
+export type NumberStyle = 'entry' | 'table';
+
+const MINUS = '\u2212';
+
+/** `x` ≥ 0 to `digits` significant digits: trimmed ("4.7") or with its trailing zeros ("4.70"). */
+function digitsOf(x: number, digits: number, style: NumberStyle): string {
+  const rounded = Number(x.toPrecision(digits));
+  if (style === 'entry' || rounded === 0) return String(rounded);
+  const intDigits = Math.floor(Math.log10(rounded) + 1e-12) + 1;
+  return rounded.toFixed(Math.min(20, Math.max(0, digits - intDigits)));
+}
 
 function lengthLike(a: number, unit: string, digits: number): [number, string] {
   if (unit === 'm') return a >= 1 || a === 0 ? [a, 'm'] : a >= 1e-3 ? [a * 1e3, 'mm'] : [a * 1e6, 'µm'];
@@ -159,28 +176,40 @@ function lengthLike(a: number, unit: string, digits: number): [number, string] {
 }
 
 /**
- * Formats `value` (in the canonical `unit`) with an SI prefix and `significantDigits` significant
- * digits, trailing zeros dropped: formatEngineering(4.7e-6, 'H') is "4.7 µH". Units that take no
- * prefix are written plainly ("125 °C", "0.0045 /K"); lengths, areas and volumes use mm, mm², mm³;
- * unit "%" writes a fraction as a percentage. A value that is not finite is written "—".
+ * The engineering prefix for a magnitude already rounded to its printed digits: the power of 1000 that
+ * leaves 1 ≤ mantissa < 1000 (SI Brochure, 9th ed. 2019, Table 7), or undefined outside f … G.
  */
-export function formatEngineering(value: number, unit: string, significantDigits = 3): string {
-  if (!Number.isFinite(value)) return '—';
-  const digits = Math.min(15, Math.max(1, Math.round(Number.isFinite(significantDigits) ? significantDigits : 3)));
-  const sign = value < 0 ? '-' : '';
-  const a = Math.abs(value);
-  const withUnit = (n: string, u: string): string => (u === '' ? `${sign}${n}` : `${sign}${n} ${u}`);
-  if (unit === '%') return withUnit(trimNumber(a * 100, digits), '%');
-  if (unit === 'm' || unit === 'm²' || unit === 'm³') {
-    const [scaled, shown] = lengthLike(a, unit, digits);
-    return withUnit(trimNumber(scaled, digits), shown);
-  }
-  if (unit === '' || UNITS[unit]?.prefixes === false || a === 0) return withUnit(trimNumber(a, digits), unit);
-  const rounded = Number(a.toPrecision(digits));
+function prefixFor(rounded: number): { symbol: string; exponent: number } | undefined {
   let exp = Math.floor(Math.log10(rounded) / 3) * 3;
   if (rounded / 10 ** exp >= 1000) exp += 3;
   if (rounded / 10 ** exp < 1) exp -= 3;
   const prefix = FORMAT_PREFIXES.find(([, e]) => e === exp);
-  if (!prefix) return withUnit(trimNumber(a, digits), unit);
-  return withUnit(trimNumber(rounded / 10 ** exp, digits), `${prefix[0]}${unit}`);
+  return prefix ? { symbol: prefix[0], exponent: exp } : undefined;
+}
+
+/**
+ * The one number formatter of screen, report and command line: `value` (in the canonical `unit`) with an
+ * SI prefix and `significantDigits` significant digits, in the given style (above):
+ * formatEngineering(4.7e-6, 'H') is "4.7 µH", formatEngineering(4.7e-6, 'H', 3, 'table') "4.70 µH".
+ * Units that take no prefix are written plainly ("125 °C", "0.0045 /K"); lengths, areas and volumes use
+ * mm, mm², mm³; unit "%" writes a fraction as a percentage. Zero has no prefix ("0 W"). A value that is
+ * not finite is written "—".
+ */
+export function formatEngineering(value: number, unit: string, significantDigits = 3, style: NumberStyle = 'entry'): string {
+  if (!Number.isFinite(value)) return '—';
+  const digits = Math.min(15, Math.max(1, Math.round(Number.isFinite(significantDigits) ? significantDigits : 3)));
+  const a = Math.abs(value);
+  const sign = value < 0 ? (style === 'table' ? MINUS : '-') : '';
+  const withUnit = (n: string, u: string): string => (u === '' ? `${sign}${n}` : `${sign}${n} ${u}`);
+  const plain = (x: number, u: string): string => withUnit(digitsOf(x, digits, style), u);
+  if (unit === '%') return plain(a * 100, '%');
+  if (unit === 'm' || unit === 'm²' || unit === 'm³') {
+    const [scaled, shown] = lengthLike(a, unit, digits);
+    return plain(scaled, shown);
+  }
+  if (unit === '' || UNITS[unit]?.prefixes === false || a === 0) return a === 0 ? withUnit('0', unit) : plain(a, unit);
+  const rounded = Number(a.toPrecision(digits));
+  const prefix = prefixFor(rounded);
+  if (!prefix) return plain(a, unit);
+  return plain(rounded / 10 ** prefix.exponent, `${prefix.symbol}${unit}`);
 }

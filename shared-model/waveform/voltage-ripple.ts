@@ -8,8 +8,8 @@
  * peak-to-peak values for a piecewise-linear current:
  *   capacitiveV = pk-pk of q/C, esrV = ESR · (max i − min i), totalV = pk-pk of q/C + ESR·i (the two
  *   added in time, not summed as magnitudes and not combined as root-sum-square).
- * Assumptions: ideal capacitance (no bias or temperature derating of C), ESL ignored, the load current is
- * constant over the period. Source: C·dv/dt = i (definition of capacitance); Erickson & Maksimović 2nd ed.
+ * Assumptions: ideal capacitance (no bias or temperature derating of C), ESL ignored; the bank's current is
+ * given (its share of the output node's ripple, which depends on the load kind: operating-point/load.ts). Source: C·dv/dt = i (definition of capacitance); Erickson & Maksimović 2nd ed.
  * ch. 2 (capacitor charge balance and the charge method for ripple) [memory for chapter].
  */
 import type { Waveform } from '../operating-point/types.ts';

@@ -58,6 +58,8 @@ export interface RecentFilesOptions {
   max?: number;
   exists?: (path: string) => Promise<boolean>;
   fs?: JsonFileFs;
+  /** The file in the folder that holds the list (one per kind of document). */
+  fileName?: string;
 }
 
 export class RecentFiles {
@@ -70,7 +72,7 @@ export class RecentFiles {
 
   constructor(folder: string, options: RecentFilesOptions = {}) {
     this.#folder = folder;
-    this.#file = nodePath.join(folder, 'recent-files.json');
+    this.#file = nodePath.join(folder, options.fileName ?? 'recent-files.json');
     this.#platform = options.platform ?? process.platform;
     this.#max = options.max ?? MAX_RECENT;
     this.#exists = options.exists ?? fileExists;

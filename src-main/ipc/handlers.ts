@@ -22,6 +22,7 @@ export interface FileFilter {
 }
 
 export const DESIGN_FILTERS: FileFilter[] = [{ name: 'WattLedger design', extensions: ['json'] }];
+export const LIBRARY_FILTERS: FileFilter[] = [{ name: 'WattLedger parts library', extensions: ['json'] }];
 
 export interface HandlerDeps<S> {
   chooseFileToOpen(sender: S, filters: FileFilter[]): Promise<string | null>;
@@ -31,6 +32,8 @@ export interface HandlerDeps<S> {
   printPage(sender: S, request: PdfRequest): Promise<Uint8Array>;
   grants: GrantedPaths;
   recent: Pick<RecentFiles, 'list' | 'add' | 'remove' | 'has'>;
+  /** The recent parts libraries: a list of its own, so designs and libraries do not crowd each other out. */
+  recentLibraries: Pick<RecentFiles, 'list' | 'add' | 'remove' | 'has'>;
   recovery: Pick<RecoveryStore, 'write' | 'read' | 'clear'>;
   /** Called after every design save attempt (title, close-after-save, menu). */
   designSaved(sender: S, outcome: SaveOutcome): void;
@@ -59,17 +62,43 @@ export function createHandlers<S>(deps: HandlerDeps<S>) {
     return result.readOnly ? { ok: false, cancelled: false, readOnly: true, message: result.message } : { ok: false, cancelled: false, message: result.message };
   }
 
-  /** A path enters the grants and the recent list only here: after the user opened or saved it. */
-  async function remember(path: string): Promise<void> {
+  type Kind = 'design' | 'library';
+  const recentOf = (kind: Kind) => (kind === 'design' ? deps.recent : deps.recentLibraries);
+
+  /** A path enters the grants and a recent list only here: after the user opened or saved it. */
+  async function remember(path: string, kind: Kind = 'design'): Promise<void> {
     deps.grants.grant(path);
-    deps.recentChanged(await deps.recent.add(path));
+    const list = await recentOf(kind).add(path);
+    if (kind === 'design') deps.recentChanged(list);
   }
 
-  async function open(path: string): Promise<OpenedFile | { error: string }> {
+  async function open(path: string, kind: Kind = 'design'): Promise<OpenedFile | { error: string }> {
     const read = await readTextFile(path, deps.readFs);
     if (!read.ok) return { error: read.message };
-    await remember(path);
+    await remember(path, kind);
     return { path: read.path, name: read.name, text: read.text };
+  }
+
+  async function openChosen(sender: S, filters: FileFilter[], kind: Kind): Promise<OpenedFile | null> {
+    const path = await deps.chooseFileToOpen(sender, filters);
+    if (path === null) return null;
+    const opened = await open(path, kind);
+    if ('error' in opened) {
+      await deps.showError(sender, opened.error);
+      return null;
+    }
+    return opened;
+  }
+
+  async function openFromRecent(path: string, kind: Kind): Promise<OpenedFile | { error: string }> {
+    const recent = recentOf(kind);
+    if (!(await recent.has(path))) return { error: `"${nodePath.basename(path)}" is not in the recent ${kind === 'design' ? 'files' : 'libraries'} list.` };
+    const opened = await open(path, kind);
+    if ('error' in opened) {
+      const list = await recent.remove(path);
+      if (kind === 'design') deps.recentChanged(list);
+    }
+    return opened;
   }
 
   /**
@@ -77,7 +106,7 @@ export function createHandlers<S>(deps: HandlerDeps<S>) {
    * user opened or chose it in this session, else to a path chosen in the save dialog; a failure keeps
    * the edit open and says so. Reusable for other document kinds (part libraries).
    */
-  async function saveDocument(sender: S, request: SaveRequest, filters: FileFilter[], extension: string): Promise<SaveOutcome> {
+  async function saveDocument(sender: S, request: SaveRequest, filters: FileFilter[], extension: string, kind: Kind = 'design'): Promise<SaveOutcome> {
     let target = request.path;
     if (target !== null && !deps.grants.has(target)) {
       return { ok: false, cancelled: false, message: `Refused to save to "${nodePath.basename(target)}": WattLedger only writes files you opened or chose in this session. Use Save As.` };
@@ -86,7 +115,7 @@ export function createHandlers<S>(deps: HandlerDeps<S>) {
     if (target === null) return { ok: false, cancelled: true, message: 'Save cancelled.' };
     const outcome = await writeUserFile(target, request.text, true);
     if (!outcome.ok) return { ...outcome, message: `${outcome.message} ${UNSAVED_NOTE}` };
-    await remember(target);
+    await remember(target, kind);
     return outcome;
   }
 
@@ -98,22 +127,8 @@ export function createHandlers<S>(deps: HandlerDeps<S>) {
 
   const invoke = {
     /** A file that cannot be read is reported in a native error box (the contract returns null). */
-    async openDesign(sender: S): Promise<OpenedFile | null> {
-      const path = await deps.chooseFileToOpen(sender, DESIGN_FILTERS);
-      if (path === null) return null;
-      const opened = await open(path);
-      if ('error' in opened) {
-        await deps.showError(sender, opened.error);
-        return null;
-      }
-      return opened;
-    },
-    async openRecent(_sender: S, path: string): Promise<OpenedFile | { error: string }> {
-      if (!(await deps.recent.has(path))) return { error: `"${nodePath.basename(path)}" is not in the recent files list.` };
-      const opened = await open(path);
-      if ('error' in opened) deps.recentChanged(await deps.recent.remove(path));
-      return opened;
-    },
+    openDesign: (sender: S): Promise<OpenedFile | null> => openChosen(sender, DESIGN_FILTERS, 'design'),
+    openRecent: (_sender: S, path: string): Promise<OpenedFile | { error: string }> => openFromRecent(path, 'design'),
     /** The list only: a recent path becomes writable when it is opened again (openRecent), not by being listed. */
     listRecent: (): Promise<string[]> => deps.recent.list(),
     async saveDesign(sender: S, request: SaveRequest): Promise<SaveOutcome> {
@@ -122,6 +137,11 @@ export function createHandlers<S>(deps: HandlerDeps<S>) {
       deps.designSaved(sender, outcome);
       return outcome;
     },
+    /** Parts libraries: the same safe reads and atomic writes as designs, with their own recent list. */
+    openLibrary: (sender: S): Promise<OpenedFile | null> => openChosen(sender, LIBRARY_FILTERS, 'library'),
+    openRecentLibrary: (_sender: S, path: string): Promise<OpenedFile | { error: string }> => openFromRecent(path, 'library'),
+    listRecentLibraries: (): Promise<string[]> => deps.recentLibraries.list(),
+    saveLibrary: (sender: S, request: SaveRequest): Promise<SaveOutcome> => saveDocument(sender, request, LIBRARY_FILTERS, 'json', 'library'),
     async exportFile(sender: S, request: ExportRequest): Promise<SaveOutcome> {
       const data = request.encoding === 'base64' ? new Uint8Array(Buffer.from(request.content, 'base64')) : request.content;
       const name = withExtension(request.suggestedName, request.extensions[0] ?? 'txt');

@@ -27,6 +27,7 @@ export interface AppContext {
   quitting: boolean;
   grants: GrantedPaths;
   recent: RecentFiles;
+  recentLibraries: RecentFiles;
   recovery: RecoveryStore;
   /** Paths opened from outside before the IPC handlers existed. */
   queuedPaths: string[];
@@ -57,6 +58,7 @@ export function createContext(appRoot: string, userData: string, packaged: boole
     quitting: false,
     grants: new GrantedPaths(),
     recent: new RecentFiles(userData),
+    recentLibraries: new RecentFiles(userData, { fileName: 'recent-libraries.json' }),
     recovery: new RecoveryStore(userData),
     queuedPaths: [],
     pendingFiles: [],

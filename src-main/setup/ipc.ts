@@ -48,6 +48,7 @@ export function setupIpc(context: AppContext): ReturnType<typeof createHandlers<
       new Uint8Array(await sender.printToPDF({ pageSize: request.pageSize, printBackground: true, preferCSSPageSize: true, generateDocumentOutline: false })),
     grants: context.grants,
     recent: context.recent,
+    recentLibraries: context.recentLibraries,
     recovery: context.recovery,
     designSaved: (_sender, outcome) => designSaved(context, outcome),
     documentStateChanged: (_sender, state) => documentStateChanged(context, state),

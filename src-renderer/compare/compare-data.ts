@@ -74,6 +74,6 @@ export function differenceSeries(comparison: Comparison): LineSeries[] {
 export function crossoverSentences(comparison: Comparison): string[] {
   const name = (id: string) => comparison.alternatives.find((a) => a.partId === id)?.partName ?? id;
   return comparison.crossovers.map(
-    (c) => `At ${formatEngineering(c.load, 'A', 4)}: below it ${name(c.fromPartId)} loses less, above it ${name(c.toPartId)} does (${c.method === 'refined' ? 'found on the engine' : 'interpolated'}).`,
+    (c) => `At ${formatEngineering(c.load, 'A', 4, 'table')}: below it ${name(c.fromPartId)} loses less, above it ${name(c.toPartId)} does (${c.method === 'refined' ? 'found on the engine' : 'interpolated'}).`,
   );
 }

@@ -13,6 +13,21 @@ export const SPEC_FIELDS: FieldSpec[] = [
   num('maxDuty', 'Largest duty cycle', '', { help: 'A fraction below 1 ("0.9" or "90 %").' }),
 ];
 
+export const LOAD_KIND_CHOICE: ChoiceSpec = {
+  type: 'choice',
+  key: 'loadKind',
+  label: 'The load is',
+  options: [
+    { value: 'constant-current', label: 'A constant current' },
+    { value: 'resistive', label: 'A resistor (Vout / load current)' },
+    { value: 'constant-power', label: 'A constant power (Vout × load current)' },
+  ],
+};
+
+/** What the load-kind choice means, shown under it. */
+export const LOAD_KIND_HELP =
+  'Sets how the output ripple current divides between the output capacitors and the load: a resistor takes a share, a constant-power load pushes more into the capacitors.';
+
 export const TARGET_FIELDS: FieldSpec[] = [
   num('efficiencyAtRated', 'Efficiency at rated load', '', { optional: true, help: 'The report says whether the rated point meets it; the Monte Carlo counts the samples that do.' }),
   num('outputRippleV', 'Output ripple, peak to peak', 'V', { optional: true, help: 'Kept with the design; not yet checked against the results.' }),

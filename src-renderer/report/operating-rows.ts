@@ -9,7 +9,7 @@ import {
   formatDuty,
   formatMarginFraction,
   formatPercent,
-  formatSi,
+  formatEngineering,
   formatVolts,
   formatWatts,
   roleLabel,
@@ -23,7 +23,7 @@ export interface OperatingRow {
 function checkCell(e: Evaluation, part: RatingCheck['part'], check: RatingCheck['check']): string {
   const c = e.checks.find((x) => x.part === part && x.check === check);
   if (!c) return '—';
-  return `${formatSi(c.value, c.unit)} / ${formatSi(c.limit, c.unit)} · ${formatMarginFraction(c.marginFraction)}`;
+  return `${formatEngineering(c.value, c.unit, 3, 'table')} / ${formatEngineering(c.limit, c.unit, 3, 'table')} · ${formatMarginFraction(c.marginFraction)}`;
 }
 
 export function operatingRows(cases: readonly InputVoltageCase[]): OperatingRow[] {

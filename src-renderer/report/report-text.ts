@@ -11,7 +11,7 @@ import {
   formatMarginFraction,
   formatPercent,
   formatQuantity,
-  formatSi,
+  formatEngineering,
   roleLabel,
   topologyOf,
 } from '../../shared-model/index.ts';
@@ -28,7 +28,7 @@ export function topologySentence(d: Design): string {
         ? ', forced PWM at light load (current may reverse, stays in CCM)'
         : ', diode emulation at light load (enters DCM)'
       : '';
-  const dead = t.rectifier === 'synchronous' ? `; dead times ${formatSi(t.deadTimeBeforeOnS, 's')} before turn-on and ${formatSi(t.deadTimeAfterOffS, 's')} after turn-off` : '';
+  const dead = t.rectifier === 'synchronous' ? `; dead times ${formatEngineering(t.deadTimeBeforeOnS, 's', 3, 'table')} before turn-on and ${formatEngineering(t.deadTimeAfterOffS, 's', 3, 'table')} after turn-off` : '';
   const sense = t.senseLocation === 'none' ? '; no current-sense resistor' : `; current-sense resistor in the ${t.senseLocation} path`;
   return `${kind[0]!.toUpperCase()}${kind.slice(1)} converter with a ${rect}${light}, switching at ${formatHertz(d.spec.switchingFrequencyHz)}${dead}${sense}.`;
 }
@@ -61,7 +61,7 @@ export function checkText(c: RatingCheck): { value: string; limit: string; margi
   const f = (x: number): string => {
     if (c.unit === '°C') return formatCelsius(x);
     if (c.unit === 'h') return formatHours(x);
-    return formatSi(x, c.unit, 3);
+    return formatEngineering(x, c.unit, 3, 'table');
   };
   return { value: f(c.value), limit: f(c.limit), margin: formatMarginFraction(c.marginFraction) };
 }

@@ -25,7 +25,7 @@ export function noticesOf(evaluation: Evaluation, landmarks: Landmarks | null, l
     out.push({
       key: 'ceiling',
       severity: 'caution',
-      text: `Thermal ceiling at ${formatEngineering(ceiling.load, 'A', 3)}: above this load the ${labelOf(ceiling.part).toLowerCase()} (${ceiling.partName}) — ${what} (estimate).`,
+      text: `Thermal ceiling at ${formatEngineering(ceiling.load, 'A', 3, 'table')}: above this load the ${labelOf(ceiling.part).toLowerCase()} (${ceiling.partName}) — ${what} (estimate).`,
       path: ceiling.limitKind === 'touch' ? `thermal.touch.${ceiling.part}` : `thermal.paths.${ceiling.part}`,
     });
   }
@@ -34,7 +34,7 @@ export function noticesOf(evaluation: Evaluation, landmarks: Landmarks | null, l
     out.push({
       key: 'regulation',
       severity: 'caution',
-      text: `Beyond ${formatEngineering(regulation.load, 'A', 3)} the converter cannot regulate (${regulation.cause ?? 'limit'}${regulation.note ? `; ${regulation.note}` : ''}).`,
+      text: `Beyond ${formatEngineering(regulation.load, 'A', 3, 'table')} the converter cannot regulate (${regulation.cause ?? 'limit'}${regulation.note ? `; ${regulation.note}` : ''}).`,
       path: 'spec.maxDuty',
     });
   }

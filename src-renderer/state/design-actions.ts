@@ -2,20 +2,12 @@
  * Design edits that touch several fields at once, each recorded as one undo step: rectifier and
  * sense-resistor switches, picking a part from the library, heatsinks.
  */
+import { partInRole, ROLE_LABELS } from '../../shared-model/index.ts';
 import type { Design, Heatsink, Part, Role, ThermalPath } from '../../shared-model/index.ts';
 import { uniqueId } from './library-data.ts';
 import { stashRemoved, withRectifier, withSenseLocation } from './topology-edits.ts';
 import type { Workspace } from './workspace.svelte.ts';
 
-export const ROLE_LABELS: Record<Role, string> = {
-  switch: 'Control switch',
-  rectifier: 'Rectifier',
-  inductor: 'Inductor',
-  inputCapacitor: 'Input capacitor',
-  outputCapacitor: 'Output capacitor',
-  senseResistor: 'Current-sense resistor',
-  controller: 'Controller and gate driver',
-};
 
 /** The part kinds that may fill a role in the current design. */
 export function kindForRole(design: Design, role: Role): Part['kind'] {
@@ -73,18 +65,12 @@ export function usePart(ws: Workspace, role: Role, partId: string): void {
   ws.doc.commit({ ...design, parts } as Design, `Use ${part.name} as ${ROLE_LABELS[role].toLowerCase()}`);
 }
 
-/** The part record that fills `role` (capacitor slots hold it under `.part`). */
-export function partOfRole(design: Design, role: Role): Part | undefined {
-  if (role === 'inputCapacitor' || role === 'outputCapacitor') return design.parts[role].part;
-  return design.parts[role];
-}
-
 export function partPath(role: Role): string[] {
   return role === 'inputCapacitor' || role === 'outputCapacitor' ? ['parts', role, 'part'] : ['parts', role];
 }
 
 export function addToLibrary(ws: Workspace, role: Role): void {
-  const part = partOfRole(ws.doc.design, role);
+  const part = partInRole(ws.doc.design, role);
   if (!part) return;
   const stored = ws.library.add(structuredClone(part));
   ws.messages.success(`Added ${stored.name} to the part library${stored.id === part.id ? '' : ` as ${stored.id}`}.`);

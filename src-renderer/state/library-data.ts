@@ -58,6 +58,7 @@ export function libraryFileText(parts: readonly Part[]): string {
   const file: PartsLibrary = {
     format: LIBRARY_FORMAT,
     version: LIBRARY_VERSION,
+    id: 'my-wattledger-parts',
     name: 'My WattLedger parts',
     notes: 'Exported from the WattLedger part library. Parts marked invented describe no real product.',
     parts: [...parts],
@@ -105,7 +106,7 @@ export function partsOfKind<K extends PartKind>(parts: readonly Part[], kind: K)
  * allowed range): the part is checked as a one-part library and the "parts[0]." prefix removed.
  */
 export function partProblems(part: unknown): ReadonlyMap<string, { path: string; message: string }[]> {
-  const check = validatePartsLibrary({ format: PARTS_LIBRARY_FORMAT, version: PARTS_LIBRARY_VERSION, name: 'draft', notes: '', parts: [part] });
+  const check = validatePartsLibrary({ format: PARTS_LIBRARY_FORMAT, version: PARTS_LIBRARY_VERSION, id: 'draft', name: 'draft', notes: '', parts: [part] });
   if (check.ok) return groupByPath([]);
   return groupByPath(
     check.problems.map((problem) => ({

@@ -35,6 +35,18 @@ describe('editing the design', () => {
       await app.screenshot('design-edited');
     }));
 
+  it('offers what the load is: a file without it shows a constant current; a resistor changes the results', () =>
+    suite.run(async (app) => {
+      const { page } = app;
+      expect(demoDesign().spec.loadKind).toBeUndefined(); // the demo leaves the field out (issue 10 §3: constant current by default)
+      await expect(field(page, 'spec.loadKind').inputValue()).resolves.toBe('constant-current');
+      const before = await readOperatingPoint(page);
+      await field(page, 'spec.loadKind').selectOption('resistive');
+      const edited: Design = { ...demoDesign(), spec: { ...demoDesign().spec, loadKind: 'resistive' } };
+      await expectTableOf(page, edited); // engine in Node, the same design
+      expect(await readOperatingPoint(page)).not.toEqual(before); // a resistor takes part of the output ripple current
+    }));
+
   it('marks text that is not a number in place and keeps the last valid results', () =>
     suite.run(async (app) => {
       const { page } = app;

@@ -9,6 +9,8 @@ export interface DesignSketch {
   kind: 'buck' | 'boost';
   rectifier: 'diode' | 'synchronous';
   lightLoad?: Topology['lightLoad'];
+  /** spec.loadKind (absent: left out of the document, a constant-current sink). */
+  loadKind?: Design['spec']['loadKind'];
   vinV: number;
   voutV: number;
   loadA: number;
@@ -161,6 +163,7 @@ export function makeDesign(s: DesignSketch): Design {
       switchingFrequencyHz: s.fsHz,
       ambientC: s.ambientC ?? 25,
       maxDuty: s.maxDuty ?? 0.95,
+      ...(s.loadKind ? { loadKind: s.loadKind } : {}),
     },
     topology: {
       kind: s.kind,

@@ -5,7 +5,10 @@
  * Element models (the same as switched-circuit.ts, written here node by node from the circuit diagram):
  * switch = resistor Rsw while on; rectifier = resistor Rrect (synchronous FET, both directions) or a
  * diode VF0 + Rd·i that conducts only forward; inductor L with DCR; output bank C with ESR in series;
- * load a resistor R = Vo/Io (plus an output sense resistor in its loop); a sense resistor Rs in the
+ * load a resistor R = Vo/Io (plus an output sense resistor in its loop), or — when the design says
+ * spec.loadKind "constant-current" or leaves it out — a sink drawing Io whatever its voltage
+ * (vn = vC + ESR·(inode − Io), iR = Io); a constant-power load is not simulated here (its negative
+ * incremental resistance makes a fixed-duty transient drift; the shooting reference solves it directly); a sense resistor Rs in the
  * switch, inductor or output loop, or at the input (stiff input: Vin' = Vin − Rs·Iin, Iin the DC source
  * current, since the input capacitor carries all AC — the same assumption as the engine and the shooting
  * reference). States iL, vC; the output node voltage follows from Kirchhoff's current law at the node:
@@ -35,6 +38,8 @@ export interface Elements {
   inputEsrOhm: number;
   /** Vo/Io (Infinity without load). */
   loadOhm: number;
+  /** The load is a constant-current sink of Io (the design's loadKind, absent: constant current). */
+  sinkA: number | null;
   switchOhm: number;
   /** Synchronous rectifier RDS(on), or the diode's Rd. */
   rectifierOhm: number;
@@ -72,6 +77,7 @@ export function elementsOf(design: Design, conditions: Conditions, conduction: C
     outputEsrOhm: conduction.outputCapacitorEsrOhm ?? outBank.part.esrOhm / outBank.count,
     inputEsrOhm: inBank.part.esrOhm / inBank.count,
     loadOhm: conditions.loadA > 0 ? spec.voutV / conditions.loadA : Infinity,
+    sinkA: sinkOf(spec.loadKind, conditions.loadA),
     switchOhm: conduction.switchOnOhm,
     rectifierOhm: synchronous ? conduction.rectifierOnOhm : conduction.diodeRdOhm,
     vf0V: synchronous ? 0 : conduction.diodeVf0V,
@@ -81,6 +87,11 @@ export function elementsOf(design: Design, conditions: Conditions, conduction: C
     blocks: !synchronous || topology.lightLoad === 'diode-emulation',
     periodS: 1 / conditions.switchingFrequencyHz,
   };
+}
+
+function sinkOf(kind: string | undefined, loadA: number): number | null {
+  if (kind === 'constant-power') throw new Error('cycle-by-cycle reference: a constant-power load is not simulated (see the header)');
+  return kind === 'resistive' ? null : loadA;
 }
 
 /** Sense resistance in the given loop (0 elsewhere). */
@@ -103,8 +114,9 @@ export function derivative(e: Elements, kind: Interval, vin1: number): Derivativ
     const iL = kind === 'idle' ? 0 : y[IL];
     const vC = y[VC];
     const inode = feeds ? iL : 0;
-    const vn = finite ? ((vC + esr * inode) * rl) / (rl + esr) : vC + esr * inode;
-    const iR = finite ? vn / rl : 0;
+    const sink = e.sinkA;
+    const vn = sink !== null ? vC + esr * (inode - sink) : finite ? ((vC + esr * inode) * rl) / (rl + esr) : vC + esr * inode;
+    const iR = sink !== null ? sink : finite ? vn / rl : 0;
     const iC = inode - iR;
     let vL = 0;
     if (kind === 'on') vL = e.boost ? vin1 - iL * (rInductor + rSwitch) : vin1 - iL * (rSwitch + rInductor) - vn;

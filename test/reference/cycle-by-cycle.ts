@@ -76,7 +76,7 @@ const MOMENTS = { inductor: [K.INT_IL, K.INT_IL2], capacitor: [K.INT_IC, K.INT_I
 
 /**
  * Periodic steady state of `design` at `conditions`, driven at `dutyCycle`, by cycle-by-cycle
- * simulation; the load is a resistor R = Vout/Io.
+ * simulation; the load is a resistor R = Vout/Io or a constant-current sink (cycle-by-cycle-circuit.ts).
  */
 export function simulateCycles(
   design: Design,
@@ -211,7 +211,7 @@ export function simulateCycles(
     mode: idle ? 'DCM' : 'CCM',
     dutyCycle,
     rectifierFraction: offTime,
-    voutV: Number.isFinite(e.loadOhm) ? sums.load[0] * e.loadOhm : sums.vn,
+    voutV: e.sinkA !== null ? sums.vn - K.senseIn(e, 'output') * e.sinkA : Number.isFinite(e.loadOhm) ? sums.load[0] * e.loadOhm : sums.vn,
     inputA: e.boost ? sums.inductor[0] : sums.switch[0],
     inductorPeakA: peak,
     inductorValleyA: valleyNow,

@@ -9,8 +9,9 @@
  * 20–120 % of the rated mean current, output ripple 0.05–0.3 % of Vout, any sense-resistor location.
  * The ideal formulas (docs/methods.md §1–2) only size the parts.
  *
- * The analytic engine assumes straight-line currents and a constant load current; the reference has
- * neither assumption. Three bounds keep the drawn designs where those assumptions are meant to hold
+ * Every drawn design states a resistive load (spec.loadKind), which both references model exactly. The
+ * analytic engine assumes straight-line currents and a capacitor bank that is an AC short over a period
+ * (its voltage ripple drives no load current); the reference has neither assumption. Three bounds keep the drawn designs where those assumptions are meant to hold
  * (measured: the discrepancy grows roughly in proportion to each quantity beyond them):
  * - curvature λ = ΣR·T/L · ΔI/|IL| ≤ LAMBDA_MAX (resistances are scaled down to meet it): the inductor
  *   slope changes with its own current through the resistances; the straight-line error in a branch
@@ -61,18 +62,23 @@ export const ESR_MAX_LOAD_FRACTION_INV = 600;
 
 const SENSE: Topology['senseLocation'][] = ['none', 'input', 'switch', 'inductor', 'output'];
 
+/** The ratings every drawn design starts from (see the header): Vin, Vout, load, fs, ideal duty and IL. */
+export function drawRatings(rand: () => number, buck: boolean) {
+  const vinV = buck ? uniform(rand, 5, 48) : uniform(rand, 3, 24);
+  const voutV = buck ? vinV * uniform(rand, 0.15, 0.75) : vinV * uniform(rand, 1.3, 3.5);
+  const loadA = logUniform(rand, 0.5, 10);
+  const fsHz = logUniform(rand, 100e3, 1e6);
+  const d = buck ? voutV / vinV : 1 - vinV / voutV;
+  return { vinV, voutV, loadA, fsHz, d, inductorA: buck ? loadA : loadA / (1 - d) };
+}
+
 export function randomCases(seed: number, perFamily: number, lambdaMax = LAMBDA_MAX): RandomCase[] {
   const rand = mulberry32(seed);
   const cases: RandomCase[] = [];
   for (let rep = 0; rep < perFamily; rep++) {
     for (const f of FAMILIES) {
       const buck = f.kind === 'buck';
-      const vinV = buck ? uniform(rand, 5, 48) : uniform(rand, 3, 24);
-      const voutV = buck ? vinV * uniform(rand, 0.15, 0.75) : vinV * uniform(rand, 1.3, 3.5);
-      const ratedA = logUniform(rand, 0.5, 10);
-      const fsHz = logUniform(rand, 100e3, 1e6);
-      const d = buck ? voutV / vinV : 1 - vinV / voutV;
-      const ilRated = buck ? ratedA : ratedA / (1 - d);
+      const { vinV, voutV, loadA: ratedA, fsHz, d, inductorA: ilRated } = drawRatings(rand, buck);
       // Each resistive drop at the rated inductor current: 0.2–1.5 % of the smaller terminal voltage.
       const rOf = () => (Math.min(vinV, voutV) / ilRated) * uniform(rand, 0.002, 0.015);
       const ripple = uniform(rand, 0.2, 1.2) * ilRated;
@@ -99,6 +105,7 @@ export function randomCases(seed: number, perFamily: number, lambdaMax = LAMBDA_
         kind: f.kind,
         rectifier: f.rectifier,
         lightLoad: f.lightLoad,
+        loadKind: 'resistive',
         vinV,
         voutV,
         loadA: ratedA,

@@ -12,12 +12,15 @@
  *   idle:      iL ≡ 0 (rectifier blocking, DCM)
  *   always:    C·vC' = inode − vn/Rl
  * with Ron,loop = RDS,sw + DCR + Rsense(switch|inductor), Roff,loop = Rrect + DCR + Rsense(inductor) and
- * the load a resistor R = Vo/Io. Stiff input: Vin' = Vin − Rsense(input)·Iin with Iin the DC source
+ * the load a resistor R = Vo/Io. A load of another kind is given in Norton form seen from the node,
+ * iload = J + vn/Rl (Rl may be infinite or negative): then, from the current law at the node,
+ *   vn = α·vC + β·inode − β·J,  α = 1/(1 + ESR/Rl), β = ESR·α,  C·vC' = inode − iload. Stiff input: Vin' = Vin − Rsense(input)·Iin with Iin the DC source
  * current (the input capacitor supplies all AC), the same assumption the analytic engine states.
  * Source: Kirchhoff's voltage and current laws on the circuit diagram; nothing from the engine.
  */
 
-export type Row = [number, number];
+/** Coefficients on [iL, vC] and an optional constant term. */
+export type Row = [number, number] | [number, number, number];
 
 export interface IntervalSystem {
   /** x' = A·x + b, A row-major 2×2. */
@@ -37,8 +40,11 @@ export interface CircuitValues {
   inductanceH: number;
   capacitanceF: number;
   esrOhm: number;
-  /** Load resistance plus an output sense resistor (Infinity for no load). */
+  /** Load resistance plus an output sense resistor (Infinity for no load or a pure current sink; negative
+   *  for the incremental resistance of a constant-power load). */
   loadLoopOhm: number;
+  /** Constant current of the load's Norton form (0 for a resistor), A. */
+  loadSinkA?: number;
   onLoopOhm: number;
   offLoopOhm: number;
   vf0V: number;
@@ -48,14 +54,16 @@ export type IntervalKind = 'on' | 'off' | 'idle';
 
 export function intervalSystem(v: CircuitValues, kind: IntervalKind, vin1: number): IntervalSystem {
   const g = Number.isFinite(v.loadLoopOhm) ? 1 / v.loadLoopOhm : 0;
-  const alpha = g > 0 ? v.loadLoopOhm / (v.loadLoopOhm + v.esrOhm) : 1;
-  const beta = g > 0 ? (v.loadLoopOhm * v.esrOhm) / (v.loadLoopOhm + v.esrOhm) : v.esrOhm;
+  const alpha = g !== 0 ? v.loadLoopOhm / (v.loadLoopOhm + v.esrOhm) : 1;
+  const beta = g !== 0 ? (v.loadLoopOhm * v.esrOhm) / (v.loadLoopOhm + v.esrOhm) : v.esrOhm;
+  const sink = v.loadSinkA ?? 0;
+  const gamma = -beta * sink;
   const L = v.inductanceH;
   const C = v.capacitanceF;
   const feeds = kind === 'off' || (kind === 'on' && !v.boost);
   const node: Row = feeds ? [1, 0] : [0, 0];
-  const vn: Row = [beta * node[0], alpha];
-  const cap: Row = [node[0] - g * vn[0], -g * vn[1]];
+  const vn: [number, number, number] = [beta * node[0], alpha, gamma];
+  const cap: [number, number, number] = [node[0] - g * vn[0], -g * vn[1], -sink - g * gamma];
   let a0: number;
   let a1: number;
   let b0: number;
@@ -66,21 +74,21 @@ export function intervalSystem(v: CircuitValues, kind: IntervalKind, vin1: numbe
   } else if (kind === 'on') {
     a0 = v.boost ? -v.onLoopOhm / L : -(v.onLoopOhm + beta) / L;
     a1 = v.boost ? 0 : -alpha / L;
-    b0 = vin1 / L;
+    b0 = (vin1 - (v.boost ? 0 : gamma)) / L;
   } else {
     a0 = -(v.offLoopOhm + beta) / L;
     a1 = -alpha / L;
-    b0 = ((v.boost ? vin1 : 0) - v.vf0V) / L;
+    b0 = ((v.boost ? vin1 : 0) - v.vf0V - gamma) / L;
   }
   return {
     a: [a0, a1, cap[0] / C, cap[1] / C],
-    b: [b0, 0],
+    b: [b0, cap[2] / C],
     switchA: kind === 'on' ? [1, 0] : [0, 0],
     rectifierA: kind === 'off' ? [1, 0] : [0, 0],
     nodeA: node,
     outputNodeV: vn,
     capacitorA: cap,
-    loadA: [g * vn[0], g * vn[1]],
+    loadA: [g * vn[0], g * vn[1], sink + g * gamma],
   };
 }
 

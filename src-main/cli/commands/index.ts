@@ -9,5 +9,6 @@ import { sweepCommand } from './sweep.ts';
 import { compareCommand } from './compare.ts';
 import { toleranceCommand } from './tolerance.ts';
 import { reportCommand } from './report.ts';
+import { fitCommand } from './fit.ts';
 
-export const COMMANDS: readonly Command[] = [pointCommand, evaluateCommand, sweepCommand, compareCommand, toleranceCommand, reportCommand];
+export const COMMANDS: readonly Command[] = [pointCommand, evaluateCommand, sweepCommand, compareCommand, toleranceCommand, fitCommand, reportCommand];

@@ -154,7 +154,7 @@ describe('the invented parts library', () => {
     lib.parts.push(lib.parts[0]);
     const dup = validatePartsLibrary(lib);
     expect(dup.ok ? [] : dup.problems.map((p) => p.path)).toEqual([`parts[${lib.parts.length - 1}].id`]);
-    const newer = validatePartsLibrary({ ...lib, version: 2 });
-    expect(newer.ok ? '' : newer.problems[0]?.message).toContain('made by a newer WattLedger: version 2');
+    const newer = validatePartsLibrary({ ...lib, version: 3 });
+    expect(newer.ok ? '' : newer.problems[0]?.message).toContain('made by a newer WattLedger: version 3');
   });
 });

@@ -28,12 +28,25 @@ describe('solveOperatingPoint — boost with inductor resistance (docs/methods.m
     closeTo(op.outputPowerW / (VIN * op.waveforms.inputA), eta, 1e-10); // docs/methods.md §3: η = Pout/Pin with Pin = Vin·IL
   });
 
-  it('small-signal landmarks: RHP zero D\'²R/L and current-mode pole 2/(RC), in Hz', () => {
-    const op = solveOperatingPoint(designOf(sketch), conditionsOf(sketch), cp);
+  it('small-signal landmarks of a resistive load: RHP zero D\'²R/L and current-mode pole 2/(RC), in Hz', () => {
+    const s = { ...sketch, loadKind: 'resistive' as const }; // docs/methods.md §13 states the landmarks for a load resistor R
+    const op = solveOperatingPoint(designOf(s), conditionsOf(s), cp);
     const ss = op.smallSignal;
     expect(ss).toBeDefined(); // issue 2 §3: boost small-signal landmarks in CCM
     closeTo(ss!.rhpZeroHz, (0.25 * R) / 47e-6 / (2 * Math.PI), 1e-9); // docs/methods.md §13: ωz = D'²R/L
     closeTo(ss!.outputPoleHz, 2 / (R * 100e-6) / (2 * Math.PI), 1e-12); // docs/methods.md §13: ωp = 2/(RC)
+  });
+
+  it('the current-mode output pole follows the load: 1/(RC) for a current sink, at the origin for constant power', () => {
+    // The power stage at a fixed peak current feeds about constant power (conductance 1/R at the output);
+    // the load adds its own incremental conductance: 1/R resistive, 0 current sink, −1/R constant power
+    // (Erickson & Maksimović 2nd ed. ch. 12, simple model of the current-programmed boost [memory]).
+    const sink = solveOperatingPoint(designOf(sketch), conditionsOf(sketch), cp).smallSignal!;
+    closeTo(sink.outputPoleHz, 1 / (R * 100e-6) / (2 * Math.PI), 1e-12); // ωp = (1/R + 0)/C, from memory (above)
+    closeTo(sink.rhpZeroHz, (0.25 * R) / 47e-6 / (2 * Math.PI), 1e-9); // docs/methods.md §13: the RHP zero does not depend on the load kind
+    const cpl = { ...sketch, loadKind: 'constant-power' as const };
+    const power = solveOperatingPoint(designOf(cpl), conditionsOf(cpl), cp).smallSignal!;
+    closeTo(power.outputPoleHz, 0, 0, 1e-9); // ωp = (1/R − 1/R)/C = 0, from memory (above)
   });
 
   it('beyond the maximum ratio it says so and reports the highest output instead', () => {

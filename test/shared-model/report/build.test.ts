@@ -87,6 +87,19 @@ describe.each(['synchronous-buck', 'diode-boost'])('buildReport on the %s demo',
   });
 });
 
+describe('buildReport method section: the load model used', () => {
+  it.each([
+    [undefined, 'load-constant-current'],
+    ['resistive', 'load-resistive'],
+    ['constant-power', 'load-constant-power'],
+  ] as const)('spec.loadKind %s states %s and no other load model', (kind, id) => {
+    const base = demoDesign('synchronous-buck');
+    const design = { ...base, spec: { ...base.spec, ...(kind ? { loadKind: kind } : {}) } };
+    const ids = buildReport({ design, documentText: designText(design), date: '2026-12-05', appVersion: 'test', sweepPoints: 8, familyPoints: 4 }).methods.map((m) => m.id);
+    expect(ids.filter((x) => x.startsWith('load-'))).toEqual([id]); // issue 10 §3: the report's method section states the load model used
+  });
+});
+
 describe('buildReport title block', () => {
   it('hashes the document text with SHA-256 and passes date, version and project through', () => {
     const design = demoDesign('hot-fin-buck');

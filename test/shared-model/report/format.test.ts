@@ -10,9 +10,8 @@ import {
   formatHours,
   formatKelvin,
   formatPercent,
-  formatPlain,
   formatQuantity,
-  formatSi,
+  formatEngineering,
 } from '../../../shared-model/index.ts';
 
 // Independent reader of a formatted SI value: number, optional prefix, unit (SI Brochure Table 7).
@@ -23,13 +22,25 @@ function readSi(text: string, unit: string): number {
   return (m[1] ? -1 : 1) * Number(m[2]) * PREFIX[m[3] ?? '']!;
 }
 
-describe('formatSi', () => {
+const formatSi = (value: number, unit: string): string => formatEngineering(value, unit, 3, 'table');
+
+describe('formatEngineering, table style (the report and the results on screen)', () => {
   it('keeps three significant digits with trailing zeros and the SI prefix', () => {
     expect(formatSi(1.104, 'W')).toBe('1.10 W'); // toPrecision(3) of 1.104 is "1.10" (ECMA-262)
     expect(formatSi(0.0042, 'W')).toBe('4.20 mW'); // 4.2e-3 W = 4.20 mW (SI Brochure Table 7)
     expect(formatSi(4.7e-6, 'H')).toBe('4.70 µH'); // 4.7e-6 H = 4.70 µH (SI Brochure Table 7)
     expect(formatSi(450e3, 'Hz')).toBe('450 kHz'); // 450e3 Hz = 450 kHz (SI Brochure Table 7)
     expect(formatSi(0, 'W')).toBe('0 W'); // definition: zero carries no prefix
+    expect(formatSi(-0.0042, 'W')).toBe('\u22124.20 mW'); // minus sign U+2212 (ISO 80000-1 §7.1.4, from memory)
+  });
+
+  it('prints the same value as the entry style, differing only in the kept zeros and the minus sign', () => {
+    for (const [value, unit] of [[4.7e-6, 'H'], [-1.5, 'V'], [0.0042, 'W'], [450e3, 'Hz'], [1e-15, 'F']] as const) {
+      const entry = formatEngineering(value, unit, 3);
+      const table = formatSi(value, unit);
+      expect(Number.parseFloat(table.replace('\u2212', '-')), `${entry} / ${table}`).toBe(Number.parseFloat(entry)); // one prefix algorithm: same mantissa, same prefix (SI Brochure Table 7)
+      expect(table.replace(/^[^ ]+/, ''), `${entry} / ${table}`).toBe(entry.replace(/^[^ ]+/, '')); // same prefix and unit
+    }
   });
 
   it('moves to the next prefix when rounding reaches 1000', () => {
@@ -71,7 +82,7 @@ describe('fixed formats', () => {
   });
 
   it('print plain quantities without prefixes', () => {
-    expect(formatPlain(0.95)).toBe('0.950'); // toPrecision(3) (ECMA-262)
+    expect(formatEngineering(0.95, '', 3, 'table')).toBe('0.950'); // toPrecision(3) (ECMA-262)
     expect(formatQuantity(0.478, '')).toBe('0.478'); // a ratio has no unit and no prefix (definition)
     expect(formatQuantity(46.83, '°C')).toBe('46.8 °C'); // temperatures with one decimal (definition)
     expect(formatQuantity(1.2e-9, 'C')).toBe('1.20 nC'); // SI Brochure Table 7

@@ -2,7 +2,7 @@
  * The textbook hand sizing from an assumed efficiency, on the lecture's boost case (5 V → 12 V, 2 A,
  * 120 kHz, 120 mV output ripple, 80 % assumed efficiency, 30 % inductor ripple, 10 mΩ switch shunt).
  * Every expected value was worked here from the published formula named on its line
- * (docs/methods.md §22 lists the working).
+ * (docs/methods.md §23 lists the working).
  */
 import { describe, expect, test } from 'vitest';
 import { handSizing } from '../../../shared-model/index.ts';

@@ -33,6 +33,7 @@ beforeEach(async () => {
     printPage: vi.fn(async () => new TextEncoder().encode('%PDF-1.7 fake')),
     grants: new GrantedPaths('linux'),
     recent: new RecentFiles(userData, { platform: 'linux' }),
+    recentLibraries: new RecentFiles(userData, { platform: 'linux', fileName: 'recent-libraries.json' }),
     recovery: new RecoveryStore(userData),
     designSaved: (_sender, outcome) => void saved.push(outcome),
     documentStateChanged: vi.fn(),
@@ -217,5 +218,65 @@ describe('routes()', () => {
     expect(send.map((route) => route.method)).toEqual(['setDocumentState']);
     send[0]?.run('w', [{ name: 'a.json', dirty: true }] as never[]);
     expect(deps.documentStateChanged).toHaveBeenCalledWith('w', { name: 'a.json', dirty: true });
+  });
+});
+
+const library = (name: string): string => JSON.stringify({ format: 'wattledger.parts', version: 2, id: 'team', name, notes: '', parts: [] });
+
+describe('parts library files', () => {
+  it('opens a library from the dialog with the library filter, and lists it among recent libraries only', async () => {
+    nextOpenPath = nodePath.join(folder, 'team-parts.json');
+    await nodeFs.writeFile(nextOpenPath, library('Team parts'));
+    const handlers = createHandlers(deps);
+    const opened = await handlers.invoke.openLibrary('w');
+    expect(deps.chooseFileToOpen).toHaveBeenCalledWith('w', [{ name: 'WattLedger parts library', extensions: ['json'] }]);
+    expect(opened).toEqual({ path: nextOpenPath, name: 'team-parts.json', text: library('Team parts') });
+    expect(await handlers.invoke.listRecentLibraries()).toEqual([nextOpenPath]);
+    expect(await handlers.invoke.listRecent()).toEqual([]); // the design list is not crowded by libraries
+    expect(deps.recentChanged).not.toHaveBeenCalled(); // the File menu lists designs only
+  });
+
+  it('saves a library it opened atomically with a .bak, and refuses a path the user never picked', async () => {
+    nextOpenPath = nodePath.join(folder, 'team-parts.json');
+    await nodeFs.writeFile(nextOpenPath, library('v1'));
+    const handlers = createHandlers(deps);
+    await handlers.invoke.openLibrary('w');
+    const saved = await handlers.invoke.saveLibrary('w', { path: nextOpenPath, suggestedName: 'team-parts.json', text: library('v2') });
+    expect(saved).toEqual({ ok: true, path: nextOpenPath, name: 'team-parts.json' });
+    expect(await nodeFs.readFile(nextOpenPath, 'utf8')).toBe(library('v2'));
+    expect(await nodeFs.readFile(`${nextOpenPath}.bak`, 'utf8')).toBe(library('v1'));
+    expect(deps.saved).toEqual([]); // a library save is not a design save (title, close guard)
+    const victim = nodePath.join(folder, 'other.json');
+    const refused = await handlers.invoke.saveLibrary('w', { path: victim, suggestedName: 'other.json', text: library('x') });
+    expect(refused).toMatchObject({ ok: false, cancelled: false });
+    await expect(nodeFs.access(victim)).rejects.toThrow();
+  });
+
+  it('saves a new library where the user chooses, adding .json', async () => {
+    nextSavePath = nodePath.join(folder, 'new-parts.json');
+    const outcome = await createHandlers(deps).invoke.saveLibrary('w', { path: null, suggestedName: 'new-parts', text: library('new') });
+    expect(deps.chooseSavePath).toHaveBeenCalledWith('w', 'new-parts.json', [{ name: 'WattLedger parts library', extensions: ['json'] }]);
+    expect(outcome.ok).toBe(true);
+    expect(await createHandlers(deps).invoke.listRecentLibraries()).toEqual([nextSavePath]);
+  });
+
+  it('reopens a recent library, and drops one that is gone with a message naming it', async () => {
+    const path = nodePath.join(folder, 'gone.json');
+    await nodeFs.writeFile(path, library('gone'));
+    nextOpenPath = path;
+    const handlers = createHandlers(deps);
+    await handlers.invoke.openLibrary('w');
+    expect(await handlers.invoke.openRecentLibrary('w', path)).toMatchObject({ name: 'gone.json' });
+    await nodeFs.rm(path);
+    const missing = await handlers.invoke.openRecentLibrary('w', path);
+    expect('error' in missing && missing.error).toMatch(/gone\.json/);
+    expect(await handlers.invoke.listRecentLibraries()).toEqual([]);
+    expect(await handlers.invoke.openRecentLibrary('w', nodePath.join(folder, 'never.json'))).toEqual({ error: '"never.json" is not in the recent libraries list.' });
+  });
+
+  it('tells a dialog read failure in an error box and returns null', async () => {
+    nextOpenPath = nodePath.join(folder, 'missing.json');
+    expect(await createHandlers(deps).invoke.openLibrary('w')).toBeNull();
+    expect(deps.errors).toHaveLength(1);
   });
 });
