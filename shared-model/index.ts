@@ -95,6 +95,8 @@ export type * from './ledger/types.ts';
 export type { EvaluateOptions, LedgerEvaluator } from './ledger/evaluate.ts';
 export { DEFAULT_TOLERANCE_K, evaluate, ledgerEvaluator, POWER_BALANCE_RTOL } from './ledger/evaluate.ts';
 export type { LeanEvaluation, LeanHazard, LeanTerm } from './ledger/lean-evaluate.ts';
+export type { RegulationFlags } from './ledger/regulated.ts';
+export { isRegulated, isUsablePoint, REGULATION_RTOL, unusableReason } from './ledger/regulated.ts';
 export { RUNAWAY_BAND_K } from './thermal/fixed-point.ts';
 export { TOUCH_LIMITS } from './hazards/touch-limits.ts';
 export type { RowFit } from './hazards/touch-check.ts';
@@ -131,12 +133,13 @@ export type { FrequencySide, FrequencySweep, FrequencySweepOptions } from './swe
 export { checkFrequencySweepOptions, sweepFrequency } from './sweep/frequency-sweep.ts';
 export type { AxisOptions, GridAxis, GridOptions, LoadGrid } from './sweep/grid.ts';
 export { checkGridOptions, sweepGrid } from './sweep/grid.ts';
-export type { FigureOfMeritPoint, FiguresOfMerit } from './sweep/figures-of-merit.ts';
+export type { EfficiencyPoint, Figure, FigureOfMeritPoint, FiguresOfMerit } from './sweep/figures-of-merit.ts';
 export {
   AVERAGE_EFFICIENCY_FRACTIONS,
   FIGURES_OF_MERIT_SOURCE,
   figuresOfMerit,
   figuresOfMeritOf,
+  figureValue,
   LIGHT_LOAD_FRACTION,
 } from './sweep/figures-of-merit.ts';
 export type {
@@ -263,6 +266,7 @@ export {
   formatAmps,
   formatCelsius,
   formatDuty,
+  formatFigurePercent,
   formatFixed,
   formatHertz,
   formatHours,

@@ -49,6 +49,8 @@ export interface LedgerContext {
   nodePowerW: Float64Array;
   pathLossW: number;
   sourceLossW: number;
+  /** The part of pathLossW the volt-second drops do not carry (slots.ts `drop`). */
+  offDropLossW: number;
   /** The final point of the last evaluation: the solver's record, or the lean summary in a sweep. */
   op: PointSummary | undefined;
   /** Per-context state owned by other ledger files, made on first use (the joint loop, the sweep's records). */
@@ -130,6 +132,7 @@ export function ledgerContext(design: Design, vinV = design.spec.vinNomV, freque
     nodePowerW: new Float64Array(net.nodes.length),
     pathLossW: 0,
     sourceLossW: 0,
+    offDropLossW: 0,
     op: undefined,
     loop: undefined,
     leanRecords: undefined,

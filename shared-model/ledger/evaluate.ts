@@ -26,9 +26,10 @@ import { ledgerContext, type LedgerContext } from './kernel.ts';
 import type { JointLoop } from './joint-loop.ts';
 import { lossTerms } from './terms.ts';
 import { heatsinkRecords, partTemperatures } from './temperatures.ts';
-import { settlePoint, solvePoint, type SettleTarget } from './solve-point.ts';
+import { efficiencyOf, settlePoint, solvePoint, type SettleTarget } from './solve-point.ts';
 import { leanEvaluateWith, type LeanEvaluation } from './lean-evaluate.ts';
 import type { Evaluation, Hazard, RatingCheck } from './types.ts';
+import { isRegulated } from './regulated.ts';
 
 export { DEFAULT_TOLERANCE_K, POWER_BALANCE_RTOL } from './solve-point.ts';
 
@@ -78,9 +79,10 @@ function evaluateWith(ctx: LedgerContext, conditions?: Partial<Conditions>, opti
   const outputPower = op.outputPowerW;
   return {
     conditions: cond,
+    regulated: isRegulated(op.voutV, ctx.design.spec.voutV),
     converged: sol.converged,
     iterations: sol.iterations,
-    efficiency: inputPower > 0 ? outputPower / inputPower : 0,
+    efficiency: efficiencyOf(outputPower, inputPower, totalLoss),
     inputPower,
     outputPower,
     totalLoss,

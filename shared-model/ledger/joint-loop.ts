@@ -13,13 +13,15 @@
  * test/shared-model/ledger/joint-loop.test.ts).
  * `finalSummary(T)` is the same point for a sweep: the record's numbers to the last bit in a reused
  * PointSummary (point-view.ts) with the same warnings, without the record's waveforms.
+ * Forced PWM (operating-point/circuit.ts dutyByVoltSeconds): step 2 is the volt-second duty of the circuit
+ * at T instead; the losses it does not carry are paid by the source (slots.ts).
  * Slow path: a point the volt-second solution cannot regulate, or whose power balance needs more than
  * the duty limit, is handed to solveOperatingPoint at every step (its fallbacks and warnings apply).
  * One loop object per context, reset for each evaluation; its work records are the context's (no
  * allocation per step on the fast path).
  */
 import type { Conditions, OperatingPoint } from '../operating-point/types.ts';
-import { circuitInto, type Circuit } from '../operating-point/circuit.ts';
+import { circuitInto, dutyByVoltSeconds, type Circuit } from '../operating-point/circuit.ts';
 import { shapeAt, shapeOfOwn } from '../operating-point/shape.ts';
 import { dutyLimitOf, solveVoltSecond } from '../operating-point/duty.ts';
 import { solveOperatingPoint } from '../operating-point/solve.ts';
@@ -77,9 +79,12 @@ class Loop implements JointLoop {
   private slope = NaN;
   /** Power-balance residual of the last balance, W. */
   private f = 0;
+  /** Forced PWM: the duty is the volt-second duty at each step's temperatures (circuit.ts dutyByVoltSeconds). */
+  private readonly byVoltSeconds: boolean;
 
   constructor(private readonly ctx: LedgerContext) {
     this.lossAt = lossAtOf(this);
+    this.byVoltSeconds = dutyByVoltSeconds(ctx.design);
   }
 
   reset(cond: Conditions): void {
@@ -101,16 +106,25 @@ class Loop implements JointLoop {
     return this.fast;
   }
 
+  /** What the source pays at the last fill beside Vin·Iin of the waveforms (see slowPoint). */
+  private sourcePaidW(): number {
+    const ctx = this.ctx;
+    return this.byVoltSeconds ? ctx.sourceLossW + ctx.offDropLossW : ctx.sourceLossW;
+  }
+
   private slowPoint(T: Float64Array, cp: ConductionParameters): OperatingPoint {
     const ctx = this.ctx;
+    const byVoltSeconds = this.byVoltSeconds;
     const op = solveOperatingPoint(ctx.design, this.cond, cp, {
-      lossOf: (p) => {
+      lossOf: byVoltSeconds ? undefined : (p) => {
         fillLosses(ctx, p, rippleSquaresOf(p, ctx.ripple), T, cp);
         return ctx.pathLossW;
       },
+      // Where the duty is not power-balanced (forced PWM, an unregulated point) the losses the volt-second
+      // drops do not carry are paid by the source at that duty.
       sourceLossOf: (p) => {
         fillLosses(ctx, p, rippleSquaresOf(p, ctx.ripple), T, cp);
-        return ctx.sourceLossW;
+        return ctx.sourceLossW + (byVoltSeconds || !p.regulated ? ctx.offDropLossW : 0);
       },
     });
     ctx.op = op;
@@ -164,6 +178,19 @@ class Loop implements JointLoop {
     const vin = this.vin;
     const c = circuitInto(ctx.design, this.cond, cp, w.circuit);
     const s = w.shape;
+    if (this.byVoltSeconds) {
+      // Forced PWM: the volt-second duty of the circuit at T; the losses it does not carry are the source's.
+      const vs = solveVoltSecond(c, dMax, w.probe);
+      if (vs.limit !== 'none') {
+        this.fast = false;
+        return this.step(T, P, G, residualK);
+      }
+      this.d = vs.d;
+      this.balance(T, cp);
+      P.set(ctx.nodePowerW);
+      this.slopesAt(w.lean, ctx.ripple, T, P, G);
+      return true;
+    }
     this.balance(T, cp);
     let ok = this.balanced();
     // Far from the thermal fixed point (residual above LOOSE_ABOVE_K) one duty step is enough: the
@@ -217,6 +244,7 @@ class Loop implements JointLoop {
       this.fast = false;
       return null;
     }
+    if (this.byVoltSeconds) this.d = solveVoltSecond(c, ctx.design.spec.maxDuty, w.probe).d;
     shapeAt(c, this.d, this.vo, w.shape);
     return c;
   }
@@ -227,10 +255,11 @@ class Loop implements JointLoop {
     const c = this.finalCircuit(T);
     if (!c) return this.slowPoint(T, w.cp);
     const cp = w.cp;
-    const op = buildOperatingPoint(c, w.shape, this.cond, { regulated: true, dutyMethod: 'power-balance', extraInputA: 0, warnings: [] });
+    const dutyMethod = this.byVoltSeconds ? 'volt-second' : 'power-balance';
+    const op = buildOperatingPoint(c, w.shape, this.cond, { regulated: true, dutyMethod, extraInputA: 0, warnings: [] });
     addWarnings({ design: ctx.design, circuit: c, limit: 'none', powerBalanceFallback: false }, op);
     fillLosses(ctx, op, rippleSquaresOf(op, ctx.ripple), T, cp);
-    op.waveforms.inputA += Math.max(ctx.sourceLossW, 0) / this.vin;
+    op.waveforms.inputA += Math.max(this.sourcePaidW(), 0) / this.vin;
     ctx.op = op;
     return op;
   }
@@ -246,7 +275,7 @@ class Loop implements JointLoop {
     p.warnings = [];
     addWarnings({ design: ctx.design, circuit: c, limit: 'none', powerBalanceFallback: false }, p);
     fillLosses(ctx, p, rippleSquaresOfLean(p, ctx.ripple), T, cp);
-    p.waveforms.inputA += Math.max(ctx.sourceLossW, 0) / this.vin;
+    p.waveforms.inputA += Math.max(this.sourcePaidW(), 0) / this.vin;
     ctx.op = p;
     return p;
   }

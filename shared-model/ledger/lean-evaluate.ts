@@ -16,8 +16,9 @@ import type { LedgerContext } from './kernel.ts';
 import type { JointLoop } from './joint-loop.ts';
 import { newLeanPoint, type PointSummary } from './point-view.ts';
 import { partTemperaturesInto } from './temperatures.ts';
-import { picksOf, settlePoint, solvePoint, type SettleTarget } from './solve-point.ts';
+import { efficiencyOf, picksOf, settlePoint, solvePoint, type SettleTarget } from './solve-point.ts';
 import type { Mechanism, PartTemperature, RatingCheck } from './types.ts';
+import { isRegulated } from './regulated.ts';
 
 /** One loss term's number (the Evaluation's LossTerm without formula and inputs). */
 export interface LeanTerm {
@@ -37,6 +38,8 @@ export interface LeanHazard {
 
 export interface LeanEvaluation {
   conditions: Conditions;
+  /** As Evaluation.regulated. */
+  regulated: boolean;
   converged: boolean;
   iterations: number;
   efficiency: number;
@@ -70,6 +73,7 @@ function recordsOf(ctx: LedgerContext): LeanRecords {
   const index = ctx.net.index;
   const evaluation: LeanEvaluation = {
     conditions: { vinV: 0, loadA: 0, switchingFrequencyHz: 0, ambientC: 0 },
+    regulated: false,
     converged: false,
     iterations: 0,
     efficiency: 0,
@@ -110,12 +114,13 @@ export function leanEvaluateWith(ctx: LedgerContext, conditions?: Partial<Condit
   settlePoint(ctx, point, r.temperatures, warnings, settle);
   for (let s = 0; s < r.heatsinks.length; s++) r.heatsinks[s]!.celsius = sol.sinkTemperaturesC[s]!;
   r.conditions = cond;
+  r.regulated = isRegulated(op.voutV, ctx.design.spec.voutV);
   r.converged = sol.converged;
   r.iterations = sol.iterations;
   r.totalLoss = settle.totalLoss;
   r.inputPower = settle.inputPower;
   r.outputPower = op.outputPowerW;
-  r.efficiency = r.inputPower > 0 ? r.outputPower / r.inputPower : 0;
+  r.efficiency = efficiencyOf(r.outputPower, r.inputPower, r.totalLoss);
   r.dutyCycle = op.dutyCycle;
   r.conductionMode = op.mode;
   r.warnings = warnings;

@@ -50,6 +50,13 @@ export interface Slot<I> {
   source: boolean;
   /** The mechanism depends on the part's temperature (RDS(on), Vf0, leakage, DCR, ESR, R). */
   thermal: boolean;
+  /**
+   * The volt-second equation carries this loss as a drop (its interval-mean part: conduction, forward
+   * drop, winding DC, output ESR, sense): at the volt-second duty Vin·Iin already pays it. The other path
+   * losses (edges, charge pulses from the output) are paid by the source wherever the duty is not
+   * power-balanced (forced PWM, an unregulated point): see ledger/joint-loop.ts.
+   */
+  drop: boolean;
   watts: number;
 }
 
@@ -60,9 +67,11 @@ const recoveryIn = (): ReverseRecoveryInputs => ({ qrrC: 0, testA: 1, forwardA: 
 const capIn = (): CapacitorEsrInputs => ({ irmsA: 0, esrOhm: 0, count: 1, temperatureC: 0 });
 
 const THERMAL: ReadonlySet<string> = new Set(['conduction', 'forward drop', 'reverse leakage', 'winding DC', 'winding AC', 'ESR', 'sense']);
+/** Mechanisms the volt-second equation's drops carry (operating-point/circuit.ts; the input bank's ESR is source-paid). */
+const DROPS: ReadonlySet<string> = new Set(['conduction', 'forward drop', 'winding DC', 'ESR', 'sense']);
 
 function slot<I>(role: Role, model: LossModel<I>, inputs: I, source = false): Slot<I> {
-  return { role, model, inputs, source, thermal: THERMAL.has(model.mechanism), watts: 0 };
+  return { role, model, inputs, source, thermal: THERMAL.has(model.mechanism), drop: !source && DROPS.has(model.mechanism), watts: 0 };
 }
 
 /** Every slot of a design, named, plus the ordered list the kernel sums. */

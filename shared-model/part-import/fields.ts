@@ -6,6 +6,7 @@
  *   - A field of an alternative form (a discriminated union such as the RDS(on) temperature law) names
  *     its union and the forms that hold it; the union's tag ("rdsTemperatureLaw.law") is a choice field.
  *   - A field of an optional group (inductance roll-off, capacitor life) names its group.
+ *   - A datasheet curve (a table of points, e.g. Coss(VDS)) has no column: it is pasted in the editor.
  */
 import { z } from 'zod';
 import { unitOfKey } from '../design/key-units.ts';
@@ -54,6 +55,8 @@ function typeOf(s: Schema): { type: FieldType; choices: string[] } | undefined {
 function collect(): PartField[] {
   const byPath = new Map<string, PartField>();
   const add = (path: string, s: Schema, kind: PartKind, required: boolean, extra: Pick<PartField, 'union' | 'group'>): void => {
+    // A datasheet curve (a table of points) is not one spreadsheet cell: it is typed or pasted in the editor.
+    if (defOf(unwrap(s)).type === 'array') return;
     const t = typeOf(s);
     if (!t) throw new Error(`part-import: no column type for ${kind}.${path}`);
     const words = FIELD_WORDS[path];
@@ -99,6 +102,8 @@ function collect(): PartField[] {
         forms.forEach((form, i) => {
           for (const [sub, s] of Object.entries(defOf(form).shape as Record<string, Schema>)) {
             if (sub === tag) continue;
+            // A digitised curve (an array of points, e.g. the Coss(VDS) table) is not one spreadsheet cell.
+            if (defOf(unwrap(s)).type === 'array') continue;
             add(`${key}.${sub}`, s, kind, !isOptional(s), { union: { key, tag, forms: [formNames[i] as string] } });
           }
         });
