@@ -245,6 +245,8 @@ export { calibrate } from './fit/calibrate.ts';
 export { modelPoints, pointConditions } from './fit/point-model.ts';
 export { LOSS_GROUPS, lossByGroup } from './fit/ledger-groups.ts';
 export { CALIBRATION_CAUTION } from './fit/caution.ts';
+export type { CalibrationSection, CalibrationSectionPoint } from './fit/report-section.ts';
+export { calibrationSection } from './fit/report-section.ts';
 
 // --- design-review report ---
 export type * from './report/types.ts';

@@ -14,7 +14,7 @@ import { ResultsState } from './results.svelte.ts';
 import { ThemeState } from './theme.svelte.ts';
 import type { PartStash } from './topology-edits.ts';
 
-export type Screen = 'design' | 'library' | 'report';
+export type Screen = 'design' | 'library' | 'bench' | 'report';
 
 export interface RecoveryOffer {
   recovered: Recovered;
