@@ -63,7 +63,20 @@ export interface GroupSpec {
   defaults: Defaults;
 }
 
-export type FieldSpec = NumberSpec | TextSpec | ChoiceSpec | BooleanSpec | UnionSpec | GroupSpec;
+/** A curve digitised from a datasheet: rows of numbers, typed or pasted, with a small preview plot. */
+export interface TableSpec {
+  type: 'table';
+  key: string;
+  label: string;
+  columns: readonly { key: string; label: string; unit: string }[];
+  minRows: number;
+  maxRows: number;
+  /** Plot the second column on a log scale (capacitance curves span decades). */
+  logY?: boolean;
+  help?: string;
+}
+
+export type FieldSpec = NumberSpec | TextSpec | ChoiceSpec | BooleanSpec | UnionSpec | GroupSpec | TableSpec;
 
 export const num = (key: string, label: string, unit: string, extra: Partial<NumberSpec> = {}): NumberSpec => ({
   type: 'number',

@@ -2,7 +2,7 @@
  * The editable fields of each part kind (keys from shared-model/design/parts.ts). Used by the design
  * editor and by the part library editor. Labels use trade terms; units are SI symbols.
  */
-import type { PartKind } from '../../shared-model/index.ts';
+import { CURVE_POINTS, type PartKind } from '../../shared-model/index.ts';
 import { num, type FieldSpec, type UnionSpec } from './field-spec.ts';
 
 const identity: FieldSpec[] = [
@@ -46,6 +46,34 @@ const outputCapacitance: UnionSpec = {
       label: 'Qoss and Eoss at a voltage',
       fields: [num('qossC', 'Qoss', 'C'), num('eossJ', 'Eoss', 'J'), num('atV', 'Measured at', 'V')],
       defaults: () => ({ qossC: 5e-9, eossJ: 20e-9, atV: 12 }),
+    },
+    {
+      value: 'table',
+      label: 'Coss(VDS) curve from the datasheet',
+      fields: [
+        {
+          type: 'table',
+          key: 'points',
+          label: 'Coss(VDS) points',
+          columns: [
+            { key: 'vdsV', label: 'VDS', unit: 'V' },
+            { key: 'cossF', label: 'Coss', unit: 'F' },
+          ],
+          minRows: CURVE_POINTS.min,
+          maxRows: CURVE_POINTS.max,
+          logY: true,
+          help: 'VDS rising, Coss never rising. Qoss and Eoss at the switched voltage are integrated from the curve; above the last point its Coss is held (a notice says so).',
+        },
+      ],
+      // A starting curve shaped like a small low-voltage FET's (invented): edit or paste over it.
+      defaults: () => ({
+        points: [
+          { vdsV: 0, cossF: 1.2e-9 },
+          { vdsV: 5, cossF: 600e-12 },
+          { vdsV: 15, cossF: 330e-12 },
+          { vdsV: 30, cossF: 240e-12 },
+        ],
+      }),
     },
   ],
 };
