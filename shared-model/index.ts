@@ -95,6 +95,8 @@ export type * from './ledger/types.ts';
 export type { EvaluateOptions, LedgerEvaluator } from './ledger/evaluate.ts';
 export { DEFAULT_TOLERANCE_K, evaluate, ledgerEvaluator, POWER_BALANCE_RTOL } from './ledger/evaluate.ts';
 export type { LeanEvaluation, LeanHazard, LeanTerm } from './ledger/lean-evaluate.ts';
+export type { RegulationFlags } from './ledger/regulated.ts';
+export { isRegulated, isUsablePoint, REGULATION_RTOL, unusableReason } from './ledger/regulated.ts';
 export { RUNAWAY_BAND_K } from './thermal/fixed-point.ts';
 export { TOUCH_LIMITS } from './hazards/touch-limits.ts';
 export type { RowFit } from './hazards/touch-check.ts';
@@ -131,12 +133,13 @@ export type { FrequencySide, FrequencySweep, FrequencySweepOptions } from './swe
 export { checkFrequencySweepOptions, sweepFrequency } from './sweep/frequency-sweep.ts';
 export type { AxisOptions, GridAxis, GridOptions, LoadGrid } from './sweep/grid.ts';
 export { checkGridOptions, sweepGrid } from './sweep/grid.ts';
-export type { FigureOfMeritPoint, FiguresOfMerit } from './sweep/figures-of-merit.ts';
+export type { EfficiencyPoint, Figure, FigureOfMeritPoint, FiguresOfMerit } from './sweep/figures-of-merit.ts';
 export {
   AVERAGE_EFFICIENCY_FRACTIONS,
   FIGURES_OF_MERIT_SOURCE,
   figuresOfMerit,
   figuresOfMeritOf,
+  figureValue,
   LIGHT_LOAD_FRACTION,
 } from './sweep/figures-of-merit.ts';
 export type {
@@ -208,6 +211,17 @@ export {
   monteCarlo,
 } from './tolerance/monte-carlo.ts';
 
+// --- sizing from the specification ---
+export type * from './sizing/types.ts';
+export type { SolvedCorner } from './sizing/corners.ts';
+export { cornerVoltages, solveCorners } from './sizing/corners.ts';
+export { chargeAboveMean } from './sizing/capacitors.ts';
+export { DEFAULT_RIPPLE_RATIO } from './sizing/inductor.ts';
+export type { SizingOptions } from './sizing/size-design.ts';
+export { sizeDesign, sizeFromCorners } from './sizing/size-design.ts';
+export type { HandInput, HandSizing } from './sizing/hand-method.ts';
+export { handSizing } from './sizing/hand-method.ts';
+
 // --- bench measurements and calibration ---
 export type { CalibrationRecord, MeasuredPoint, MeasuredTemperatures, Measurement } from './measurement/schema.ts';
 export { calibrationSchema, measuredPointSchema, measurementSchema } from './measurement/schema.ts';
@@ -231,6 +245,8 @@ export { calibrate } from './fit/calibrate.ts';
 export { modelPoints, pointConditions } from './fit/point-model.ts';
 export { LOSS_GROUPS, lossByGroup } from './fit/ledger-groups.ts';
 export { CALIBRATION_CAUTION } from './fit/caution.ts';
+export type { CalibrationSection, CalibrationSectionPoint } from './fit/report-section.ts';
+export { calibrationSection } from './fit/report-section.ts';
 
 // --- design-review report ---
 export type * from './report/types.ts';
@@ -252,6 +268,7 @@ export {
   formatAmps,
   formatCelsius,
   formatDuty,
+  formatFigurePercent,
   formatFixed,
   formatHertz,
   formatHours,

@@ -10,7 +10,7 @@ describe('evaluate: the record', () => {
   it('has exactly the documented keys (issue 3 contract; ledger/types.ts)', () => {
     expect(Object.keys(e).sort()).toEqual(
       ['checks', 'conditions', 'conductionMode', 'converged', 'dutyCycle', 'efficiency', 'hazards', 'heatsinks', 'inputPower',
-        'iterations', 'losses', 'operatingPoint', 'outputPower', 'temperatures', 'totalLoss', 'warnings'].sort(),
+        'iterations', 'losses', 'operatingPoint', 'outputPower', 'regulated', 'temperatures', 'totalLoss', 'warnings'].sort(),
     );
     for (const t of e.losses) expect(Object.keys(t).sort()).toEqual(['formula', 'inputs', 'mechanism', 'part', 'partName', 'watts']);
     for (const t of e.temperatures) {
