@@ -202,6 +202,17 @@ export {
   monteCarlo,
 } from './tolerance/monte-carlo.ts';
 
+// --- sizing from the specification ---
+export type * from './sizing/types.ts';
+export type { SolvedCorner } from './sizing/corners.ts';
+export { cornerVoltages, solveCorners } from './sizing/corners.ts';
+export { chargeAboveMean } from './sizing/capacitors.ts';
+export { DEFAULT_RIPPLE_RATIO } from './sizing/inductor.ts';
+export type { SizingOptions } from './sizing/size-design.ts';
+export { sizeDesign, sizeFromCorners } from './sizing/size-design.ts';
+export type { HandInput, HandSizing } from './sizing/hand-method.ts';
+export { handSizing } from './sizing/hand-method.ts';
+
 // --- bench measurements and calibration ---
 export type { CalibrationRecord, MeasuredPoint, MeasuredTemperatures, Measurement } from './measurement/schema.ts';
 export { calibrationSchema, measuredPointSchema, measurementSchema } from './measurement/schema.ts';

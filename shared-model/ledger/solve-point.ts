@@ -21,7 +21,8 @@ import { burnHazards, touchPicks, type TouchPick } from './hazards.ts';
 import { ratingChecks } from './checks.ts';
 import { modelNotes, runawayWarning } from './notes.ts';
 import type { PointSummary } from './point-view.ts';
-import type { Hazard, PartTemperature, RatingCheck } from './types.ts';
+import type { PartTemperature } from './types.ts';
+import type { Keeper } from './keep.ts';
 
 /** Electro-thermal convergence: |Ta + Θ·P(T) − T| ≤ this for every part, K (reported temperatures are Ta + Θ·P exactly). */
 export const DEFAULT_TOLERANCE_K = 1e-4;
@@ -103,16 +104,10 @@ export function picksOf(ctx: LedgerContext): TouchPick[] {
   return ctx.touchPicks;
 }
 
-/** What settlePoint keeps: the full record's lists, or (a sweep) only the hazard margins. */
-export interface SettleTarget {
+/** The sums settlePoint writes (a record the caller owns). */
+export interface Settled {
   totalLoss: number;
   inputPower: number;
-  /** The full record's rating checks and hazards, or null (a sweep: warnings only). */
-  checks: RatingCheck[] | null;
-  hazards: Hazard[] | null;
-  /** With hazards null: one record per touch pick receiving its margin, and a scratch check record. */
-  hazardMargins?: { marginK: number }[];
-  scratch?: RatingCheck;
 }
 
 /**
@@ -124,7 +119,8 @@ export function settlePoint(
   point: SolvedPoint<PointSummary>,
   temps: readonly PartTemperature[],
   warnings: Warning[],
-  into: SettleTarget,
+  keeper: Keeper,
+  into: Settled,
 ): void {
   const { cond, sol, op } = point;
   const net = ctx.net;
@@ -148,8 +144,8 @@ export function settlePoint(
       message: `The electro-thermal iteration stopped after ${sol.iterations} steps ${sol.residualK.toPrecision(2)} K from a fixed point; treat the temperatures as approximate.`,
     });
   }
-  ratingChecks(ctx.design, op, temps, warnings, into.checks, into.scratch);
-  burnHazards(picksOf(ctx), temps, warnings, into.hazards, into.hazardMargins);
+  ratingChecks(ctx.design, op, temps, warnings, keeper);
+  burnHazards(picksOf(ctx), temps, warnings, keeper);
   modelNotes(ctx, warnings);
   into.totalLoss = totalLoss;
   into.inputPower = inputPower;

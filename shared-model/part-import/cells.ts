@@ -7,6 +7,7 @@
  *   bare number is scaled by moving its decimal exponent: the result is the double nearest the decimal
  *   value, exactly as if the SI value had been typed, and an exported library reads back bit for bit.
  *   The value must then lie in the field's range (design/numbers.ts).
+ *   JSON: a list no single cell can spell (a digitised curve) as its JSON text, checked by its schema.
  *   Choices: the value or its words, any case ("Schottky", "two-point", "MOSFET"). Yes/no: yes, no,
  *   true, false, y, n, 1, 0, x (ticked). Text: as written, outer spaces trimmed.
  * A refusal says what the cell reads as and what the field allows; preview.ts adds the row and column.
@@ -79,6 +80,16 @@ export function readCell(field: PartField, text: string, columnUnit: string): Ce
       return readNumber(field, trimmed, columnUnit);
     case 'choice':
       return readChoice(field, trimmed);
+    case 'json': {
+      let value: unknown;
+      try {
+        value = JSON.parse(trimmed);
+      } catch {
+        return { ok: false, found: `"${trimmed.slice(0, 40)}" is not JSON text`, allowed: describeSchema(field.schema, field.path) };
+      }
+      const checked = (field.schema as z.ZodType).safeParse(value);
+      return checked.success ? { ok: true, value: checked.data } : { ok: false, found: `"${trimmed.slice(0, 40)}${trimmed.length > 40 ? '…' : ''}"`, allowed: describeSchema(field.schema, field.path) };
+    }
     case 'boolean': {
       const word = trimmed.toLowerCase();
       if (YES.has(word)) return { ok: true, value: true };

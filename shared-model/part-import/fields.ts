@@ -16,7 +16,8 @@ import type { PartKind } from '../design/parts.ts';
 import { defOf, unwrap, type Schema } from '../design/zod-problems.ts';
 import { FIELD_WORDS, KIND_WORDS } from './field-labels.ts';
 
-export type FieldType = 'number' | 'text' | 'choice' | 'boolean';
+/** `json`: a list or record no single cell can spell (a digitised curve): the cell holds its JSON text. */
+export type FieldType = 'number' | 'text' | 'choice' | 'boolean' | 'json';
 
 export interface PartField {
   path: string;
@@ -42,14 +43,14 @@ export interface PartField {
 
 const isOptional = (s: Schema): boolean => defOf(s).type === 'optional';
 
-function typeOf(s: Schema): { type: FieldType; choices: string[] } | undefined {
+function typeOf(s: Schema): { type: FieldType; choices: string[] } {
   const def = defOf(unwrap(s));
   if (def.type === 'number') return { type: 'number', choices: [] };
   if (def.type === 'string') return { type: 'text', choices: [] };
   if (def.type === 'boolean') return { type: 'boolean', choices: [] };
   if (def.type === 'enum') return { type: 'choice', choices: Object.values(def.entries as Record<string, string>) };
   if (def.type === 'literal') return { type: 'choice', choices: (def.values as unknown[]).map(String) };
-  return undefined;
+  return { type: 'json', choices: [] };
 }
 
 function collect(): PartField[] {
@@ -58,9 +59,8 @@ function collect(): PartField[] {
     // A datasheet curve (a table of points) is not one spreadsheet cell: it is typed or pasted in the editor.
     if (defOf(unwrap(s)).type === 'array') return;
     const t = typeOf(s);
-    if (!t) throw new Error(`part-import: no column type for ${kind}.${path}`);
-    const words = FIELD_WORDS[path];
-    if (!words) throw new Error(`part-import: no label for the part field ${path}`);
+    // A field added to the part schema before it has words here is still imported and exported, under its path.
+    const words = FIELD_WORDS[path] ?? { label: path, aliases: [] };
     const known = byPath.get(path);
     if (known) {
       if (!known.kinds.includes(kind)) known.kinds.push(kind);

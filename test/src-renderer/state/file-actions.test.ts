@@ -18,6 +18,7 @@ function slowFiles(): FileAccess & { requests: SaveRequest[]; finish(index: numb
     inFlight: 0,
     maxInFlight: 0,
     open: async (): Promise<OpenedFile | null> => null,
+    openSpreadsheet: async (): Promise<OpenedFile | null> => null,
     save(request: SaveRequest): Promise<SaveOutcome> {
       files.requests.push(request);
       files.inFlight += 1;
