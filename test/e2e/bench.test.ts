@@ -5,11 +5,12 @@
  * The measurement is synthetic — the demo buck with its switching charge ×1.3, evaluated by the engine in
  * Node, plus seeded noise — so the truth the fit must bracket is known.
  */
+import { demoDesign } from '../helpers/demo.ts';
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { calibrate } from '../../shared-model/index.ts';
 import { benchPoints, syntheticMeasurement } from '../shared-model/fit/synthetic.ts';
-import { demoDesign } from './helpers/engine.ts';
+
 import { e2eSuite } from './helpers/suite.ts';
 
 const suite = e2eSuite();

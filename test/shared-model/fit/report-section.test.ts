@@ -3,9 +3,10 @@
  * the measurement it carries (SHA-256, FIPS 180-4), and its residuals are those of the design as it
  * stands — for a freshly adopted calibration, the fit's own "after" residuals.
  */
+import { demoDesign } from '../../helpers/demo.ts';
 import { describe, expect, it } from 'vitest';
 import { calibrate, calibrationSection } from '../../../shared-model/index.ts';
-import { demoDesign } from '../report/demo.ts';
+
 import { closeTo } from '../../helpers/close-to.ts';
 import { benchPoints, syntheticMeasurement } from './synthetic.ts';
 
