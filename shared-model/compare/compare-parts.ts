@@ -12,6 +12,7 @@ import { sweepLoad } from '../sweep/load-sweep.ts';
 import type { PointEvaluator, LoadSweep, LoadSweepOptions, OptionProblem } from '../sweep/types.ts';
 import { findCrossovers, winnersOf } from './crossover.ts';
 import { substitutePart } from './substitute-part.ts';
+import { isUsablePoint } from '../ledger/regulated.ts';
 
 export interface CompareOptions {
   role: Role;
@@ -51,7 +52,7 @@ export interface Comparison {
   loadA: number;
   loadsA: number[];
   alternatives: CompareAlternative[];
-  /** Index into `alternatives` of the lowest-loss part at each sweep point. */
+  /** Index into `alternatives` of the lowest-loss part at each sweep point among the regulated, converged ones (−1: none). */
   winners: number[];
   crossovers: CompareCrossover[];
 }
@@ -90,12 +91,16 @@ export function compareParts(design: Design, options: CompareOptions): Compariso
     efficiencyDifference: sweeps[k].points.map((p, i) => p.efficiency - reference[i].efficiency),
   }));
   const loadsA = reference.map((p) => p.loadA);
-  const curves = sweeps.map((s) => s.points.map((p) => p.totalLoss));
+  // Only regulated, converged points compete (ledger/regulated.ts): the others never win.
+  const curves = sweeps.map((s) => s.points.map((p) => (isUsablePoint(p) ? p.totalLoss : Infinity)));
   const fixed = { vinV: sweeps[0].vinV, ambientC: sweeps[0].ambientC, switchingFrequencyHz: sweeps[0].switchingFrequencyHz };
   const probe =
     options.refine === false
       ? undefined
-      : (k: number, load: number) => evaluators[k](designs[k], { ...fixed, loadA: load }).totalLoss;
+      : (k: number, load: number) => {
+          const e = evaluators[k](designs[k], { ...fixed, loadA: load });
+          return isUsablePoint(e) ? e.totalLoss : Infinity;
+        };
   const crossings = findCrossovers(loadsA, curves, probe);
   const winnerIndex = winnersOf(curves);
   return {

@@ -17,12 +17,19 @@ export interface Crossover {
   method: 'refined' | 'interpolated';
 }
 
-/** Index of the smallest value at each point (ties go to the lower index). */
+/**
+ * Index of the smallest value at each point (ties go to the lower index). A value that is not finite
+ * (a point that may not stand for its design: unregulated or without a steady state) never wins; a
+ * point where no curve has a finite value gets −1.
+ */
 export function winnersOf(curves: readonly (readonly number[])[]): number[] {
   if (curves.length === 0) return [];
   return curves[0].map((_, i) => {
-    let best = 0;
-    for (let k = 1; k < curves.length; k++) if (curves[k][i] < curves[best][i]) best = k;
+    let best = -1;
+    for (let k = 0; k < curves.length; k++) {
+      const v = curves[k][i];
+      if (Number.isFinite(v) && (best < 0 || v < curves[best][i])) best = k;
+    }
     return best;
   });
 }
@@ -40,11 +47,13 @@ export function findCrossovers(
   for (let i = 1; i < win.length; i++) {
     const a = win[i - 1];
     const b = win[i];
-    if (a === b) continue;
+    if (a === b || a < 0 || b < 0) continue;
     const x0 = loads[i - 1];
     const x1 = loads[i];
     const d0 = curves[a][i - 1] - curves[b][i - 1];
     const d1 = curves[a][i] - curves[b][i];
+    // A change of winner because one part stops (or starts) counting is no crossing of two losses.
+    if (!Number.isFinite(d0) || !Number.isFinite(d1)) continue;
     const load = probe
       ? findRoot((x) => probe(a, x) - probe(b, x), x0, x1, d0, d1)
       : interpolateCrossing(x0, d0, x1, d1, 0);

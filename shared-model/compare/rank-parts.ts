@@ -7,7 +7,8 @@
  *   US 10 CFR 430 Subpart B, Appendix Z);
  * - "hottest-junction": the highest junction or hot-spot temperature of any part at rated load, °C
  *   (lower is better).
- * Parts that do not fit are listed with the reasons.
+ * Parts that do not fit are listed with the reasons, and so are parts with which the design does not
+ * regulate or has no steady state at the points the criterion needs (ledger/regulated.ts).
  */
 import type { Part } from '../design/parts.ts';
 import type { Design, Role } from '../design/schema.ts';
@@ -16,6 +17,7 @@ import { figuresOfMeritOf } from '../sweep/figures-of-merit.ts';
 import type { PointEvaluator } from '../sweep/types.ts';
 import { DEFAULT_CURRENT_DERATING, ratingShortfalls, stressOf } from './role-fit.ts';
 import { substitutePart } from './substitute-part.ts';
+import { isUsablePoint, unusableReason } from '../ledger/regulated.ts';
 
 export type RankCriterion = 'loss-at-rated' | 'average-efficiency' | 'hottest-junction';
 export const RANK_CRITERIA: readonly RankCriterion[] = ['loss-at-rated', 'average-efficiency', 'hottest-junction'];
@@ -76,6 +78,12 @@ export function rankParts(design: Design, options: RankOptions): Ranking {
       continue;
     }
     const rated = evaluator(d, conditionsFor(d));
+    // Only a regulated, converged rated point may speak for the part (ledger/regulated.ts).
+    if (!isUsablePoint(rated)) {
+      const reason = unusableReason({ ...rated, voutV: rated.operatingPoint.voutV, targetVoutV: s.voutV, loadA: rated.conditions.loadA });
+      rejected.push({ partId: part.id, partName: part.name, reasons: [`With this part the design cannot be ranked: ${reason}.`] });
+      continue;
+    }
     let hottestC = -Infinity;
     let hottestPart: Role | null = null;
     for (const t of rated.temperatures) {
@@ -88,8 +96,12 @@ export function rankParts(design: Design, options: RankOptions): Ranking {
     if (options.criterion === 'loss-at-rated') scored.push({ ...base, score: rated.totalLoss, unit: 'W' });
     else if (options.criterion === 'hottest-junction') scored.push({ ...base, score: hottestC, unit: '°C' });
     else {
-      const fom = figuresOfMeritOf((loadA) => evaluator(d, conditionsFor(d, { loadA })).efficiency, s.ratedLoadA);
-      scored.push({ ...base, score: fom.averageEfficiency, unit: '' });
+      const fom = figuresOfMeritOf((loadA) => evaluator(d, conditionsFor(d, { loadA })), s.ratedLoadA, s.voutV).averageEfficiency;
+      if (!fom.available) {
+        rejected.push({ partId: part.id, partName: part.name, reasons: [`With this part the average efficiency is ${fom.reason.charAt(0).toLowerCase()}${fom.reason.slice(1)}`] });
+        continue;
+      }
+      scored.push({ ...base, score: fom.value, unit: '' });
     }
   }
   const higherIsBetter = options.criterion === 'average-efficiency';

@@ -3,7 +3,9 @@
  * ceiling, regulation limit.
  * With the design (and optionally an evaluator) each landmark is placed by searching the engine between
  * the two sweep points that bracket it; without, by interpolating those points.
- * Peak and knee use only regulating, converged points.
+ * Peak, knee and mode boundary use only regulated, converged points (ledger/regulated.ts); the thermal
+ * ceiling follows every point (a part overheats past the regulation limit too), the regulation limit finds
+ * the first unregulated one.
  */
 import type { Design } from '../design/schema.ts';
 import { conditionsFor, pointRecorder } from '../sweep/evaluator.ts';
@@ -15,7 +17,8 @@ import { findPulseSkipping } from './pulse-skipping.ts';
 import { findPeak } from './peak.ts';
 import { findRegulationLimit, regulationCause } from './regulation-limit.ts';
 import { findThermalCeiling } from './thermal-ceiling.ts';
-import type { Landmarks } from './types.ts';
+import type { Landmark, Landmarks } from './types.ts';
+import { isUsablePoint } from '../ledger/regulated.ts';
 
 export interface LandmarkOptions {
   /** The knee threshold in percentage points below the peak (default 2). */
@@ -49,16 +52,25 @@ export function findLandmarks(sweep: LoadSweep, options: LandmarkOptions = {}): 
   const points = sweep.points;
   const loads = points.map((p) => p.loadA);
   const efficiency = points.map((p) => p.efficiency);
-  const usable = points.map((p) => p.converged && regulationCause(p) === null);
+  const usable = points.map((p) => isUsablePoint(p) && regulationCause(p) === null);
   const efficiencyAt = probe ? (load: number) => probe(load).efficiency : undefined;
   const peak = findPeak(loads, efficiency, usable, efficiencyAt);
   const { index: _index, ...peakLandmark } = peak;
   return {
     peak: peakLandmark,
     knee: findKnee(loads, efficiency, peak, options.kneeThresholdPoints ?? DEFAULT_KNEE_THRESHOLD_POINTS, usable, efficiencyAt),
-    modeBoundary: findModeBoundary(points, probe),
+    modeBoundary: modeBoundaryOf(points, usable, probe),
     pulseSkipping: findPulseSkipping(sweep, options.design, probe),
     thermalCeiling: findThermalCeiling(sweep.columns, points, probe),
     regulationLimit: findRegulationLimit(points, probe),
   };
+}
+
+/** The mode boundary among the usable points (a change of mode past the regulation limit is no landmark). */
+function modeBoundaryOf(points: readonly SweepPoint[], usable: readonly boolean[], probe?: (load: number) => SweepPoint): Landmark {
+  const kept = points.filter((_, i) => usable[i]);
+  if (kept.length === 0 && points.length > 0) {
+    return { unit: '', load: null, value: null, reason: 'No swept point is regulated and converged.', note: null, method: 'none' };
+  }
+  return findModeBoundary(kept, probe);
 }

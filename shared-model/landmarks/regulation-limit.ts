@@ -19,7 +19,7 @@ export function regulationCause(p: SweepPoint): WarningCode | null {
     const code = REGULATION_WARNINGS[k]!;
     for (let i = 0; i < p.warnings.length; i++) if (p.warnings[i]!.code === code) return code;
   }
-  return null;
+  return p.regulated ? null : 'cannot-regulate';
 }
 
 export function findRegulationLimit(points: readonly SweepPoint[], probe?: (load: number) => SweepPoint): RegulationLandmark {

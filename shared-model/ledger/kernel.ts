@@ -55,6 +55,7 @@ export function fillLosses(
   power.fill(0);
   let path = 0;
   let source = 0;
+  let offDrop = 0;
   let insideW = 0;
   // thermalOnly: a refill of the same point at other temperatures; only temperature-dependent slots change.
   slotWatts(s, thermalOnly);
@@ -64,7 +65,10 @@ export function fillLosses(
     const watts = slot.watts;
     power[ctx.slotNode[i]!] += watts;
     if (slot.source) source += watts;
-    else path += watts;
+    else {
+      path += watts;
+      if (!slot.drop) offDrop += watts;
+    }
     if (slot === s.swGate || slot === s.rectGate) insideW += watts;
   }
   const d = s.driver.inputs;
@@ -84,4 +88,5 @@ export function fillLosses(
   if (!(slopeW > 0) || slopeW > path) slopeW = slopeW > path ? path : 0;
   ctx.pathLossW = path - slopeW;
   ctx.sourceLossW = source + slopeW;
+  ctx.offDropLossW = offDrop;
 }

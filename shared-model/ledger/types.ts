@@ -95,6 +95,11 @@ export interface RatingCheck {
 
 export interface Evaluation {
   conditions: Conditions;
+  /**
+   * The output reaches its specified voltage (ledger/regulated.ts). False at the duty limit or past a
+   * boost's conversion-ratio limit: the numbers are then those of the lower output in operatingPoint.voutV.
+   */
+  regulated: boolean;
   converged: boolean;
   iterations: number;
   efficiency: number;

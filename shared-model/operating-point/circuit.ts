@@ -72,6 +72,17 @@ export interface Circuit {
   capacitorShare: number;
 }
 
+/**
+ * Whether the duty comes from volt-second balance on the real circuit alone (forced PWM: the rectifier
+ * conducts both ways, the converter stays in CCM down to 0 A). Every loss that the volt-second equation's
+ * drops do not carry is then paid by the source at that duty (ledger/slots.ts), so the duty is continuous
+ * from 0 A to overload. Otherwise (diode or diode emulation) the duty is balanced against the losses that
+ * take volt-seconds (power-balance.ts), which is well posed because the input current then grows with D.
+ */
+export function dutyByVoltSeconds(design: Design): boolean {
+  return isSynchronous(design) && design.topology.lightLoad === 'forced-pwm';
+}
+
 /** Whether the design's rectifier is a synchronous MOSFET (topology and part agree). */
 export function isSynchronous(design: Design): boolean {
   return design.topology.rectifier === 'synchronous' && design.parts.rectifier.kind === 'mosfet';

@@ -18,8 +18,10 @@ import { sweepWithLandmarks } from '../landmarks/sweep-with-landmarks.ts';
 import type { Landmarks } from '../landmarks/types.ts';
 import { regulationCause } from '../landmarks/regulation-limit.ts';
 import { figuresOfMerit } from '../sweep/figures-of-merit.ts';
+import { isUsablePoint } from '../ledger/regulated.ts';
 import type { LoadSweep, SweepSpacing } from '../sweep/types.ts';
 import type { MonteCarlo } from '../tolerance/monte-carlo.ts';
+import { calibrationSection } from '../fit/report-section.ts';
 import type { WorstCase } from '../tolerance/worst-case.ts';
 import { summarize } from './summary.ts';
 import { REPORT_CAUTIONS } from './cautions.ts';
@@ -77,7 +79,7 @@ export function titleBlock(input: Pick<ReportInput, 'design' | 'documentText' | 
   };
 }
 
-const usablePoint = (p: LoadSweep['points'][number]): boolean => p.converged && regulationCause(p) === null;
+const usablePoint = (p: LoadSweep['points'][number]): boolean => isUsablePoint(p) && regulationCause(p) === null;
 
 function familyCurve(label: string, sweep: LoadSweep, landmarks: Landmarks): FamilyCurve {
   return {
@@ -170,6 +172,7 @@ export function buildReport(input: ReportInput): ReportModel {
     summary: summarize(rated, inputVoltages, sweep),
     comparison,
     tolerance,
+    calibration: calibrationSection(design),
     methods: methodsFor({
       mechanisms,
       loadKind: loadKindOf(design.spec),

@@ -30,6 +30,11 @@ export function formatPercent(fraction: number, decimals = 2): string {
   return `${formatFixed(fraction * 100, decimals)} %`;
 }
 
+/** A figure that may be not available (sweep/figures-of-merit.ts): its percentage, or its reason. */
+export function formatFigurePercent(f: { available: true; value: number } | { available: false; reason: string }): string {
+  return f.available ? formatPercent(f.value) : f.reason;
+}
+
 /** A power in watts, 3 significant digits with prefix ("1.10 W", "42.0 mW"). */
 export const formatWatts = (watts: number): string => si(watts, 'W', 3);
 

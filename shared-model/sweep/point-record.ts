@@ -17,6 +17,7 @@ import type { LossColumn, SweepColumns, SweepPoint } from './types.ts';
 /** What a sweep point is made from: the fields of an Evaluation it reads (a LeanEvaluation has them too). */
 export interface RecordSource {
   conditions: Conditions;
+  regulated: boolean;
   converged: boolean;
   efficiency: number;
   totalLoss: number;
@@ -36,7 +37,7 @@ export interface RecordSource {
   }[];
   hazards: readonly { part: Role; partName: string; row: Pick<TouchLimitRow, 'limitC' | 'id' | 'standard'>; marginK: number }[];
   heatsinks: readonly { id: string; name: string; celsius: number }[];
-  operatingPoint: { inductor: { peakA: number; rippleA: number } };
+  operatingPoint: { voutV: number; inductor: { peakA: number; rippleA: number } };
   warnings: Warning[];
 }
 
@@ -149,6 +150,8 @@ export class ColumnBook {
       outputPower: e.outputPower,
       dutyCycle: e.dutyCycle,
       mode: e.conductionMode,
+      regulated: e.regulated,
+      voutV: op.voutV,
       converged: e.converged,
       inductorPeakA: op.inductor.peakA,
       inductorRippleA: op.inductor.rippleA,

@@ -69,6 +69,10 @@ export interface SweepPoint {
   outputPower: number;
   dutyCycle: number;
   mode: ConductionMode;
+  /** The output reaches its specified voltage (ledger/regulated.ts); false: the numbers are those of voutV. */
+  regulated: boolean;
+  /** Output voltage reached, V (the specified Vout when regulated). */
+  voutV: number;
   converged: boolean;
   /** Inductor current peak and ripple (peak to peak), A. */
   inductorPeakA: number;

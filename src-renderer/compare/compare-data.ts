@@ -4,7 +4,7 @@
  * part), efficiency curves overlaid, the loss difference against load, the crossover loads marked,
  * and the winner at the chosen load. Only the engine's numbers, regrouped.
  */
-import { formatEngineering } from '../../shared-model/index.ts';
+import { formatEngineering, isUsablePoint } from '../../shared-model/index.ts';
 import type { Comparison, Part, Role } from '../../shared-model/index.ts';
 import type { LineMarker, LineSeries } from '../charts/chart-data.ts';
 
@@ -49,11 +49,15 @@ export function compareRows(comparison: Comparison): CompareRow[] {
   return rows.sort((a, b) => Math.max(...b.watts) - Math.max(...a.watts));
 }
 
-/** Index of the lowest total loss at the chosen load (ties: the first). */
+/**
+ * Index of the lowest total loss at the chosen load among the parts with which the design regulates and
+ * converges there (ties: the first); −1 when there is none.
+ */
 export function winnerAtLoad(comparison: Comparison): number {
-  let best = 0;
+  let best = -1;
   comparison.alternatives.forEach((alt, k) => {
-    if (alt.evaluation.totalLoss < comparison.alternatives[best].evaluation.totalLoss) best = k;
+    if (!isUsablePoint(alt.evaluation)) return;
+    if (best < 0 || alt.evaluation.totalLoss < comparison.alternatives[best].evaluation.totalLoss) best = k;
   });
   return best;
 }

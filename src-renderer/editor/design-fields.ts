@@ -2,6 +2,14 @@
 import { CONTACT_LABELS, contactSchema, TOPOLOGIES } from '../../shared-model/index.ts';
 import { num, type ChoiceSpec, type FieldSpec } from './field-spec.ts';
 
+export const IDENTITY_FIELDS: FieldSpec[] = [
+  { type: 'text', key: 'name', label: 'Design name' },
+  { type: 'text', key: 'project', label: 'Project', optional: true },
+  { type: 'text', key: 'revision', label: 'Revision' },
+  { type: 'text', key: 'author', label: 'Author' },
+  { type: 'text', key: 'notes', label: 'Notes', multiline: true },
+];
+
 export const SPEC_FIELDS: FieldSpec[] = [
   num('vinMinV', 'Input voltage, lowest', 'V'),
   num('vinNomV', 'Input voltage, nominal', 'V'),

@@ -4,14 +4,48 @@
  * against load stacked by mechanism or by part. Everything plotted is a number from the sweep record
  * or the landmarks; the stacks only add the engine's loss columns.
  */
-import type { FamilyMember, Landmark, Landmarks, LoadSweep, Role } from '../../shared-model/index.ts';
-import type { LineMarker, LineSeries, PointMarker } from '../charts/chart-data.ts';
+import type { FamilyMember, Landmark, Landmarks, LoadSweep, Role, SweepPoint } from '../../shared-model/index.ts';
+import { formatEngineering, isUsablePoint } from '../../shared-model/index.ts';
+import type { LineMarker, LineSeries, PointMarker, Tone } from '../charts/chart-data.ts';
 
 export interface CurveChart {
   xValues: number[];
   series: LineSeries[];
   markers: LineMarker[];
   points: PointMarker[];
+  /** Why part of a curve is drawn dashed (points that do not regulate or have no steady state), or null. */
+  note?: string | null;
+}
+
+/**
+ * One efficiency curve as two series: solid where the point is regulated and converged, dashed where it
+ * is not (the dashed part joins the solid at the boundary point, so the curve stays one line).
+ */
+function usableSplit(key: string, label: string, points: readonly SweepPoint[], tone: Tone): LineSeries[] {
+  const usable = points.map((p) => isUsablePoint(p));
+  const solid = points.map((p, i) => (usable[i] ? p.efficiency : null));
+  const dashed = points.map((p, i) => (!usable[i] || usable[i - 1] === false || usable[i + 1] === false ? p.efficiency : null));
+  if (usable.every(Boolean)) return [{ key, label, values: solid, tone }];
+  return [
+    { key, label, values: solid, tone },
+    { key: `${key}-unregulated`, label: `${label}: not regulated or no steady state`, values: dashed, tone, dashed: true, thin: true },
+  ];
+}
+
+/** The sentence that says why a dashed part is drawn, from the sweep's own points. */
+function unusableNote(points: readonly SweepPoint[]): string | null {
+  const unregulated = points.filter((p) => !p.regulated);
+  const unsettled = points.filter((p) => p.regulated && !p.converged);
+  if (unregulated.length === 0 && unsettled.length === 0) return null;
+  const parts: string[] = [];
+  if (unregulated.length > 0) {
+    const lowest = unregulated.reduce((a, p) => (p.voutV < a.voutV ? p : a));
+    parts.push(
+      `${unregulated.length} of ${points.length} points do not regulate (the output falls to as low as ${formatEngineering(lowest.voutV, 'V', 4)} at ${formatEngineering(lowest.loadA, 'A', 3)})`,
+    );
+  }
+  if (unsettled.length > 0) parts.push(`${unsettled.length} have no electro-thermal steady state`);
+  return `Dashed: ${parts.join('; ')}. Their efficiency is that of a lower output or of no steady state, not the design's; the peak, knee and figures of merit leave them out.`;
 }
 
 const found = (l: Landmark): l is Landmark & { load: number; value: number } => l.load !== null && l.value !== null;
@@ -43,8 +77,9 @@ export function efficiencyCurves(
   const sameAxis = family?.every((m) => m.sweep.points.length === xValues.length && m.sweep.points.every((p, i) => p.loadA === xValues[i]));
   const series: LineSeries[] =
     family && sameAxis
-      ? family.map((m, k) => ({ key: `family-${k}`, label: m.label, values: m.sweep.points.map((p) => p.efficiency), tone: k }))
-      : [{ key: 'efficiency', label: `Efficiency at ${sweep.vinV} V in`, values: sweep.points.map((p) => p.efficiency), tone: 0 }];
+      ? family.flatMap((m, k) => usableSplit(`family-${k}`, m.label, m.sweep.points, k))
+      : usableSplit('efficiency', `Efficiency at ${sweep.vinV} V in`, sweep.points, 0);
+  const note = unusableNote(family && sameAxis ? family.flatMap((m) => m.sweep.points) : sweep.points);
   const markers = loadMarkers(sweep, landmarks, chosenA);
   const points: PointMarker[] = [];
   if (landmarks && found(landmarks.knee)) {
@@ -55,7 +90,7 @@ export function efficiencyCurves(
     markers.push({ key: 'peak', axis: 'x', value: landmarks.peak.load, label: 'peak', tone: 'accent', dashed: true });
     points.push({ key: 'peak', x: landmarks.peak.load, y: landmarks.peak.value, label: 'Peak efficiency', tone: 'accent' });
   }
-  return { xValues, series, markers, points };
+  return { xValues, series, markers, points, note };
 }
 
 /** Loss against load, one stacked series per mechanism or per part, largest at the heaviest load first. */

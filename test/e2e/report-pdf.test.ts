@@ -15,6 +15,7 @@ import {
   buildReport,
   evaluate,
   figuresOfMerit,
+  formatFigurePercent,
   findLandmarks,
   formatAmps,
   formatCelsius,
@@ -34,7 +35,7 @@ import type { Design, ReportModel } from '../../shared-model/index.ts';
 import { ensureReportBundle, readBuiltPage, REPO_ROOT } from '../../src-main/report/bundle.ts';
 import { findChromium, reportPdf } from '../../src-main/report/pdf.ts';
 import { singleFileReport, type PageSize } from '../../src-main/report/single-file.ts';
-import { demoDesign } from '../shared-model/report/demo.ts';
+import { demoDesign } from '../helpers/demo.ts';
 
 const OUT = join(REPO_ROOT, '.artifacts', 'report');
 const DATE = '2026-12-02';
@@ -175,8 +176,8 @@ describe.each(['synchronous-buck-A4', 'diode-boost-A4', 'diode-boost-Letter', 'h
         'Efficiency at rated load, Vin nom', formatPercent(rated.efficiency), formatWatts(rated.inputPower), formatWatts(rated.outputPower), formatWatts(rated.totalLoss),
         'Peak efficiency', `${formatPercent(marks.peak.value!)} at ${formatAmps(marks.peak.load!)}`,
         'Light-load knee', ...(marks.knee.load === null ? [] : [`${formatPercent(marks.knee.value!)} at ${formatAmps(marks.knee.load)}`]), marks.knee.definition.slice(0, 40),
-        'Average efficiency', formatPercent(fom.averageEfficiency),
-        'Efficiency at 10 % load', formatPercent(fom.lightLoadEfficiency),
+        'Average efficiency', formatFigurePercent(fom.averageEfficiency),
+        'Efficiency at 10 % load', formatFigurePercent(fom.lightLoadEfficiency),
         'Hottest part', roleLabel(hottest.part), formatCelsius(hottest.celsius), formatCelsius(hottest.limit), formatKelvin(hottest.marginK),
         'Thermal ceiling',
       ],
@@ -231,7 +232,7 @@ describe.each(['synchronous-buck-A4', 'diode-boost-A4', 'diode-boost-Letter', 'h
     const p = get(key);
     const fom = figuresOfMerit(p.design, { conditions: { vinV: p.design.spec.vinNomV } });
     const curves = section(p, '4 Efficiency, loss and temperature versus load', '5 Thermal table');
-    expectInOrder(curves, ['Figures of merit', ...fom.points.flatMap((x) => [formatAmps(x.loadA), formatPercent(x.efficiency)]), formatPercent(fom.averageEfficiency)], 'figures of merit');
+    expectInOrder(curves, ['Figures of merit', ...fom.points.flatMap((x) => [formatAmps(x.loadA), formatPercent(x.efficiency)]), formatFigurePercent(fom.averageEfficiency)], 'figures of merit');
   });
 });
 

@@ -18,6 +18,8 @@ export function compareJson(design: Design, c: Comparison): unknown {
       partId: a.partId,
       partName: a.partName,
       atLoad: {
+        regulated: a.evaluation.regulated,
+        voutV: a.evaluation.operatingPoint.voutV,
         efficiency: a.evaluation.efficiency,
         totalLoss: a.evaluation.totalLoss,
         converged: a.evaluation.converged,
@@ -31,7 +33,9 @@ export function compareJson(design: Design, c: Comparison): unknown {
       totalLoss: c.alternatives.map((a) => a.sweep.points.map((p) => p.totalLoss)),
       efficiency: c.alternatives.map((a) => a.sweep.points.map((p) => p.efficiency)),
       lossDifferenceFromFirst: c.alternatives.map((a) => a.lossDifferenceW),
-      winners: c.winners.map((k) => c.alternatives[k]?.partId),
+      regulated: c.alternatives.map((a) => a.sweep.points.map((p) => p.regulated)),
+      // A load where no part regulates with a steady state has no winner: "none".
+      winners: c.winners.map((k) => c.alternatives[k]?.partId ?? 'none'),
     },
     crossovers: c.crossovers,
     cautions: CAUTIONS,
@@ -60,10 +64,10 @@ export function renderComparison(design: Design, c: Comparison): string {
   );
   const crossings = c.crossovers.length
     ? c.crossovers.map((x) => `  at ${fmt(x.load, 'A', 4)}: ${x.fromPartId} has the lower loss below, ${x.toPartId} above`).join('\n')
-    : `  none in the swept range: ${alts[c.winners[0] ?? 0]?.partId} has the lower loss everywhere`;
+    : `  none in the swept range: ${alts[c.winners.find((k) => k >= 0) ?? -1]?.partId ?? 'no part'} has the lower loss wherever a part regulates`;
   const step = Math.max(1, Math.ceil(c.loadsA.length / 15));
   const rows = c.loadsA
-    .map((load, i) => [fmt(load, 'A', 4), ...alts.map((a) => fmt(a.sweep.points[i]?.totalLoss ?? NaN, 'W', 3)), alts[c.winners[i] ?? 0]?.partId ?? ''])
+    .map((load, i) => [fmt(load, 'A', 4), ...alts.map((a) => fmt(a.sweep.points[i]?.totalLoss ?? NaN, 'W', 3)), alts[c.winners[i] ?? -1]?.partId ?? 'none'])
     .filter((_, i) => i % step === 0 || i === c.loadsA.length - 1);
   const overlay = renderTable([{ title: 'Load', align: 'right' }, ...alts.map((a) => ({ title: a.partId, align: 'right' as const })), { title: 'Lower loss' }], rows);
   return [

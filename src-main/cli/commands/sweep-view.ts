@@ -1,12 +1,16 @@
 /**
- * Output of `wattledger sweep`: the JSON record (points with load, efficiency, totalLoss, temperatures by
- * part; landmarks with load and value or null with a reason), the CSV table, and the plain-text view.
+ * Output of `wattledger sweep`: the JSON record (points with load, regulated, efficiency, totalLoss,
+ * temperatures by part; landmarks found with load and value, or not found with a reason; figures of merit
+ * available with a value, or not with a reason — never a null), the CSV table, and the plain-text view.
+ * A point that is not regulated (ledger/regulated.ts) says so in every view: `regulated: false` with the
+ * output reached in JSON and CSV, and a mark in the table.
  */
 import type { Design, FiguresOfMerit, Landmark, Landmarks, LoadSweep } from '../../../shared-model/index.ts';
 import type { CsvCell } from '../../../shared-model/index.ts';
-import { csvLines, formatEngineering as fmt } from '../../../shared-model/index.ts';
+import { csvLines, formatEngineering as fmt, isUsablePoint, unusableReason } from '../../../shared-model/index.ts';
 import { CAUTION_LINE, CAUTIONS } from '../cautions.ts';
 import { renderTable, section } from '../table.ts';
+import { landmarksJson } from './landmark-json.ts';
 
 export function sweepJson(design: Design, sweep: LoadSweep, landmarks: Landmarks, figures: FiguresOfMerit): unknown {
   const c = sweep.columns;
@@ -19,6 +23,8 @@ export function sweepJson(design: Design, sweep: LoadSweep, landmarks: Landmarks
     units: { load: 'A', efficiency: 'ratio', totalLoss: 'W', temperatures: '°C', margins: 'K', losses: 'W' },
     points: sweep.points.map((p) => ({
       load: p.loadA,
+      regulated: p.regulated,
+      voutV: p.voutV,
       efficiency: p.efficiency,
       totalLoss: p.totalLoss,
       inputPower: p.inputPower,
@@ -31,7 +37,7 @@ export function sweepJson(design: Design, sweep: LoadSweep, landmarks: Landmarks
       losses: c.losses.map((l, j) => ({ part: l.part, mechanism: l.mechanism, watts: p.losses[j] })),
       warnings: [...new Set(p.warnings.map((w) => w.code))],
     })),
-    landmarks,
+    landmarks: landmarksJson(landmarks),
     figuresOfMerit: figures,
     cautions: CAUTIONS,
   };
@@ -44,13 +50,13 @@ export function sweepJson(design: Design, sweep: LoadSweep, landmarks: Landmarks
 export function sweepCsv(sweep: LoadSweep): string {
   const c = sweep.columns;
   const head = [
-    'load_A', 'efficiency', 'total_loss_W', 'input_W', 'output_W', 'duty_cycle', 'mode', 'converged',
+    'load_A', 'efficiency', 'total_loss_W', 'input_W', 'output_W', 'duty_cycle', 'mode', 'converged', 'regulated', 'vout_V',
     ...c.temperatures.map((t) => `T_${t.part}_C`),
     ...c.losses.map((l) => `loss_${l.part}_${l.mechanism.replace(/ /g, '_')}_W`),
     'warnings',
   ];
   const rows = sweep.points.map((p): CsvCell[] => [
-    p.loadA, p.efficiency, p.totalLoss, p.inputPower, p.outputPower, p.dutyCycle, p.mode, String(p.converged),
+    p.loadA, p.efficiency, p.totalLoss, p.inputPower, p.outputPower, p.dutyCycle, p.mode, String(p.converged), String(p.regulated), p.voutV,
     ...p.temperaturesC, ...p.losses, [...new Set(p.warnings.map((w) => w.code))].join(' '),
   ]);
   return csvLines([head, ...rows]);
@@ -74,10 +80,14 @@ export function renderSweep(design: Design, sweep: LoadSweep, m: Landmarks, figu
   ];
   const marks = renderTable([{ title: 'Landmark' }, { title: 'Load', align: 'right' }, { title: 'Value', align: 'right' }, { title: 'Note' }], landmarkRows);
   const fom = renderTable(
-    [{ title: 'Load' }, { title: 'Efficiency', align: 'right' }],
+    [{ title: 'Load' }, { title: 'Efficiency', align: 'right' }, { title: 'Note' }],
     [
-      ...figures.points.map((p) => [`${fmt(p.fractionOfRated, '%', 3)} (${fmt(p.loadA, 'A', 3)})`, pct(p.efficiency)]),
-      ['Average of 25/50/75/100 %', pct(figures.averageEfficiency)],
+      ...figures.points.map((p) => [
+        `${fmt(p.fractionOfRated, '%', 3)} (${fmt(p.loadA, 'A', 3)})`,
+        isUsablePoint(p) ? pct(p.efficiency) : '—',
+        unusableReason({ ...p, targetVoutV: design.spec.voutV }),
+      ]),
+      ['Average of 25/50/75/100 %', figures.averageEfficiency.available ? pct(figures.averageEfficiency.value) : '—', figures.averageEfficiency.available ? '' : figures.averageEfficiency.reason],
     ],
   );
   const step = Math.max(1, Math.ceil(sweep.points.length / 20));
@@ -90,7 +100,7 @@ export function renderSweep(design: Design, sweep: LoadSweep, m: Landmarks, figu
       fmt(p.loadA, 'A', 4), pct(p.efficiency), fmt(p.totalLoss, 'W', 3), p.mode,
       col ? `${col.part} ${fmt(p.temperaturesC[h], '°C', 4)}` : '—',
       fmt(Math.min(...p.marginsK), 'K', 3),
-      [...new Set(p.warnings.filter((w) => w.severity !== 'info').map((w) => w.code))].join(' '),
+      [...(p.regulated ? [] : [`not regulated (Vout ${fmt(p.voutV, 'V', 4)})`]), ...new Set(p.warnings.filter((w) => w.severity !== 'info').map((w) => w.code))].join(' '),
     ];
   });
   const table = renderTable(

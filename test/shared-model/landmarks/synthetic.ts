@@ -48,12 +48,14 @@ export function syntheticEvaluator(c: SyntheticCurve) {
     const outputPower = c.voutV * io;
     const duty = (c.dutyPerA ?? 0) * io;
     const warnings: Warning[] = [];
-    if (c.maxDuty !== undefined && duty > c.maxDuty) warnings.push({ code: 'duty-limit', severity: 'danger', message: 'duty limit' });
+    const limited = c.maxDuty !== undefined && duty > c.maxDuty;
+    if (limited) warnings.push({ code: 'duty-limit', severity: 'danger', message: 'duty limit' });
     if (runaway) warnings.push({ code: 'thermal-runaway', severity: 'danger', message: 'runaway' });
     const mode = c.boundaryA !== undefined && io < c.boundaryA ? 'DCM' : 'CCM';
     const ripple = c.boundaryA !== undefined ? 2 * c.boundaryA : 0.1;
     return {
       conditions,
+      regulated: !limited,
       converged: !runaway,
       iterations: 1,
       efficiency: outputPower / (outputPower + totalLoss),
@@ -74,6 +76,8 @@ export function syntheticEvaluator(c: SyntheticCurve) {
       checks: [],
       warnings,
       operatingPoint: {
+        // Past the duty limit the output falls in proportion to the duty it lacks (a buck's D·Vin).
+        voutV: limited ? (c.voutV * (c.maxDuty ?? 0)) / duty : c.voutV,
         inductor: { peakA: io + ripple / 2, rippleA: ripple, minA: io - ripple / 2, valleyA: io - ripple / 2, rmsA: io, averageA: io, acRmsA: 0 },
       } as unknown as Evaluation['operatingPoint'],
       heatsinks: [],

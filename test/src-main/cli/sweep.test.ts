@@ -3,8 +3,9 @@ import { DEMO_DESIGNS, findLandmarks, sweepLoad, validateDesign } from '../../..
 import type { Design } from '../../../shared-model/index.ts';
 import { EXIT } from '../../../src-main/cli/io.ts';
 import { runCli } from '../../../src-main/cli/main.ts';
-import { demoText, memoryIo } from './memory-io.ts';
+import { memoryIo } from './memory-io.ts';
 import { demoPath, wattledger } from './spawn.ts';
+import { demoText } from '../../helpers/demo.ts';
 
 function design(id: string): Design {
   const r = validateDesign(DEMO_DESIGNS.find((d) => d.id === id)?.json);
@@ -19,17 +20,26 @@ describe('wattledger sweep', () => {
     expect(await runCli(['sweep', 'd.json', '--json', '--points', '60'], io)).toBe(EXIT.ok); // exit 0 (src-main/cli/io.ts EXIT, as the other commands)
     const out = JSON.parse(io.stdout);
     expect(out.points).toHaveLength(60); // --points
-    for (const key of ['load', 'efficiency', 'totalLoss', 'temperatures']) expect(out.points[0]).toHaveProperty(key); // issue 4 command-line contract
+    for (const key of ['load', 'regulated', 'efficiency', 'totalLoss', 'temperatures']) expect(out.points[0]).toHaveProperty(key); // issue 4 and issue 10 §4 command-line contract
     for (const name of ['peak', 'knee', 'thermalCeiling']) {
       const l = out.landmarks[name];
-      expect(l).toHaveProperty('load'); // issue 4: each landmark has a load …
-      if (l.load === null) expect(typeof l.reason).toBe('string'); // … or null with a reason
-      else expect(typeof l.value).toBe('number'); // … and its value
+      expect(typeof l.found).toBe('boolean'); // issue 10 §4: found or not, never a null
+      if (!l.found) {
+        expect(typeof l.reason).toBe('string'); // … not found: a reason
+        expect(l).not.toHaveProperty('load'); // … and no load at all
+      } else {
+        expect(typeof l.load).toBe('number'); // issue 4: a found landmark has a load …
+        expect(typeof l.value).toBe('number'); // … and its value
+      }
     }
     const d = design('synchronous-buck');
     const sweep = sweepLoad(d, { points: 60 });
     expect(out.points.map((p: { efficiency: number }) => p.efficiency)).toEqual(sweep.points.map((p) => p.efficiency)); // the CLI adds nothing to the engine
-    expect(out.landmarks).toEqual(roundTrip(findLandmarks(sweep, { design: d }))); // landmarks are the engine's own
+    const engine = roundTrip(findLandmarks(sweep, { design: d }));
+    expect(out.landmarks.peak.load).toBe(engine.peak.load); // landmarks are the engine's own
+    expect(out.landmarks.knee.value).toBe(engine.knee.value);
+    expect(out.landmarks.thermalCeiling.reason ?? null).toBe(engine.thermalCeiling.reason);
+    expect(JSON.stringify(out.landmarks)).not.toMatch(/null/); // issue 10 §4: no null in the landmarks
     expect(out.landmarks.knee.definition).toMatch(/lightest load at which efficiency comes within 2 percentage points/); // the knee's definition travels with it (issue 4)
     expect(out.cautions.join(' ')).toMatch(/Estimates only/); // team brief rule 4
   });
