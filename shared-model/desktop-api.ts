@@ -68,6 +68,8 @@ export interface DesktopApi {
   openRecentLibrary(path: string): Promise<OpenedFile | { error: string }>;
   listRecentLibraries(): Promise<string[]>;
   saveLibrary(request: SaveRequest): Promise<SaveOutcome>;
+  /** A spreadsheet saved as CSV or tab-separated text, for the part import (read only; not a recent file). */
+  openSpreadsheet(): Promise<OpenedFile | null>;
   exportFile(request: ExportRequest): Promise<SaveOutcome>;
   /** Prints the current window (the report view) to a PDF file chosen by the user. */
   printToPdf(request: PdfRequest): Promise<SaveOutcome>;

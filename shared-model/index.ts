@@ -15,20 +15,20 @@ export type { Severity, Warning, WarningCode } from './warnings.ts';
 export * from './design/parts.ts';
 export * from './design/schema.ts';
 export type { QuantityName, QuantityRange } from './design/numbers.ts';
-export { ABSOLUTE_ZERO_C, RANGES as DESIGN_RANGES } from './design/numbers.ts';
+export { RANGES as DESIGN_RANGES } from './design/numbers.ts';
 export { unitOfKey, unitOfPath } from './design/key-units.ts';
 export type { DesignNotice, Problem } from './design/problems.ts';
 export { describeValue } from './design/problems.ts';
 export type { NumberRange } from './design/number-range.ts';
-export { inRange, numberRangeOf, rangeText } from './design/number-range.ts';
+export { inRange, rangeText } from './design/number-range.ts';
 export type { ConditionKey, ConditionOverrides, FieldRange } from './design/overrides.ts';
-export { checkConditionOverrides, CONDITION_RANGES, designFieldRange } from './design/overrides.ts';
-export { MAX_RIPPLE_OVER_CURRENT, MAX_SENSE_DROP_FRACTION } from './design/rules-validity.ts';
+export { checkConditionOverrides, CONDITION_RANGES } from './design/overrides.ts';
+
 export type { DesignValidation } from './design/validate.ts';
-export { crossFieldProblems, validateDesign } from './design/validate.ts';
+export { validateDesign } from './design/validate.ts';
 export type { MigrationResult } from './design/migrate.ts';
 export { migrateDesign } from './design/migrate.ts';
-export { parseDesignText, serializeDesign, unrepresentable } from './design/document-text.ts';
+export { parseDesignText, serializeDesign } from './design/document-text.ts';
 export type { JsonSyntaxError } from './design/json-position.ts';
 export { findJsonSyntaxError } from './design/json-position.ts';
 export { freeId, idFromName } from './design/ids.ts';
@@ -59,7 +59,7 @@ export { FIELD_WORDS, KIND_WORDS } from './part-import/field-labels.ts';
 export type { HeaderParts } from './part-import/header-unit.ts';
 export { headerReadings, normaliseHeader } from './part-import/header-unit.ts';
 export type { CellRead } from './part-import/cells.ts';
-export { allowedText, readCell, unitExponent } from './part-import/cells.ts';
+export { readCell, unitExponent } from './part-import/cells.ts';
 export type { ColumnMapping, MappingProblem, PartMapping } from './part-import/mapping.ts';
 export { checkMapping, mappingDocument, PART_MAPPING_FORMAT, PART_MAPPING_VERSION, partMappingSchema } from './part-import/mapping.ts';
 export { guessColumn, guessMapping, reuseMapping } from './part-import/guess.ts';
@@ -81,7 +81,6 @@ export { constantWaveform, offsetWaveform, scaleWaveform, segment, waveformOf } 
 export type { VoltageRipple } from './waveform/voltage-ripple.ts';
 export { capacitorVoltageRipple } from './waveform/voltage-ripple.ts';
 export {
-  COPPER_ALPHA20_PER_K,
   copperResistanceAt,
   diodeVf0At,
   esrAt,
@@ -93,7 +92,7 @@ export {
 // --- ledger ---
 export type * from './ledger/types.ts';
 export type { EvaluateOptions, LedgerEvaluator } from './ledger/evaluate.ts';
-export { DEFAULT_TOLERANCE_K, evaluate, ledgerEvaluator, POWER_BALANCE_RTOL } from './ledger/evaluate.ts';
+export { evaluate, ledgerEvaluator, POWER_BALANCE_RTOL } from './ledger/evaluate.ts';
 export type { LeanEvaluation, LeanHazard, LeanTerm } from './ledger/lean-evaluate.ts';
 export type { RegulationFlags } from './ledger/regulated.ts';
 export { isRegulated, isUsablePoint, REGULATION_RTOL, unusableReason } from './ledger/regulated.ts';
@@ -116,19 +115,15 @@ export type {
   SweepSpacing,
   TemperatureColumn,
 } from './sweep/types.ts';
-export { axisValues, checkAxis, MAX_AXIS_POINTS } from './sweep/spacing.ts';
+export { axisValues, MAX_AXIS_POINTS } from './sweep/spacing.ts';
 export { evaluatorFor } from './sweep/evaluator.ts';
-export { lossByMechanism } from './sweep/point-record.ts';
+
 export {
   checkLoadSweepOptions,
-  DEFAULT_SWEEP_FROM_FRACTION,
-  DEFAULT_SWEEP_POINTS,
-  DEFAULT_SWEEP_SPACING,
-  DEFAULT_SWEEP_TO_FRACTION,
   sweepLoad,
 } from './sweep/load-sweep.ts';
 export type { FamilyMember, FamilyOptions, SweepFamilies } from './sweep/families.ts';
-export { DEFAULT_EXTRA_AMBIENT_K, sweepFamilies } from './sweep/families.ts';
+export { sweepFamilies } from './sweep/families.ts';
 export type { FrequencySide, FrequencySweep, FrequencySweepOptions } from './sweep/frequency-sweep.ts';
 export { checkFrequencySweepOptions, sweepFrequency } from './sweep/frequency-sweep.ts';
 export type { AxisOptions, GridAxis, GridOptions, LoadGrid } from './sweep/grid.ts';
@@ -136,7 +131,6 @@ export { checkGridOptions, sweepGrid } from './sweep/grid.ts';
 export type { EfficiencyPoint, Figure, FigureOfMeritPoint, FiguresOfMerit } from './sweep/figures-of-merit.ts';
 export {
   AVERAGE_EFFICIENCY_FRACTIONS,
-  FIGURES_OF_MERIT_SOURCE,
   figuresOfMerit,
   figuresOfMeritOf,
   figureValue,
@@ -159,8 +153,8 @@ export { findPeak } from './landmarks/peak.ts';
 export { DEFAULT_KNEE_THRESHOLD_POINTS, findKnee, kneeDefinition } from './landmarks/knee.ts';
 export { findModeBoundary } from './landmarks/mode-boundary.ts';
 export { findThermalCeiling, hasFixedPoint } from './landmarks/thermal-ceiling.ts';
-export { findRegulationLimit, REGULATION_WARNINGS, regulationCause } from './landmarks/regulation-limit.ts';
-export { findEdge, findMaximum, findRoot, interpolateAt, interpolateCrossing, parabolaVertex } from './landmarks/search.ts';
+
+
 export type { Substitution } from './compare/substitute-part.ts';
 export { partInRole, ROLE_KINDS, substitutePart } from './compare/substitute-part.ts';
 export type { Crossover } from './compare/crossover.ts';
@@ -190,17 +184,14 @@ export {
 } from './tolerance/statistics.ts';
 export type { ResolvedTolerances, SpreadKey, ToleranceRange, Tolerances, Variation } from './tolerance/variation.ts';
 export {
-  applyVariation,
   checkTolerances,
   DEFAULT_AMBIENT_SPREAD_K,
   DEFAULT_SPREADS,
   describeVariation,
-  nominalVariation,
   resolveTolerances,
-  SPREAD_KEYS,
 } from './tolerance/variation.ts';
 export type { CornerTemperature, ToleranceCorner, WorstCase, WorstCaseOptions } from './tolerance/worst-case.ts';
-export { CORNER_CAUTION, cornerVariations, evaluateCorner, worstCase } from './tolerance/worst-case.ts';
+export { cornerVariations, worstCase } from './tolerance/worst-case.ts';
 export type { MonteCarlo, MonteCarloDistribution, MonteCarloOptions, PartDistribution } from './tolerance/monte-carlo.ts';
 export {
   checkMonteCarloOptions,
@@ -210,6 +201,17 @@ export {
   MAX_MONTE_CARLO_SAMPLES,
   monteCarlo,
 } from './tolerance/monte-carlo.ts';
+
+// --- sizing from the specification ---
+export type * from './sizing/types.ts';
+export type { SolvedCorner } from './sizing/corners.ts';
+export { cornerVoltages, solveCorners } from './sizing/corners.ts';
+export { chargeAboveMean } from './sizing/capacitors.ts';
+export { DEFAULT_RIPPLE_RATIO } from './sizing/inductor.ts';
+export type { SizingOptions } from './sizing/size-design.ts';
+export { sizeDesign, sizeFromCorners } from './sizing/size-design.ts';
+export type { HandInput, HandSizing } from './sizing/hand-method.ts';
+export { handSizing } from './sizing/hand-method.ts';
 
 // --- bench measurements and calibration ---
 export type { CalibrationRecord, MeasuredPoint, MeasuredTemperatures, Measurement } from './measurement/schema.ts';
@@ -224,24 +226,26 @@ export { measurementHash, measurementText } from './measurement/hash.ts';
 export type { LeastSquaresOptions, LeastSquaresProblem, LeastSquaresResult, StopReason } from './fit/least-squares.ts';
 export { leastSquares } from './fit/least-squares.ts';
 export type { IdentifiabilityIssue, ParameterStatistics } from './fit/intervals.ts';
-export { CORRELATION_LIMIT, FLAT_DIRECTION_RATIO, parameterStatistics } from './fit/intervals.ts';
+export { CORRELATION_LIMIT, parameterStatistics } from './fit/intervals.ts';
 export { studentTCdf, studentTQuantile } from './fit/student-t.ts';
 export type { FitParameter, FitParameterName } from './fit/parameters.ts';
 export { applyParameters, defaultFitParameters, fitParameters, SCALE_BOUNDS } from './fit/parameters.ts';
 export type * from './fit/types.ts';
 export type { CalibrationOptions, CalibrationOutcome } from './fit/calibrate.ts';
 export { calibrate } from './fit/calibrate.ts';
-export { modelPoints, pointConditions } from './fit/point-model.ts';
-export { LOSS_GROUPS, lossByGroup } from './fit/ledger-groups.ts';
+export { modelPoints } from './fit/point-model.ts';
+
 export { CALIBRATION_CAUTION } from './fit/caution.ts';
+export type { CalibrationSection, CalibrationSectionPoint } from './fit/report-section.ts';
+export { calibrationSection } from './fit/report-section.ts';
 
 // --- design-review report ---
 export type * from './report/types.ts';
 export { REPORT_FORMAT, REPORT_VERSION } from './report/types.ts';
 export type { ReportInput } from './report/build.ts';
-export { buildReport, DEFAULT_FAMILY_POINTS, titleBlock } from './report/build.ts';
+export { buildReport, titleBlock } from './report/build.ts';
 export type { MethodSelection } from './report/methods.ts';
-export { METHOD_CATALOGUE, methodsFor } from './report/methods.ts';
+export { METHOD_CATALOGUE } from './report/methods.ts';
 export { REPORT_CAUTIONS, SHORT_CAUTION } from './report/cautions.ts';
 export { ledgerCsv, sweepCsv } from './report/csv.ts';
 export type { CsvCell } from './csv/write.ts';

@@ -17,6 +17,7 @@ export type WarningCode =
   | 'capacitor-life'
   | 'burn-hazard'
   | 'negative-current'
+  | 'pulse-skipping'
   | 'target-missed'
   | 'model-limit';
 

@@ -35,6 +35,7 @@ const desktopApi: DesktopApi = {
   openRecentLibrary: (path) => invoke(INVOKE_CHANNELS.openRecentLibrary, path),
   listRecentLibraries: () => invoke(INVOKE_CHANNELS.listRecentLibraries),
   saveLibrary: (request) => invoke(INVOKE_CHANNELS.saveLibrary, request),
+  openSpreadsheet: () => invoke(INVOKE_CHANNELS.openSpreadsheet),
   exportFile: (request) => invoke(INVOKE_CHANNELS.exportFile, request),
   printToPdf: (request) => invoke(INVOKE_CHANNELS.printToPdf, request),
   writeRecovery: (text) => invoke(INVOKE_CHANNELS.writeRecovery, text),

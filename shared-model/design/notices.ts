@@ -47,16 +47,27 @@ export function ignoredKeys(input: unknown, parsed: unknown, path: (string | num
 }
 
 /**
- * A Coss(VDS) table that ends below the highest voltage its FET switches (Vin,max for a buck, Vout for a
+ * An RDS(on)(Tj) table that ends below the part's Tj max (a hotter junction gets the last ratio), and
+ * a Coss(VDS) table that ends below the highest voltage its FET switches (Vin,max for a buck, Vout for a
  * boost, plus a diode's drop ignored): above the last point the capacitance is held at its last value
  * (curves/coss-table.ts), an extrapolation the engineer should know about.
  */
-export function cossTableNotices(design: Design): DesignNotice[] {
+export function curveNotices(design: Design): DesignNotice[] {
   const swingV = design.topology.kind === 'buck' ? design.spec.vinMaxV : design.spec.voutV;
   const out: DesignNotice[] = [];
   for (const role of ['switch', 'rectifier'] as const) {
     const part = design.parts[role];
-    if (part.kind !== 'mosfet' || part.outputCapacitance.kind !== 'table') continue;
+    if (part.kind !== 'mosfet') continue;
+    const law = part.rdsTemperatureLaw;
+    if (law.law === 'table' && law.points[law.points.length - 1]!.tjC < part.tjMaxC) {
+      const lastC = law.points[law.points.length - 1]!.tjC;
+      out.push({
+        path: `parts.${role}.rdsTemperatureLaw.points`,
+        value: lastC,
+        message: `The RDS(on)(Tj) table of parts.${role} ends at ${formatEngineering(lastC, '°C', 4)}, below its Tj max of ${formatEngineering(part.tjMaxC, '°C', 4)}: a junction hotter than ${formatEngineering(lastC, '°C', 4)} is given the last ratio (an underestimate of RDS(on)); add points up to Tj max from the datasheet curve.`,
+      });
+    }
+    if (part.outputCapacitance.kind !== 'table') continue;
     const points = part.outputCapacitance.points;
     const lastV = points[points.length - 1]!.vdsV;
     if (lastV >= swingV) continue;
@@ -101,7 +112,7 @@ export function designNotices(design: Design): DesignNotice[] {
   }
   const reach = dutyReachNotice(design);
   if (reach) out.push(reach);
-  out.push(...cossTableNotices(design));
+  out.push(...curveNotices(design));
   if (topology.rectifier === 'diode' && (topology.deadTimeBeforeOnS > 0 || topology.deadTimeAfterOffS > 0))
     out.push({ path: 'topology.deadTimeBeforeOnS', value: topology.deadTimeBeforeOnS, message: 'Dead times apply to synchronous rectifiers only; with a diode they are ignored.' });
   return out;

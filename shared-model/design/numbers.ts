@@ -89,6 +89,7 @@ export const RANGES = {
   rdsAlphaPerK: { min: 0, max: 0.05, why: `Linear RDS(on) coefficient, 0 … 5 %/K (${TRADE}: 0.4–0.8 %/K, docs/methods.md §5).` },
   rdsExponent: { min: 0, max: 5, why: `RDS(on) power-law exponent, 0 … 5 (${TRADE}: 1.5–2.5, docs/methods.md §5).` },
   hotRatio: { min: 0.1, max: 10, why: `RDS(on) hot/25 °C ratio, 0.1 … 10 (${TRADE}: 1.2–2.2).` },
+  rdsRatio: { min: 0.1, max: 10, why: `RDS(on) at a temperature over RDS(on) at 25 °C, 0.1 … 10 (${TRADE}: about 0.7 at −40 °C to 2.2 at 175 °C).` },
   vfTempCoVPerK: { min: -0.01, max: 0.01, why: `VF0 drift, −10 … +10 mV/K (${TRADE}: about −1 to −2 mV/K, docs/methods.md §6).` },
   leakageDoublingK: { min: 2, max: 50, why: `Leakage doubling interval, 2 … 50 K (${TRADE}: about 10 K, docs/methods.md §6).` },
   partTempCoPerK: { min: -0.05, max: 0.05, why: `Fractional change per kelvin, −5 … +5 %/K (${OURS}: Isat and ESR drifts are a fraction of a %/K).` },

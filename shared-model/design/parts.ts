@@ -19,6 +19,10 @@ const partIdentity = {
   notes: z.string().max(2000).optional(),
 };
 
+/** One point of a normalised RDS(on)(Tj) curve: RDS(on)(tjC) / RDS(on)(25 °C). */
+export const rdsPointSchema = z.object({ tjC: q('statedC'), ratio: q('rdsRatio') });
+export type RdsPoint = z.infer<typeof rdsPointSchema>;
+
 /** How RDS(on) grows with junction temperature. */
 export const rdsTemperatureLawSchema = z.discriminatedUnion('law', [
   /** R(T) = R25 · (1 + alphaPerK · (T − 25 °C)) */
@@ -31,6 +35,17 @@ export const rdsTemperatureLawSchema = z.discriminatedUnion('law', [
     shape: z.enum(['linear', 'power']),
     hotC: q('statedC'),
     hotRatio: q('hotRatio'),
+  }),
+  /** The datasheet's normalised curve RDS(on)(Tj)/RDS(on)(25 °C) as a table (curves/table.ts). */
+  z.object({
+    law: z.literal('table'),
+    points: z
+      .array(rdsPointSchema)
+      .min(3)
+      .max(200)
+      .describe(
+        'Normalised RDS(on)(Tj) curve digitised from the datasheet, 3 to 200 points: Tj strictly rising, the ratio RDS(on)(Tj)/RDS(on)(25 °C) never falling; straight lines between points, the end ratios held outside the table (a design notice says when the table ends below the part\'s Tj max).',
+      ),
   }),
 ]);
 

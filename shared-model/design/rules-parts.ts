@@ -5,8 +5,8 @@
  *   Qgs + Qgd ≤ Qg and Qgs2 ≤ Qgs (Qgs2 is the part of Qgs after the threshold); one of Qgs2 or Qgs is
  *   needed to estimate the current-rise time [common practice: datasheet gate-charge curve].
  *   A two-point RDS(on) law needs its hot point above 25 °C.
- *   A Coss(VDS) table rises in VDS point by point and Coss never rises with VDS (the depletion region
- *   only widens with voltage: Sze & Ng, Physics of Semiconductor Devices, 3rd ed., §2.3 [memory]).
+ *   A datasheet curve rises in x point by point and its y keeps the direction physics gives it: Coss
+ *   never rises with VDS, the RDS(on) ratio never falls with Tj (sources at COSS_CURVE and RDS_CURVE).
  *   Inductance falls with current (roll-off ≤ L); the magnetic path length le = Ve/Ae of a real core
  *   lies between 1 mm and 1 m [common practice].
  *   A resistor's derating starts before its zero-power temperature.
@@ -18,27 +18,40 @@ import { inUnit, problem } from './problems.ts';
 import { at, num, str } from './read.ts';
 import { tableShapeProblem } from '../curves/table.ts';
 
-/** The Coss(VDS) table of a MOSFET at `p`: VDS rising, Coss positive and never rising. */
-function cossTable(doc: unknown, p: string, out: Problem[]): void {
-  if (str(doc, `${p}.outputCapacitance.kind`) !== 'table') return;
-  const points = at(doc, `${p}.outputCapacitance.points`);
+/** How a digitised curve must be shaped, and the words its sentences use. */
+interface CurveRule {
+  x: string;
+  y: string;
+  xName: string;
+  yName: string;
+  curve: string;
+  monotonic: 'non-increasing' | 'non-decreasing';
+  why: string;
+}
+
+/** Coss falls as VDS rises: the depletion region only widens with voltage (Sze & Ng, 3rd ed., §2.3 [memory]). */
+const COSS_CURVE: CurveRule = { x: 'vdsV', y: 'cossF', xName: 'VDS', yName: 'Coss', curve: 'Coss(VDS) table', monotonic: 'non-increasing', why: 'Coss must not rise with VDS (the datasheet curve falls as the voltage rises; check the columns are VDS then Coss)' };
+/** RDS(on) of a silicon MOSFET rises with Tj: carrier mobility falls (Baliga, Fundamentals of Power Semiconductor Devices, §6 [memory]). */
+const RDS_CURVE: CurveRule = { x: 'tjC', y: 'ratio', xName: 'Tj', yName: 'RDS(on) ratio', curve: 'RDS(on)(Tj) table', monotonic: 'non-decreasing', why: 'the RDS(on) ratio must not fall as Tj rises (a silicon MOSFET\'s channel resistance grows with temperature; check the columns are Tj then the ratio)' };
+
+/** The first point of the curve at `p` that breaks its rule, as a problem naming the point. */
+function curveTable(doc: unknown, p: string, rule: CurveRule, out: Problem[]): void {
+  const points = at(doc, p);
   if (!Array.isArray(points)) return;
-  const xs = points.map((point) => num(point, 'vdsV') ?? Number.NaN);
-  const ys = points.map((point) => num(point, 'cossF') ?? Number.NaN);
+  const xs = points.map((point) => num(point, rule.x) ?? Number.NaN);
+  const ys = points.map((point) => num(point, rule.y) ?? Number.NaN);
   if (xs.some((x) => !Number.isFinite(x)) || ys.some((y) => !Number.isFinite(y))) return; // the schema reports these
-  const bad = tableShapeProblem(xs, ys, 'non-increasing');
+  const bad = tableShapeProblem(xs, ys, rule.monotonic);
   if (!bad) return;
   const i = bad.index;
-  const where = `${p}.outputCapacitance.points[${i}]`;
-  const here = `(${inUnit(xs[i]!, 'vdsV')}, ${inUnit(ys[i]!, 'cossF')})`;
-  const before = i > 0 ? ` after (${inUnit(xs[i - 1]!, 'vdsV')}, ${inUnit(ys[i - 1]!, 'cossF')})` : '';
+  const pt = (k: number) => `(${inUnit(xs[k]!, rule.x)}, ${inUnit(ys[k]!, rule.y)})`;
   const [key, value, allowed, reason] =
     bad.kind === 'not-positive'
-      ? ['cossF', ys[i]!, 'cossF > 0', 'its Coss must be above zero']
+      ? [rule.y, ys[i]!, `${rule.y} > 0`, `its ${rule.yName} must be above zero`]
       : bad.kind === 'x-not-rising'
-        ? ['vdsV', xs[i]!, `vdsV > ${inUnit(xs[i - 1]!, 'vdsV')}`, 'each point must lie at a higher VDS than the one before it (sort the rows by voltage)']
-        : ['cossF', ys[i]!, `cossF ≤ ${inUnit(ys[i - 1]!, 'cossF')}`, 'Coss must not rise with VDS (the datasheet curve falls as the voltage rises; check the columns are VDS then Coss)'];
-  out.push(problem(`${where}.${key}`, value, allowed, `Point ${i + 1} ${here}${before} of the Coss(VDS) table ${p}.outputCapacitance: ${reason}.`));
+        ? [rule.x, xs[i]!, `${rule.x} > ${inUnit(xs[i - 1]!, rule.x)}`, `each point must lie at a higher ${rule.xName} than the one before it (sort the rows by ${rule.xName})`]
+        : [rule.y, ys[i]!, `${rule.y} ${rule.monotonic === 'non-increasing' ? '≤' : '≥'} ${inUnit(ys[i - 1]!, rule.y)}`, rule.why];
+  out.push(problem(`${p}[${i}].${key}`, value, allowed, `Point ${i + 1} ${pt(i)}${i > 0 ? ` after ${pt(i - 1)}` : ''} of the ${rule.curve} ${p}: ${reason}.`));
 }
 
 function mosfet(doc: unknown, role: string, out: Problem[]): void {
@@ -68,7 +81,8 @@ function mosfet(doc: unknown, role: string, out: Problem[]): void {
   if (qgs !== undefined && qgs2 !== undefined && qgs2 > qgs)
     out.push(problem(`${p}.qgs2C`, qgs2, `qgs2C ≤ ${p}.qgsC (${inUnit(qgs, 'qgsC')})`,
       `${p}.qgs2C (${inUnit(qgs2, 'qgs2C')}) is the part of qgsC after the threshold, so it cannot exceed qgsC (${inUnit(qgs, 'qgsC')}).`));
-  cossTable(doc, p, out);
+  if (str(doc, `${p}.outputCapacitance.kind`) === 'table') curveTable(doc, `${p}.outputCapacitance.points`, COSS_CURVE, out);
+  if (str(doc, `${p}.rdsTemperatureLaw.law`) === 'table') curveTable(doc, `${p}.rdsTemperatureLaw.points`, RDS_CURVE, out);
   const hot = num(doc, `${p}.rdsTemperatureLaw.hotC`);
   if (str(doc, `${p}.rdsTemperatureLaw.law`) === 'two-point' && hot !== undefined && hot <= 25)
     out.push(problem(`${p}.rdsTemperatureLaw.hotC`, hot, 'hotC > 25 °C',

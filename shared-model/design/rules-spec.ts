@@ -7,7 +7,8 @@
  *   Both dead times sit in the control switch's off time, so tdead,before + tdead,after < (1 − D)/fs with D
  *   the ideal duty at the lowest input voltage (buck Vo/Vin,min; boost 1 − Vin,min/Vo), capped at Dmax.
  *   The rectifier part must be what topology.rectifier says; a sense location needs a sense resistor and
- *   a thermal path for it. An output-ripple target must be smaller than the output voltage.
+ *   a thermal path for it. An output-ripple target must be smaller than the output voltage. Pulse
+ *   skipping needs its parameters (topology.pulseSkipping).
  */
 import type { Problem } from './problems.ts';
 import { topologyOfKind } from '../topology/registry.ts';
@@ -100,6 +101,12 @@ function senseResistor(doc: unknown, out: Problem[]): void {
       `topology.senseLocation is "${where}", so thermal.paths.senseResistor is needed to find the resistor's temperature.`));
 }
 
+function pulseSkipping(doc: unknown, out: Problem[]): void {
+  if (str(doc, 'topology.lightLoad') !== 'pulse-skipping' || at(doc, 'topology.pulseSkipping') !== undefined) return;
+  out.push(problem('topology.pulseSkipping', undefined, 'a record { minPeakCurrentA, sleepCurrentA }',
+    'topology.lightLoad is "pulse-skipping", so topology.pulseSkipping is needed: the minimum peak current of a pulse and the controller\'s sleep current.'));
+}
+
 /** The dead-time rule alone (the condition overrides re-check it at an overridden frequency or input). */
 export function deadTimeRule(doc: unknown): Problem[] {
   const out: Problem[] = [];
@@ -115,5 +122,6 @@ export function specificationRules(doc: unknown): Problem[] {
   deadTimes(doc, out);
   rectifierKind(doc, out);
   senseResistor(doc, out);
+  pulseSkipping(doc, out);
   return out;
 }

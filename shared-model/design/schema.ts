@@ -46,8 +46,21 @@ export const specificationSchema = z.object({
 export const topologySchema = z.object({
   kind: z.enum(['buck', 'boost']),
   rectifier: z.enum(['diode', 'synchronous']),
-  /** Synchronous designs only: forced PWM keeps CCM with negative current; diode emulation enters DCM. */
-  lightLoad: z.enum(['forced-pwm', 'diode-emulation']),
+  /**
+   * Light-load behaviour. Synchronous designs: forced PWM keeps CCM with negative current; diode emulation
+   * enters DCM. Pulse skipping (PFM, diode or synchronous designs): below the load at which the inductor
+   * peak would fall under `pulseSkipping.minPeakCurrentA`, pulses at that peak with idle time between them.
+   */
+  lightLoad: z.enum(['forced-pwm', 'diode-emulation', 'pulse-skipping']),
+  /** Pulse skipping's design parameters (needed when lightLoad is "pulse-skipping"). */
+  pulseSkipping: z
+    .object({
+      /** The inductor peak current of every pulse; the converter skips pulses below the load that needs it. */
+      minPeakCurrentA: q('ratingA'),
+      /** The controller's supply current while it sleeps between pulses. */
+      sleepCurrentA: q('quiescentA'),
+    })
+    .optional(),
   /** Dead time after the rectifier FET turns off, before the control switch turns on. */
   deadTimeBeforeOnS: q('deadTimeS'),
   /** Dead time after the control switch turns off, before the rectifier FET turns on. */

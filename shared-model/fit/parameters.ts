@@ -14,6 +14,7 @@
  * Bounds (our own rule): multipliers 0.2 … 5, quiescent 0 … 100 mA (its design range).
  */
 import type { Design, Role } from '../design/schema.ts';
+import { ROLE_LABELS } from '../report/labels.ts';
 
 export type FitParameterName =
   | 'switchRdsOn' | 'rectifierRdsOn' | 'rectifierDrop' | 'switchCharge' | 'coreLoss' | 'windingDcr' | 'quiescent'
@@ -49,7 +50,7 @@ function withParts(design: Design, parts: Partial<Design['parts']>): Design {
 function thermalParameter(design: Design, role: Role): FitParameter | undefined {
   const path = design.thermal.paths[role];
   if (!path) return undefined;
-  return scaled(`thermal.${role}`, `Thermal resistance to ambient, ${role} ×`, (d, k) => {
+  return scaled(`thermal.${role}`, `Thermal resistance to ambient, ${ROLE_LABELS[role].toLowerCase()} ×`, (d, k) => {
     const p = d.thermal.paths[role];
     if (!p) return d;
     if (p.kind === 'heatsink') {

@@ -1,5 +1,6 @@
 /**
- * All landmarks of a load sweep at once: peak, knee, CCM/DCM boundary, thermal ceiling, regulation limit.
+ * All landmarks of a load sweep at once: peak, knee, CCM/DCM boundary, pulse-skipping load, thermal
+ * ceiling, regulation limit.
  * With the design (and optionally an evaluator) each landmark is placed by searching the engine between
  * the two sweep points that bracket it; without, by interpolating those points.
  * Peak, knee and mode boundary use only regulated, converged points (ledger/regulated.ts); the thermal
@@ -12,6 +13,7 @@ import { ColumnBook } from '../sweep/point-record.ts';
 import type { PointEvaluator, LoadSweep, SweepPoint } from '../sweep/types.ts';
 import { DEFAULT_KNEE_THRESHOLD_POINTS, findKnee } from './knee.ts';
 import { findModeBoundary } from './mode-boundary.ts';
+import { findPulseSkipping } from './pulse-skipping.ts';
 import { findPeak } from './peak.ts';
 import { findRegulationLimit, regulationCause } from './regulation-limit.ts';
 import { findThermalCeiling } from './thermal-ceiling.ts';
@@ -58,6 +60,7 @@ export function findLandmarks(sweep: LoadSweep, options: LandmarkOptions = {}): 
     peak: peakLandmark,
     knee: findKnee(loads, efficiency, peak, options.kneeThresholdPoints ?? DEFAULT_KNEE_THRESHOLD_POINTS, usable, efficiencyAt),
     modeBoundary: modeBoundaryOf(points, usable, probe),
+    pulseSkipping: findPulseSkipping(sweep, options.design, probe),
     thermalCeiling: findThermalCeiling(sweep.columns, points, probe),
     regulationLimit: findRegulationLimit(points, probe),
   };

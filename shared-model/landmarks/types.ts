@@ -56,6 +56,8 @@ export interface Landmarks {
   knee: KneeLandmark;
   /** The CCM/DCM boundary: the load below which the inductor current falls to zero each period. */
   modeBoundary: Landmark;
+  /** Pulse skipping (PFM): the load below which pulses at the minimum peak current skip (null when the design does not skip pulses). */
+  pulseSkipping: Landmark;
   thermalCeiling: ThermalCeilingLandmark;
   regulationLimit: RegulationLandmark;
 }

@@ -3,8 +3,8 @@
  * each check that fails. The operating point already warns on switch/rectifier voltage and current
  * against their ratings; here they are repeated as RatingCheck records (no second warning), and the
  * checks that need temperatures or the ledger are added with their warnings.
- * A sweep needs only the warnings: with `out` null every check is made in the one `scratch` record and
- * none is kept (same comparisons, same warnings).
+ * Where the records go is the keeper's (keep.ts): the full record keeps them all, a sweep makes each in
+ * one scratch record and keeps none (same comparisons, same warnings).
  */
 import type { Design } from '../design/schema.ts';
 import type { Warning } from '../warnings.ts';
@@ -20,8 +20,9 @@ import {
   temperatureCheck,
   voltageCheck,
 } from '../hazards/ratings.ts';
-import type { PartTemperature, RatingCheck } from './types.ts';
+import type { PartTemperature } from './types.ts';
 import type { PointSummary } from './point-view.ts';
+import type { Keeper } from './keep.ts';
 
 const f3 = (x: number) => (Number.isFinite(x) ? Number(x.toPrecision(3)).toString() : String(x));
 
@@ -31,27 +32,22 @@ function temperatureOf(temps: readonly PartTemperature[], role: PartTemperature[
   return undefined;
 }
 
-function keep(out: RatingCheck[] | null, c: RatingCheck): void {
-  if (out) out.push(c);
-}
-
-/** Appends every check to `out` (or, with `out` null, makes each in `scratch`) and the failures' warnings to `warnings`. */
+/** Every check to the keeper, and the failures' warnings to `warnings`. */
 export function ratingChecks(
   design: Design,
   op: PointSummary,
   temps: readonly PartTemperature[],
   warnings: Warning[],
-  out: RatingCheck[] | null,
-  scratch?: RatingCheck,
+  keeper: Keeper,
 ): void {
-  const into = out ? undefined : scratch;
+  const into = keeper.scratch;
   const m = design.margins;
   const parts = design.parts;
 
   for (let k = 0; k < temps.length; k++) {
     const t = temps[k]!;
     const c = temperatureCheck(t.part, t.celsius, t.limit, m.temperatureMarginK, into);
-    keep(out, c);
+    keeper.check(c);
     if (!c.ok) {
       const over = t.celsius > t.limit;
       warnings.push({
@@ -67,7 +63,7 @@ export function ratingChecks(
   const tL = temperatureOf(temps, 'inductor')?.celsius ?? op.conditions.ambientC;
   const peak = Math.max(op.inductor.peakA, -op.inductor.minA);
   const sat = saturationCheck(peak, isatAt(ind.isatA, ind.isatAtC, ind.isatTempCoPerK, tL), into);
-  keep(out, sat);
+  keeper.check(sat);
   if (!sat.ok) {
     const i = warnings.findIndex((w) => w.code === 'saturation' && w.part === 'inductor');
     if (i >= 0) warnings.splice(i, 1);
@@ -78,23 +74,23 @@ export function ratingChecks(
   }
   // Made after the saturation warning (the scratch record then holds this check).
   const irms = currentCheck('inductor', op.inductor.rmsA, ind.irmsRatingA, 'RMS current', into);
-  keep(out, irms);
+  keeper.check(irms);
   if (!irms.ok) {
     warnings.push({ code: 'over-current-rating', severity: 'caution', part: 'inductor', path: 'parts.inductor.irmsRatingA',
       message: `Inductor RMS current ${f3(irms.value)} A is above its ${f3(irms.limit)} A rating.` });
   }
 
-  if (out) {
+  if (keeper.records) {
     // Records only: the operating point has already warned on these (checks.ts of the operating point).
-    out.push(voltageCheck('switch', op.stress.switchV, parts.switch.vdsRatingV, m.voltageDerating));
-    out.push(currentCheck('switch', op.stats.switch.peakA, parts.switch.idRatingA, 'peak current'));
+    keeper.check(voltageCheck('switch', op.stress.switchV, parts.switch.vdsRatingV, m.voltageDerating));
+    keeper.check(currentCheck('switch', op.stats.switch.peakA, parts.switch.idRatingA, 'peak current'));
     const rect = parts.rectifier;
     if (rect.kind === 'mosfet') {
-      out.push(voltageCheck('rectifier', op.stress.rectifierV, rect.vdsRatingV, m.voltageDerating));
-      out.push(currentCheck('rectifier', Math.max(op.stats.rectifier.peakA, -op.stats.rectifier.minA), rect.idRatingA, 'peak current'));
+      keeper.check(voltageCheck('rectifier', op.stress.rectifierV, rect.vdsRatingV, m.voltageDerating));
+      keeper.check(currentCheck('rectifier', Math.max(op.stats.rectifier.peakA, -op.stats.rectifier.minA), rect.idRatingA, 'peak current'));
     } else {
-      out.push(voltageCheck('rectifier', op.stress.rectifierV, rect.vrRatingV, m.voltageDerating));
-      out.push(currentCheck('rectifier', op.stats.rectifier.averageA, rect.ifRatingA, 'mean forward current'));
+      keeper.check(voltageCheck('rectifier', op.stress.rectifierV, rect.vrRatingV, m.voltageDerating));
+      keeper.check(currentCheck('rectifier', op.stats.rectifier.averageA, rect.ifRatingA, 'mean forward current'));
     }
   }
 
@@ -105,14 +101,14 @@ export function ratingChecks(
     const vBank = k === 0 ? op.conditions.vinV : op.voutV;
     const cap = bank.part;
     const v = voltageCheck(role, vBank, cap.voltageRatingV, m.voltageDerating, into);
-    keep(out, v);
+    keeper.check(v);
     if (!v.ok) {
       warnings.push({ code: 'over-voltage-rating', severity: vBank > cap.voltageRatingV ? 'danger' : 'caution', part: role,
         path: `parts.${role}.part.voltageRatingV`,
         message: `The ${role} sees ${f3(vBank)} V, above ${f3(m.voltageDerating * 100)} % of its ${f3(cap.voltageRatingV)} V rating.` });
     }
     const r = rippleCheck(role, irmsBank / bank.count, cap.rippleRatingA, m.rippleCurrentDerating, into);
-    keep(out, r);
+    keeper.check(r);
     if (!r.ok) {
       warnings.push({ code: 'ripple-current-rating', severity: 'caution', part: role, path: `parts.${role}.part.rippleRatingA`,
         message: `Each ${role} carries ${f3(r.value)} A RMS, above ${f3(r.limit)} A (rating × ${f3(m.rippleCurrentDerating)}).` });
@@ -120,7 +116,7 @@ export function ratingChecks(
     const t = temperatureOf(temps, role);
     if (cap.dielectric === 'electrolytic' && cap.life && m.requiredLifeHours !== undefined && t) {
       const life = lifeCheck(role, electrolyticLifeHours(cap.life.ratedHours, cap.life.ratedC, t.celsius), m.requiredLifeHours, into);
-      keep(out, life);
+      keeper.check(life);
       if (!life.ok) {
         warnings.push({ code: 'capacitor-life', severity: 'caution', part: role, path: 'margins.requiredLifeHours',
           message: `The ${role} lasts about ${f3(life.value)} h at ${f3(t.celsius)} °C (10 K rule, common practice), short of the required ${f3(life.limit)} h.` });
@@ -133,7 +129,7 @@ export function ratingChecks(
   if (sense && ts) {
     const rated = resistorRatingAt(sense.powerRatingW, sense.deratingStartC, sense.zeroPowerC, ts.celsius);
     const c = resistorPowerCheck('senseResistor', ts.dissipationW, rated, m.resistorPowerDerating, into);
-    keep(out, c);
+    keeper.check(c);
     if (!c.ok) {
       warnings.push({ code: 'resistor-power', severity: 'caution', part: 'senseResistor', path: 'parts.senseResistor.powerRatingW',
         message: `The sense resistor dissipates ${f3(c.value)} W, above ${f3(c.limit)} W (its rating derated at ${f3(ts.celsius)} °C × ${f3(m.resistorPowerDerating)}).` });

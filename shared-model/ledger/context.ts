@@ -1,8 +1,11 @@
 /**
- * The evaluation context of one design: everything that depends on the design only (thermal network,
- * loss slots, Qgs2 estimate, core coefficients, runaway ceilings) plus the reused work records of the
- * electro-thermal loop and the outputs of the last kernel fill. Built once per design, reused for any
- * number of conditions (ledgerEvaluator); vinV and frequencyHz are set per evaluation.
+ * The evaluation context of one design, in two parts:
+ *   DesignSetup — read-only, depends on the design only: topology record, thermal network, loss slots
+ *     (which mechanisms, on which node, who pays), Qgs2 estimate, core coefficients, runaway ceilings;
+ *   Workspace — typed per-evaluation values and reused records: the conditions' Vin and fs, the
+ *     electro-thermal loop's work records, the outputs of the last kernel fill, the loop and the sweep's
+ *     lean records (made on first use).
+ * Built once per design, reused for any number of conditions (ledgerEvaluator).
  */
 import type { Design } from '../design/schema.ts';
 import type { ConductionParameters } from '../operating-point/types.ts';
@@ -18,28 +21,41 @@ import { designNetwork, type DesignNetwork } from '../thermal/from-design.ts';
 import { RUNAWAY_BAND_K, ThermalWork } from '../thermal/fixed-point.ts';
 import { slotsOf, type Slots } from './slots.ts';
 import type { TouchPick } from './hazards.ts';
+import type { Loop } from './joint-loop.ts';
+import type { LeanRecords } from './lean-evaluate.ts';
 import { topologyOf } from '../topology/registry.ts';
 import type { ConverterTopology } from '../topology/types.ts';
+import type { PulseSkipping } from '../light-load/pulse-skipping.ts';
 
 const NO_SCRATCH = new Float64Array(0);
 
-export interface LedgerContext {
-  design: Design;
-  synchronous: boolean;
+/** What depends on the design only: set once, never written during an evaluation. */
+export interface DesignSetup {
+  readonly design: Design;
+  readonly synchronous: boolean;
   /** The design's topology record. */
-  topology: ConverterTopology;
+  readonly topology: ConverterTopology;
+  readonly net: DesignNetwork;
+  /** Runaway ceiling of each node (limit + RUNAWAY_BAND_K), °C. */
+  readonly ceilingC: Float64Array;
+  /** The design's loss slots (the set is fixed; each slot's input record and watts are the kernel's to fill). */
+  readonly slots: Slots;
+  /** Thermal node of each slot in slots.all. */
+  readonly slotNode: Int32Array;
+  /** Node of each temperature the conduction parameters read (the sense resistor's, or the controller's without one). */
+  readonly tempIndex: PartTempIndex;
+  readonly qgs2: { readonly qgs2C: number; readonly source: Qgs2Source };
+  readonly core: { readonly k: number; readonly alpha: number; readonly beta: number; readonly ki: number };
+}
+
+/** Per-evaluation values, reused work records and the kernel's outputs (typed; no untyped slots). */
+export interface Workspace {
+  /** The conditions of the evaluation in progress (fs: the pulse rate while pulses skip). */
   frequencyHz: number;
   vinV: number;
-  net: DesignNetwork;
-  /** Runaway ceiling of each node (limit + RUNAWAY_BAND_K), °C. */
-  ceilingC: Float64Array;
-  slots: Slots;
-  /** Thermal node of each slot in slots.all. */
-  slotNode: Int32Array;
-  /** Node of each temperature the conduction parameters read (the sense resistor's, or the controller's without one). */
-  tempIndex: PartTempIndex;
-  qgs2: { qgs2C: number; source: Qgs2Source };
-  core: { k: number; alpha: number; beta: number; ki: number };
+  /** The evaluation's pulse-skipping state (null: the design does not skip pulses at this point). */
+  pulseSkipping: PulseSkipping | null;
+  /** Dowell scratch (empty without a layered winding). */
   scratch: Float64Array;
   /** Reused record of the slope parts of the branch mean squares. */
   ripple: RippleSquares;
@@ -53,12 +69,16 @@ export interface LedgerContext {
   offDropLossW: number;
   /** The final point of the last evaluation: the solver's record, or the lean summary in a sweep. */
   op: PointSummary | undefined;
-  /** Per-context state owned by other ledger files, made on first use (the joint loop, the sweep's records). */
-  loop: unknown;
-  leanRecords: unknown;
+  /** The context's electro-thermal loop (joint-loop.ts), made on first use. */
+  loop: Loop | undefined;
+  /** The sweep's reused records (lean-evaluate.ts), made on first use. */
+  leanRecords: LeanRecords | undefined;
   /** The touch-limit row of each touchable part (hazards.ts), made on first use. */
   touchPicks: TouchPick[] | undefined;
 }
+
+/** A design's set-up and its workspace (one object: the hot loop reads both without an indirection). */
+export interface LedgerContext extends DesignSetup, Workspace {}
 
 /**
  * Work records reused by every evaluation of one context (nothing here outlives it, and no record handed
@@ -100,6 +120,7 @@ export function ledgerContext(design: Design, vinV = design.spec.vinNomV, freque
     synchronous,
     topology: topologyOf(design),
     frequencyHz,
+    pulseSkipping: null,
     vinV,
     net,
     ceilingC,

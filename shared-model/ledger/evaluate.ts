@@ -26,7 +26,8 @@ import { ledgerContext, type LedgerContext } from './kernel.ts';
 import type { JointLoop } from './joint-loop.ts';
 import { lossTerms } from './terms.ts';
 import { heatsinkRecords, partTemperatures } from './temperatures.ts';
-import { efficiencyOf, settlePoint, solvePoint, type SettleTarget } from './solve-point.ts';
+import { efficiencyOf, settlePoint, solvePoint, type Settled } from './solve-point.ts';
+import { keepRecords } from './keep.ts';
 import { leanEvaluateWith, type LeanEvaluation } from './lean-evaluate.ts';
 import type { Evaluation, Hazard, RatingCheck } from './types.ts';
 import { isRegulated } from './regulated.ts';
@@ -73,8 +74,8 @@ function evaluateWith(ctx: LedgerContext, conditions?: Partial<Conditions>, opti
   const temperatures = partTemperatures(ctx.design, ctx.net, sol);
   const checks: RatingCheck[] = [];
   const hazards: Hazard[] = [];
-  const settled: SettleTarget = { totalLoss: 0, inputPower: 0, checks, hazards };
-  settlePoint(ctx, point, temperatures, warnings, settled);
+  const settled: Settled = { totalLoss: 0, inputPower: 0 };
+  settlePoint(ctx, point, temperatures, warnings, keepRecords(checks, hazards), settled);
   const { totalLoss, inputPower } = settled;
   const outputPower = op.outputPowerW;
   return {

@@ -6,14 +6,15 @@
  * Which row applies to which part depends on the design only (`touchPicks`, made once per context); the
  * margins and warnings follow each point's surface temperatures. At a point in thermal runaway every
  * touchable surface reads "runaway" (unknown, counted as too hot), never "within". A sweep keeps only the margins
- * (`out` null): same rows, same comparisons, same warnings.
+ * (keep.ts keepMargins): same rows, same comparisons, same warnings.
  */
 import type { Contact, Design, Role, SurfaceMaterial, TouchLimitRow } from '../design/schema.ts';
 import type { Warning } from '../warnings.ts';
 import type { DesignNetwork } from '../thermal/from-design.ts';
 import { TOUCH_LIMITS } from '../hazards/touch-limits.ts';
-import { hazardCaution, touchHazard, touchLimitFor, touchMarginK, type RowFit } from '../hazards/touch-check.ts';
-import type { Hazard, PartTemperature } from './types.ts';
+import { hazardCaution, touchLimitFor, touchMarginK, type RowFit } from '../hazards/touch-check.ts';
+import type { PartTemperature } from './types.ts';
+import type { Keeper } from './keep.ts';
 
 const f1 = (x: number) => (Math.round(x * 10) / 10).toString();
 
@@ -49,33 +50,15 @@ export function touchPicks(design: Design, net: DesignNetwork): TouchPick[] {
 }
 
 /**
- * For each pick (its part's record in `temps`, node order): the Hazard record appended to `out`, or with
- * `out` null its margin written to `margins[k].marginK`; a burn-hazard warning for each surface over its limit.
+ * For each pick (its part's record in `temps`, node order): the hazard to the keeper (keep.ts: the Hazard
+ * record, or only its margin); a burn-hazard warning for each surface over its limit.
  */
-export function burnHazards(
-  picks: readonly TouchPick[],
-  temps: readonly PartTemperature[],
-  warnings: Warning[],
-  out: Hazard[] | null,
-  margins?: { marginK: number }[],
-  runaway = false,
-): void {
+export function burnHazards(picks: readonly TouchPick[], temps: readonly PartTemperature[], warnings: Warning[], keeper: Keeper, runaway = false): void {
   for (let k = 0; k < picks.length; k++) {
     const p = picks[k]!;
     const t = temps[p.node]!;
-    let marginK: number;
-    if (out) {
-      const h = touchHazard(t.part, t.partName, t.surfaceC, p.row, p.fit, p.material, p.contact);
-      if (runaway) {
-        h.status = 'runaway';
-        h.exceeded = true;
-      }
-      out.push(h);
-      marginK = h.marginK;
-    } else {
-      marginK = touchMarginK(p.row, t.surfaceC);
-      margins![k]!.marginK = marginK;
-    }
+    const marginK = touchMarginK(p.row, t.surfaceC);
+    keeper.hazard(k, p, t, marginK, runaway);
     if (runaway) {
       warnings.push({
         code: 'burn-hazard', severity: 'danger', part: t.part, path: `thermal.touch.${t.part}`,

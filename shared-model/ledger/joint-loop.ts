@@ -3,8 +3,9 @@
  *
  * Each call of `lossAt(T)` (from thermal/fixed-point.ts):
  *   1. conduction parameters at T; the circuit reduced to drops (operating-point/circuit.ts);
- *   2. duty: secant steps on f(D) = Vin·Iin(D) − Pout − P_path(D, T), warm-started from the previous
- *      call's duty and slope, until |f| ≤ 1e-12·Pin (usually one or two steps once the temperatures settle;
+ *   2. duty: the one duty solver (operating-point/duty-balance.ts, also solveOperatingPoint's) on
+ *      f(D) = Vin·Iin(D) − Pout − P_path(D, T), warm-started from the previous call's duty and slope,
+ *      until |f| ≤ 1e-12·Pin (usually one or two steps once the temperatures settle;
  *      a single step while the temperatures are still more than 1 K from their fixed point);
  *   3. per-part losses from the kernel on a reused LeanPoint; the tangents ∂P_i/∂T_i by one more kernel
  *      pass with every temperature raised by SLOPE_STEP_K and the electrical point held.
@@ -25,6 +26,7 @@ import { circuitInto, dutyByVoltSeconds, type Circuit } from '../operating-point
 import { shapeAt, shapeOfOwn } from '../operating-point/shape.ts';
 import { dutyLimitOf, solveVoltSecond } from '../operating-point/duty.ts';
 import { solveOperatingPoint } from '../operating-point/solve.ts';
+import { BALANCED, balanceDuty, INFEASIBLE, newDutyBalance, type BalanceProblem, type DutyBalance } from '../operating-point/duty-balance.ts';
 import { buildOperatingPoint } from '../operating-point/assemble.ts';
 import { addWarnings } from '../operating-point/checks.ts';
 import type { ConductionParameters } from '../operating-point/types.ts';
@@ -41,7 +43,6 @@ import {
 } from './point-view.ts';
 
 export const SLOPE_STEP_K = 0.01;
-const BALANCE_RTOL = 1e-12;
 const LOOSE_ABOVE_K = 1;
 
 export interface JointLoop {
@@ -59,7 +60,7 @@ export interface JointLoop {
 
 /** The context's loop, reset for an evaluation at `cond` (see header). */
 export function jointLoop(ctx: LedgerContext, cond: Conditions): JointLoop {
-  let loop = ctx.loop as Loop | undefined;
+  let loop = ctx.loop;
   if (!loop) {
     loop = new Loop(ctx);
     ctx.loop = loop;
@@ -68,7 +69,8 @@ export function jointLoop(ctx: LedgerContext, cond: Conditions): JointLoop {
   return loop;
 }
 
-class Loop implements JointLoop {
+/** The loop object a context keeps (context.ts Workspace.loop). */
+export class Loop implements JointLoop, BalanceProblem {
   readonly lossAt: LossAt;
   private cond!: Conditions;
   private fast = true;
@@ -76,7 +78,11 @@ class Loop implements JointLoop {
   private vo = 0;
   private pout = 0;
   private d = 0;
-  private slope = NaN;
+  /** The duty solver's state; its slope is carried from one electro-thermal step to the next. */
+  private readonly bal: DutyBalance = newDutyBalance();
+  /** Temperatures and conduction parameters of the step in progress (read by residualAt). */
+  private T: Float64Array = new Float64Array(0);
+  private cp!: ConductionParameters;
   /** Power-balance residual of the last balance, W. */
   private f = 0;
   /** Forced PWM: the duty is the volt-second duty at each step's temperatures (circuit.ts dutyByVoltSeconds). */
@@ -99,7 +105,7 @@ class Loop implements JointLoop {
     this.vo = vs0.vo;
     this.pout = vs0.vo * cond.loadA;
     this.d = vs0.d;
-    this.slope = NaN;
+    this.bal.slope = NaN;
   }
 
   isFast(): boolean {
@@ -146,10 +152,20 @@ class Loop implements JointLoop {
     this.f = this.vin * s.iin - this.pout - ctx.pathLossW;
   }
 
-  /** Whether the residual `f` of the last balance is within BALANCE_RTOL of the power flows. */
-  private balanced(): boolean {
-    const vin = this.vin;
-    return Math.abs(this.f) <= BALANCE_RTOL * Math.max(vin * this.ctx.work.shape.iin, this.pout + this.ctx.pathLossW, Number.MIN_VALUE);
+  /** The one duty solver's problem (operating-point/duty-balance.ts): the kernel filled at duty b.d. */
+  residualAt(b: DutyBalance): void {
+    this.d = b.d;
+    this.balance(this.T, this.cp);
+    b.f = this.f;
+    b.scale = Math.max(this.vin * this.ctx.work.shape.iin, this.pout + this.ctx.pathLossW);
+  }
+
+  /** d(Vin·Iin)/dD at b.d by a forward difference on the reused probe shape. */
+  inputSlopeAt(b: DutyBalance): void {
+    const w = this.ctx.work;
+    const d = b.d;
+    const h = 1e-7 * Math.max(d, 1e-3);
+    b.slope = (this.vin * (shapeAt(w.circuit, Math.min(d + h, this.ctx.design.spec.maxDuty), this.vo, w.probe).iin - w.shape.iin)) / h;
   }
 
   private slopesAt(view: PointView, ripple: RippleSquares, T: Float64Array, P: Float64Array, G: Float64Array): void {
@@ -175,9 +191,7 @@ class Loop implements JointLoop {
       return true;
     }
     const dMax = ctx.design.spec.maxDuty;
-    const vin = this.vin;
     const c = circuitInto(ctx.design, this.cond, cp, w.circuit);
-    const s = w.shape;
     if (this.byVoltSeconds) {
       // Forced PWM: the volt-second duty of the circuit at T; the losses it does not carry are the source's.
       const vs = solveVoltSecond(c, dMax, w.probe);
@@ -191,39 +205,19 @@ class Loop implements JointLoop {
       this.slopesAt(w.lean, ctx.ripple, T, P, G);
       return true;
     }
-    this.balance(T, cp);
-    let ok = this.balanced();
     // Far from the thermal fixed point (residual above LOOSE_ABOVE_K) one duty step is enough: the
     // temperatures, and with them the losses, will still move. Near it the duty is balanced fully.
-    const steps = residualK > LOOSE_ABOVE_K ? 1 : 12;
-    for (let k = 0; k < steps && !ok; k++) {
-      const d = this.d;
-      if (!(this.slope > 0)) {
-        const h = 1e-7 * Math.max(d, 1e-3);
-        this.slope = (vin * (shapeAt(c, Math.min(d + h, dMax), this.vo, w.probe).iin - s.iin)) / h;
-      }
-      const slope = this.slope;
-      const f = this.f;
-      let next = slope > 0 ? d - f / slope : f < 0 ? 0.5 * (d + dMax) : 0.5 * d;
-      if (!(next > 0)) next = 0.5 * d;
-      if (next > dMax) {
-        if (d >= dMax) {
-          // The balance needs more than the duty limit: hand the point to the solver's fallback.
-          this.fast = false;
-          return this.step(T, P, G, residualK);
-        }
-        next = dMax;
-      }
-      const fPrev = f;
-      const dPrev = d;
-      this.d = next;
-      this.balance(T, cp);
-      if (this.d !== dPrev) {
-        const secant = (this.f - fPrev) / (this.d - dPrev);
-        if (secant > 0) this.slope = secant;
-      }
-      ok = this.balanced();
+    const b = this.bal;
+    this.T = T;
+    this.cp = cp;
+    b.d = this.d;
+    balanceDuty(this, b, dMax, residualK > LOOSE_ABOVE_K ? 1 : 12);
+    if (b.status === INFEASIBLE) {
+      // The balance needs more than the duty limit: hand the point to the solver's fallback.
+      this.fast = false;
+      return this.step(T, P, G, residualK);
     }
+    const ok = b.status === BALANCED;
     P.set(ctx.nodePowerW);
     this.slopesAt(w.lean, ctx.ripple, T, P, G);
     return ok;

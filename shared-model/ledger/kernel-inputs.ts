@@ -221,5 +221,7 @@ export function fillPassiveInputs(ctx: LedgerContext, op: PointView, T: Float64A
   }
   const q = s.quiescent.inputs;
   q.vinV = ctx.vinV;
-  q.quiescentA = drv.quiescentA;
+  // Pulse skipping: awake (quiescent current) while a pulse runs, the sleep current for the rest.
+  const pfm = ctx.pulseSkipping;
+  q.quiescentA = pfm && pfm.active ? drv.quiescentA * pfm.awakeFraction + pfm.sleepCurrentA * (1 - pfm.awakeFraction) : drv.quiescentA;
 }

@@ -16,7 +16,8 @@ import type { LedgerContext } from './kernel.ts';
 import type { JointLoop } from './joint-loop.ts';
 import { newLeanPoint, type PointSummary } from './point-view.ts';
 import { partTemperaturesInto } from './temperatures.ts';
-import { efficiencyOf, picksOf, settlePoint, solvePoint, type SettleTarget } from './solve-point.ts';
+import { efficiencyOf, picksOf, settlePoint, solvePoint, type Settled } from './solve-point.ts';
+import { keepMargins, type Keeper } from './keep.ts';
 import type { Mechanism, PartTemperature, RatingCheck } from './types.ts';
 import { isRegulated } from './regulated.ts';
 
@@ -57,17 +58,20 @@ export interface LeanEvaluation {
   operatingPoint: PointSummary;
 }
 
-interface LeanRecords {
+/** The sweep's reused records of one context (context.ts Workspace.leanRecords). */
+export interface LeanRecords {
   evaluation: LeanEvaluation;
-  /** settlePoint's target: warnings only, the touch margins into evaluation.hazards. */
-  settle: SettleTarget;
+  /** settlePoint's sums. */
+  settle: Settled;
+  /** Warnings only: the touch margins into evaluation.hazards, checks in one scratch record. */
+  keeper: Keeper;
 }
 
 const newCheck = (): RatingCheck => ({ part: 'switch', check: 'temperature', value: 0, limit: 0, unit: '', marginFraction: 0, ok: true, note: '' });
 
 /** The context's lean records (made on first use). */
 function recordsOf(ctx: LedgerContext): LeanRecords {
-  const made = ctx.leanRecords as LeanRecords | undefined;
+  const made = ctx.leanRecords;
   if (made) return made;
   const nodes = ctx.net.nodes;
   const index = ctx.net.index;
@@ -91,10 +95,8 @@ function recordsOf(ctx: LedgerContext): LeanRecords {
     warnings: [],
     operatingPoint: (ctx.work.summary ??= newLeanPoint()),
   };
-  const settle: SettleTarget = {
-    totalLoss: 0, inputPower: 0, checks: null, hazards: null, hazardMargins: evaluation.hazards, scratch: newCheck(),
-  };
-  const records = { evaluation, settle };
+  const settle: Settled = { totalLoss: 0, inputPower: 0 };
+  const records = { evaluation, settle, keeper: keepMargins(evaluation.hazards, newCheck()) };
   ctx.leanRecords = records;
   return records;
 }
@@ -103,7 +105,7 @@ const finalSummary = (loop: JointLoop, T: Float64Array): PointSummary => loop.fi
 
 /** Evaluates one point into the context's lean record (see header); returns that record. */
 export function leanEvaluateWith(ctx: LedgerContext, conditions?: Partial<Conditions>, options?: ElectroThermalOptions): LeanEvaluation {
-  const { evaluation: r, settle } = recordsOf(ctx);
+  const { evaluation: r, settle, keeper } = recordsOf(ctx);
   const point = solvePoint(ctx, conditions, options, finalSummary);
   const { cond, sol, op } = point;
   // A fresh array: the summary's own on the fast path, the slow path's private record otherwise.
@@ -111,7 +113,7 @@ export function leanEvaluateWith(ctx: LedgerContext, conditions?: Partial<Condit
   const slots = ctx.slots.all;
   for (let i = 0; i < slots.length; i++) r.losses[i]!.watts = slots[i]!.watts;
   partTemperaturesInto(ctx.design, ctx.net, sol, r.temperatures);
-  settlePoint(ctx, point, r.temperatures, warnings, settle);
+  settlePoint(ctx, point, r.temperatures, warnings, keeper, settle);
   for (let s = 0; s < r.heatsinks.length; s++) r.heatsinks[s]!.celsius = sol.sinkTemperaturesC[s]!;
   r.conditions = cond;
   r.regulated = isRegulated(op.voutV, ctx.design.spec.voutV);

@@ -66,12 +66,15 @@ const deadIn = (): DeadTimeInputs => ({ vsdV: 0, firstA: 0, firstS: 0, secondA: 
 const recoveryIn = (): ReverseRecoveryInputs => ({ qrrC: 0, testA: 1, forwardA: 0, voltageV: 0, frequencyHz: 0 });
 const capIn = (): CapacitorEsrInputs => ({ irmsA: 0, esrOhm: 0, count: 1, temperatureC: 0 });
 
-const THERMAL: ReadonlySet<string> = new Set(['conduction', 'forward drop', 'reverse leakage', 'winding DC', 'winding AC', 'ESR', 'sense']);
-/** Mechanisms the volt-second equation's drops carry (operating-point/circuit.ts; the input bank's ESR is source-paid). */
-const DROPS: ReadonlySet<string> = new Set(['conduction', 'forward drop', 'winding DC', 'ESR', 'sense']);
-
-function slot<I>(role: Role, model: LossModel<I>, inputs: I, source = false): Slot<I> {
-  return { role, model, inputs, source, thermal: THERMAL.has(model.mechanism), drop: !source && DROPS.has(model.mechanism), watts: 0 };
+/**
+ * A slot of `model` on part `role`. Node, payer, temperature dependence and drop come from the model
+ * (losses/model.ts): a charge pulse is the source's where `pulsesFromSource` (the topology record);
+ * `paidBySource` overrides the payer for a model used in two places (the input bank's ESR).
+ */
+function slot<I>(role: Role, model: LossModel<I>, inputs: I, pulsesFromSource: boolean, paidBySource?: boolean): Slot<I> {
+  const source = paidBySource ?? (model.payer === 'source' || (model.payer === 'switch-node' && pulsesFromSource));
+  const node = model.heats === 'own' ? role : model.heats;
+  return { role: node, model, inputs, source, thermal: model.thermal, drop: !source && model.drop, watts: 0 };
 }
 
 /** Every slot of a design, named, plus the ordered list the kernel sums. */
@@ -106,46 +109,48 @@ export interface Slots {
 export function slotsOf(design: Design, synchronous: boolean): Slots {
   // The switch-node charge pulses: paid by the source where they bypass the inductor (topology record).
   const pulsesFromSource = topologyOf(design).chargePulsesFromSource;
+  const at = <I>(role: Role, model: LossModel<I>, inputs: I, paidBySource?: boolean): Slot<I> =>
+    slot(role, model, inputs, pulsesFromSource, paidBySource);
   const rect = design.parts.rectifier;
   const s: Slots = {
-    swConduction: slot('switch', conduction, conductionIn()),
-    swTurnOn: slot('switch', turnOn, {
+    swConduction: at('switch', conduction, conductionIn()),
+    swTurnOn: at('switch', turnOn, {
       voltageV: 0, currentA: 0, frequencyHz: 0, driveV: 0, plateauV: 0, pullUpOhm: 0, gateOhm: 0, qgs2C: 0, qgdC: 0,
     }),
-    swTurnOff: slot('switch', turnOff, {
+    swTurnOff: at('switch', turnOff, {
       voltageV: 0, currentA: 0, frequencyHz: 0, plateauV: 0, pullDownOhm: 0, gateOhm: 0, qgs2C: 0, qgdC: 0,
     }),
-    swCoss: slot('switch', outputCapacitance, { voltageV: 0, frequencyHz: 0, ctrlEossJ: 0, syncQossC: 0, syncEossJ: 0 }, pulsesFromSource),
-    swGate: slot('switch', gateDrive, gateIn(), true),
-    windingDc: slot('inductor', windingDc, { irmsA: 0, dcrOhm: 0, temperatureC: 0 }),
-    core: slot('inductor', coreLoss, { kiWPerM3: 0, alpha: 1, beta: 2, veM3: 0, fluxPerAmpT: 0, segments: [] }, true),
-    inputEsr: slot('inputCapacitor', capacitorEsr, capIn(), true),
-    outputEsr: slot('outputCapacitor', capacitorEsr, capIn()),
-    quiescent: slot('controller', quiescent, { vinV: 0, quiescentA: 0 }, true),
-    driver: slot('controller', driverSupply, { qgTotalC: 0, supplyV: 0, frequencyHz: 0, insideFetsW: 0 }, true),
+    swCoss: at('switch', outputCapacitance, { voltageV: 0, frequencyHz: 0, ctrlEossJ: 0, syncQossC: 0, syncEossJ: 0 }),
+    swGate: at('switch', gateDrive, gateIn()),
+    windingDc: at('inductor', windingDc, { irmsA: 0, dcrOhm: 0, temperatureC: 0 }),
+    core: at('inductor', coreLoss, { kiWPerM3: 0, alpha: 1, beta: 2, veM3: 0, fluxPerAmpT: 0, segments: [] }),
+    inputEsr: at('inputCapacitor', capacitorEsr, capIn(), true),
+    outputEsr: at('outputCapacitor', capacitorEsr, capIn()),
+    quiescent: at('controller', quiescent, { vinV: 0, quiescentA: 0 }),
+    driver: at('controller', driverSupply, { qgTotalC: 0, supplyV: 0, frequencyHz: 0, insideFetsW: 0 }),
     all: [],
   };
   if (synchronous) {
-    s.swDeadTime = slot('switch', deadTime, deadIn());
-    s.swRecovery = slot('switch', reverseRecovery, recoveryIn(), pulsesFromSource);
-    s.rectConduction = slot('rectifier', conduction, conductionIn());
-    s.rectGate = slot('rectifier', gateDrive, gateIn(), true);
-    s.rectDeadTime = slot('rectifier', deadTime, deadIn());
+    s.swDeadTime = at('switch', deadTime, deadIn());
+    s.swRecovery = at('switch', reverseRecovery, recoveryIn());
+    s.rectConduction = at('rectifier', conduction, conductionIn());
+    s.rectGate = at('rectifier', gateDrive, gateIn());
+    s.rectDeadTime = at('rectifier', deadTime, deadIn());
   } else {
     if (rect.kind === 'diode' && rect.technology === 'schottky') {
-      s.swJunction = slot('switch', junctionCapacitance, { cjF: 0, voltageV: 0, frequencyHz: 0 }, pulsesFromSource);
+      s.swJunction = at('switch', junctionCapacitance, { cjF: 0, voltageV: 0, frequencyHz: 0 });
     } else {
-      s.swRecovery = slot('switch', reverseRecovery, recoveryIn(), pulsesFromSource);
+      s.swRecovery = at('switch', reverseRecovery, recoveryIn());
     }
-    s.diodeForward = slot('rectifier', diodeForward, { vf0V: 0, rdOhm: 0, iavgA: 0, irmsA: 0, temperatureC: 0 });
-    s.diodeLeakage = slot('rectifier', reverseLeakage, {
+    s.diodeForward = at('rectifier', diodeForward, { vf0V: 0, rdOhm: 0, iavgA: 0, irmsA: 0, temperatureC: 0 });
+    s.diodeLeakage = at('rectifier', reverseLeakage, {
       leakageA: 0, reverseV: 0, reverseFraction: 0, idleV: 0, idleFraction: 0, temperatureC: 0,
-    }, pulsesFromSource);
+    });
   }
   if (design.parts.inductor.acWinding.kind !== 'none') {
-    s.windingAc = slot('inductor', windingAc, { acRmsA: 0, dcrOhm: 0, factor: 1, temperatureC: 0 }, true);
+    s.windingAc = at('inductor', windingAc, { acRmsA: 0, dcrOhm: 0, factor: 1, temperatureC: 0 });
   }
-  if (design.parts.senseResistor) s.sense = slot('senseResistor', senseResistor, { irmsA: 0, resistanceOhm: 0, temperatureC: 0 });
+  if (design.parts.senseResistor) s.sense = at('senseResistor', senseResistor, { irmsA: 0, resistanceOhm: 0, temperatureC: 0 });
   const order = [
     s.swConduction, s.swTurnOn, s.swTurnOff, s.swCoss, s.swDeadTime, s.swRecovery, s.swJunction, s.swGate,
     s.rectConduction, s.diodeForward, s.rectDeadTime, s.diodeLeakage, s.rectGate,

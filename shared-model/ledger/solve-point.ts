@@ -1,7 +1,8 @@
 /**
  * The steps every evaluation shares, whether it builds the full Evaluation record (evaluate.ts) or a
  * sweep's lean record (lean-evaluate.ts):
- *   solvePoint: conditions checked, the electro-thermal fixed point solved by the joint loop, the final
+ *   solvePoint: conditions checked, pulse skipping decided (below its mode-change load the point is solved
+ *     at the pulse rate, light-load/pulse-skipping.ts), the electro-thermal fixed point solved by the joint loop, the final
  *     point filled (the solver's record, or its lean summary), node temperatures recomputed from exactly
  *     the losses the ledger shows (they differ from the loop's by rounding only);
  *   settlePoint: Σ terms, input power (Vin · source current incl. source-paid terms) checked against
@@ -12,7 +13,8 @@
  */
 import type { Conditions } from '../operating-point/types.ts';
 import type { Warning } from '../warnings.ts';
-import { nominalConditions } from '../operating-point/conditions.ts';
+import { conductionParameters, nominalConditions, uniformTemps } from '../operating-point/conditions.ts';
+import { pulseSkippingAt, solveConditions } from '../light-load/pulse-skipping.ts';
 import { solveElectroThermal, type ElectroThermalOptions, type ElectroThermalSolution } from '../thermal/fixed-point.ts';
 import { networkTemperatures } from '../thermal/network.ts';
 import type { LedgerContext } from './kernel.ts';
@@ -20,8 +22,10 @@ import { jointLoop, type JointLoop } from './joint-loop.ts';
 import { burnHazards, touchPicks, type TouchPick } from './hazards.ts';
 import { ratingChecks } from './checks.ts';
 import { modelNotes, runawayWarning } from './notes.ts';
+import { pulseSkippingNotes } from '../light-load/notes.ts';
 import type { PointSummary } from './point-view.ts';
-import type { Hazard, PartTemperature, RatingCheck } from './types.ts';
+import type { PartTemperature } from './types.ts';
+import type { Keeper } from './keep.ts';
 
 /** Electro-thermal convergence: |Ta + Θ·P(T) − T| ≤ this for every part, K (reported temperatures are Ta + Θ·P exactly). */
 export const DEFAULT_TOLERANCE_K = 1e-4;
@@ -66,9 +70,15 @@ export function solvePoint<P extends PointSummary>(
   const cond = nominalConditions(ctx.design, conditions);
   checkConditions(cond);
   ctx.vinV = cond.vinV;
-  ctx.frequencyHz = cond.switchingFrequencyHz;
+  // Pulse skipping: below its mode-change load the point is solved at the pulse rate (light-load/).
+  const pfm = ctx.design.topology.lightLoad === 'pulse-skipping'
+    ? pulseSkippingAt(ctx.design, cond, conductionParameters(ctx.design, uniformTemps(cond.ambientC)))
+    : null;
+  ctx.pulseSkipping = pfm;
+  const solveCond = solveConditions(cond, pfm);
+  ctx.frequencyHz = solveCond.switchingFrequencyHz;
   const net = ctx.net;
-  const loop = jointLoop(ctx, cond);
+  const loop = jointLoop(ctx, solveCond);
   const tolerance = { toleranceK: options?.toleranceK ?? DEFAULT_TOLERANCE_K, maxIterations: options?.maxIterations };
   const sol = solveElectroThermal(net.network, cond.ambientC, ctx.ceilingC, loop.lossAt, tolerance, ctx.work.thermal);
   // The final point at the final temperatures; the kernel is refilled on it, so the temperatures are
@@ -103,16 +113,10 @@ export function picksOf(ctx: LedgerContext): TouchPick[] {
   return ctx.touchPicks;
 }
 
-/** What settlePoint keeps: the full record's lists, or (a sweep) only the hazard margins. */
-export interface SettleTarget {
+/** The sums settlePoint writes (a record the caller owns). */
+export interface Settled {
   totalLoss: number;
   inputPower: number;
-  /** The full record's rating checks and hazards, or null (a sweep: warnings only). */
-  checks: RatingCheck[] | null;
-  hazards: Hazard[] | null;
-  /** With hazards null: one record per touch pick receiving its margin, and a scratch check record. */
-  hazardMargins?: { marginK: number }[];
-  scratch?: RatingCheck;
 }
 
 /**
@@ -124,7 +128,8 @@ export function settlePoint(
   point: SolvedPoint<PointSummary>,
   temps: readonly PartTemperature[],
   warnings: Warning[],
-  into: SettleTarget,
+  keeper: Keeper,
+  into: Settled,
 ): void {
   const { cond, sol, op } = point;
   const net = ctx.net;
@@ -148,8 +153,9 @@ export function settlePoint(
       message: `The electro-thermal iteration stopped after ${sol.iterations} steps ${sol.residualK.toPrecision(2)} K from a fixed point; treat the temperatures as approximate.`,
     });
   }
-  ratingChecks(ctx.design, op, temps, warnings, into.checks, into.scratch);
-  burnHazards(picksOf(ctx), temps, warnings, into.hazards, into.hazardMargins, sol.runawayNode >= 0);
+  pulseSkippingNotes(ctx.pulseSkipping, warnings);
+  ratingChecks(ctx.design, op, temps, warnings, keeper);
+  burnHazards(picksOf(ctx), temps, warnings, keeper, sol.runawayNode >= 0);
   modelNotes(ctx, warnings);
   into.totalLoss = totalLoss;
   into.inputPower = inputPower;

@@ -19,6 +19,10 @@ export interface CapacitorEsrInputs {
 
 export const capacitorEsr: LossModel<CapacitorEsrInputs> = {
   mechanism: 'ESR',
+  heats: 'own',
+  payer: 'path',
+  thermal: true,
+  drop: true,
   formula: 'ESR(T) · Irms² / n',
   watts: (x) => nonNegativeFinite((x.esrOhm * x.irmsA * x.irmsA) / x.count),
   describe: (x) => [

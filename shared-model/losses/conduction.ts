@@ -21,6 +21,10 @@ export interface ConductionInputs {
 
 export const conduction: LossModel<ConductionInputs> = {
   mechanism: 'conduction',
+  heats: 'own',
+  payer: 'path',
+  thermal: true,
+  drop: true,
   formula: 'Irms² · RDS(on)(Tj)',
   watts: (x) => nonNegativeFinite(x.irmsA * x.irmsA * x.resistanceOhm),
   describe: (x) => [

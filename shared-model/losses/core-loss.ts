@@ -74,6 +74,10 @@ function periodOf(segments: readonly Segment[]): number {
 
 export const coreLoss: LossModel<CoreLossInputs> = {
   mechanism: 'core',
+  heats: 'own',
+  payer: 'source',
+  thermal: false,
+  drop: false,
   formula: 'Ve · (1/T) · Σ ki · |ΔBs/ts|^α · ΔB^(β−α) · ts  (iGSE)',
   watts: (x) => nonNegativeFinite(x.veM3 * igseLossDensity(x.kiWPerM3, x.alpha, x.beta, x.fluxPerAmpT, x.segments)),
   describe: (x) => {

@@ -25,6 +25,10 @@ export interface DeadTimeInputs {
 
 export const deadTime: LossModel<DeadTimeInputs> = {
   mechanism: 'dead-time diode',
+  heats: 'own',
+  payer: 'path',
+  thermal: false,
+  drop: false,
   formula: 'VSD · (I1 · t1 + I2 · t2) · fs',
   watts: (x) =>
     nonNegativeFinite(

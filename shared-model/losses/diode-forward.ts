@@ -19,6 +19,10 @@ export interface DiodeForwardInputs {
 
 export const diodeForward: LossModel<DiodeForwardInputs> = {
   mechanism: 'forward drop',
+  heats: 'own',
+  payer: 'path',
+  thermal: true,
+  drop: true,
   formula: 'Vf0(Tj) · Iavg + Rd · Irms²',
   watts: (x) => nonNegativeFinite(x.vf0V * x.iavgA + x.rdOhm * x.irmsA * x.irmsA),
   describe: (x) => [

@@ -26,6 +26,10 @@ export function gateSupplyW(x: DriverSupplyInputs): number {
 
 export const driverSupply: LossModel<DriverSupplyInputs> = {
   mechanism: 'gate drive',
+  heats: 'controller',
+  payer: 'source',
+  thermal: false,
+  drop: false,
   formula: 'ΣQg · Vsupply · fs − P(inside the FETs)',
   watts: (x) => nonNegativeFinite(gateSupplyW(x) - x.insideFetsW),
   describe: (x) => [

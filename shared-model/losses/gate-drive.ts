@@ -29,6 +29,10 @@ export function insideShare(gateOhm: number, pullUpOhm: number, pullDownOhm: num
 
 export const gateDrive: LossModel<GateDriveInputs> = {
   mechanism: 'gate drive',
+  heats: 'own',
+  payer: 'source',
+  thermal: false,
+  drop: false,
   formula: 'Qg · Vdrv · fs · ½ · (Rg/(Rg + Rpull-up) + Rg/(Rg + Rpull-down))',
   watts: (x) =>
     nonNegativeFinite(x.qgC * x.driveV * x.frequencyHz * insideShare(x.gateOhm, x.pullUpOhm, x.pullDownOhm)),

@@ -17,6 +17,10 @@ export interface JunctionCapacitanceInputs {
 
 export const junctionCapacitance: LossModel<JunctionCapacitanceInputs> = {
   mechanism: 'junction capacitance',
+  heats: 'switch',
+  payer: 'switch-node',
+  thermal: false,
+  drop: false,
   formula: '½ · Cj · V² · fs',
   watts: (x) => nonNegativeFinite(0.5 * x.cjF * x.voltageV * x.voltageV * x.frequencyHz),
   describe: (x) => [input('Cj (rectifier)', x.cjF, 'F'), input('V', x.voltageV, 'V'), input('fs', x.frequencyHz, 'Hz')],

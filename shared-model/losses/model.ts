@@ -11,8 +11,24 @@
 import type { Role } from '../design/schema.ts';
 import type { LossInput, LossTerm, Mechanism } from '../ledger/types.ts';
 
+/**
+ * Who pays a loss (ledger/slots.ts):
+ *   'path'        — it takes volt-seconds from the inductor, so the power balance moves the duty;
+ *   'source'      — paid by the source at an unchanged duty (controller, gate drive, the ripple's losses);
+ *   'switch-node' — a charge pulse at the switch node: paid by the source where the topology record says
+ *                   the pulses bypass the inductor (buck), else it takes volt-seconds (boost).
+ */
+export type LossPayer = 'path' | 'source' | 'switch-node';
+
 export interface LossModel<I> {
   mechanism: Mechanism;
+  /** The thermal node the heat goes to: 'own' — the part the mechanism is applied to — or a fixed part. */
+  heats: 'own' | 'switch' | 'controller';
+  payer: LossPayer;
+  /** The watts depend on the part's temperature (RDS(on), VF0, leakage, DCR, ESR, R). */
+  thermal: boolean;
+  /** On the path, its interval-mean part is a drop of the volt-second equation (operating-point/circuit.ts). */
+  drop: boolean;
   /** Short formula in plain text, as it appears in the ledger. */
   formula: string;
   watts(inputs: I): number;

@@ -54,6 +54,10 @@ export function cossAt(spec: OutputCapacitance, voltageV: number): { qossC: numb
 
 export const outputCapacitance: LossModel<OutputCapacitanceInputs> = {
   mechanism: 'output capacitance',
+  heats: 'switch',
+  payer: 'switch-node',
+  thermal: false,
+  drop: false,
   formula: '(Eoss,ctrl(V) + V · Qoss,sync(V) − Eoss,sync(V)) · fs; sync terms are 0 without a synchronous FET; Qoss ∝ V and Eoss ∝ V² from the stated voltage, or ∫C dv and ∫v·C dv of a Coss(VDS) table',
   watts: (x) =>
     nonNegativeFinite((x.ctrlEossJ + x.voltageV * x.syncQossC - x.syncEossJ) * x.frequencyHz),

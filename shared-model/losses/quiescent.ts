@@ -13,6 +13,10 @@ export interface QuiescentInputs {
 
 export const quiescent: LossModel<QuiescentInputs> = {
   mechanism: 'quiescent',
+  heats: 'controller',
+  payer: 'source',
+  thermal: false,
+  drop: false,
   formula: 'Vin · Iq',
   watts: (x) => nonNegativeFinite(x.vinV * x.quiescentA),
   describe: (x) => [input('Vin', x.vinV, 'V'), input('Iq', x.quiescentA, 'A')],

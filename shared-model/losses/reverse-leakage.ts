@@ -22,6 +22,10 @@ export interface ReverseLeakageInputs {
 
 export const reverseLeakage: LossModel<ReverseLeakageInputs> = {
   mechanism: 'reverse leakage',
+  heats: 'own',
+  payer: 'switch-node',
+  thermal: true,
+  drop: false,
   formula: 'IR(Tj) · (VR · D + Vidle · Didle)',
   watts: (x) =>
     nonNegativeFinite(

@@ -36,6 +36,10 @@ export function chargeAtEdge(x: ReverseRecoveryInputs): number {
 
 export const reverseRecovery: LossModel<ReverseRecoveryInputs> = {
   mechanism: 'reverse recovery',
+  heats: 'switch',
+  payer: 'switch-node',
+  thermal: false,
+  drop: false,
   formula: 'Qrr · (IF / Itest) · Vsw · fs; Qrr scaled linearly from its test current Itest (rated load current when not stated)',
   watts: (x) => nonNegativeFinite(chargeAtEdge(x) * x.voltageV * x.frequencyHz),
   describe: (x) => [

@@ -14,6 +14,10 @@ export interface SenseResistorInputs {
 
 export const senseResistor: LossModel<SenseResistorInputs> = {
   mechanism: 'sense',
+  heats: 'own',
+  payer: 'path',
+  thermal: true,
+  drop: true,
   formula: 'Irms² · R(T)',
   watts: (x) => nonNegativeFinite(x.irmsA * x.irmsA * x.resistanceOhm),
   describe: (x) => [input('Irms', x.irmsA, 'A'), input('R(T)', x.resistanceOhm, 'Ω'), input('T', x.temperatureC, '°C')],

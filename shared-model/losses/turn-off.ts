@@ -47,6 +47,10 @@ export function turnOffTimes(x: TurnOffInputs): { gateA: number; riseS: number; 
 
 export const turnOff: LossModel<TurnOffInputs> = {
   mechanism: 'turn-off overlap',
+  heats: 'own',
+  payer: 'path',
+  thermal: false,
+  drop: false,
   formula: '½ · Vsw · Ioff · (Qgd + Qgs2) / (Vpl/(Rpull-down + Rg)) · fs',
   watts: (x) => (x.currentA > 0 ? nonNegativeFinite(0.5 * x.voltageV * x.currentA * turnOffTotalS(x) * x.frequencyHz) : 0),
   describe: (x) => {

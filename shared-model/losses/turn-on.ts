@@ -49,6 +49,10 @@ export function turnOnTimes(x: TurnOnInputs): { gateA: number; riseS: number; fa
 
 export const turnOn: LossModel<TurnOnInputs> = {
   mechanism: 'turn-on overlap',
+  heats: 'own',
+  payer: 'path',
+  thermal: false,
+  drop: false,
   formula: '½ · Vsw · Ion · (Qgs2 + Qgd) / ((Vdrv − Vpl)/(Rpull-up + Rg)) · fs',
   watts: (x) => (x.currentA > 0 ? nonNegativeFinite(0.5 * x.voltageV * x.currentA * turnOnTotalS(x) * x.frequencyHz) : 0),
   describe: (x) => {

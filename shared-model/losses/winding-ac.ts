@@ -21,6 +21,10 @@ export interface WindingAcInputs {
 
 export const windingAc: LossModel<WindingAcInputs> = {
   mechanism: 'winding AC',
+  heats: 'own',
+  payer: 'source',
+  thermal: true,
+  drop: false,
   formula: 'Iac,rms² · DCR(T) · (F_R − 1)',
   watts: (x) => nonNegativeFinite(x.acRmsA * x.acRmsA * x.dcrOhm * (x.factor - 1)),
   describe: (x) => [

@@ -17,6 +17,10 @@ export interface WindingDcInputs {
 
 export const windingDc: LossModel<WindingDcInputs> = {
   mechanism: 'winding DC',
+  heats: 'own',
+  payer: 'path',
+  thermal: true,
+  drop: true,
   formula: 'IL,rms² · DCR(T)',
   watts: (x) => nonNegativeFinite(x.irmsA * x.irmsA * x.dcrOhm),
   describe: (x) => [input('IL,rms', x.irmsA, 'A'), input('DCR(T)', x.dcrOhm, 'Ω'), input('T', x.temperatureC, '°C')],

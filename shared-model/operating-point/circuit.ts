@@ -123,7 +123,7 @@ export function circuitInto(design: Design, conditions: Conditions, conduction: 
     out.rectIn = kind.rectifierBlocks.input;
     out.rectOut = kind.rectifierBlocks.output;
   }
-  out.blocksReverse = !synchronous || topology.lightLoad === 'diode-emulation';
+  out.blocksReverse = !synchronous || topology.lightLoad !== 'forced-pwm';
   out.synchronous = synchronous;
   out.senseAt = where;
   out.vinV = conditions.vinV;

@@ -7,6 +7,7 @@
  *   bare number is scaled by moving its decimal exponent: the result is the double nearest the decimal
  *   value, exactly as if the SI value had been typed, and an exported library reads back bit for bit.
  *   The value must then lie in the field's range (design/numbers.ts).
+ *   JSON: a list no single cell can spell (a digitised curve) as its JSON text, checked by its schema.
  *   Choices: the value or its words, any case ("Schottky", "two-point", "MOSFET"). Yes/no: yes, no,
  *   true, false, y, n, 1, 0, x (ticked). Text: as written, outer spaces trimmed.
  * A refusal says what the cell reads as and what the field allows; preview.ts adds the row and column.
@@ -49,6 +50,13 @@ function readNumber(field: PartField, text: string, columnUnit: string): CellRea
   const exponent = unitExponent(columnUnit, field.unit);
   let value = shiftBare(plain, exponent ?? 0);
   if (value === undefined) {
+    // A number with its own prefix and unit ("6.5 mΩ"): shift the decimal exponent, as for a bare number,
+    // so the value is the double the decimal text names (6.5 × 1e-3 in binary is not 0.0065).
+    const own = /^([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*([^\d\s].*)$/.exec(text.replace(/\u2212/g, '-').trim());
+    const ownExponent = own ? unitExponent(own[2]!, field.unit) : undefined;
+    if (own && ownExponent !== undefined && own[2]!.trim() !== '') value = shiftBare(own[1]!, ownExponent);
+  }
+  if (value === undefined) {
     const read = parseEngineering(text, field.unit);
     if (!read.ok) return { ok: false, found: read.message, allowed: allowedText(field) };
     value = read.value;
@@ -79,6 +87,16 @@ export function readCell(field: PartField, text: string, columnUnit: string): Ce
       return readNumber(field, trimmed, columnUnit);
     case 'choice':
       return readChoice(field, trimmed);
+    case 'json': {
+      let value: unknown;
+      try {
+        value = JSON.parse(trimmed);
+      } catch {
+        return { ok: false, found: `"${trimmed.slice(0, 40)}" is not JSON text`, allowed: describeSchema(field.schema, field.path) };
+      }
+      const checked = (field.schema as z.ZodType).safeParse(value);
+      return checked.success ? { ok: true, value: checked.data } : { ok: false, found: `"${trimmed.slice(0, 40)}${trimmed.length > 40 ? '…' : ''}"`, allowed: describeSchema(field.schema, field.path) };
+    }
     case 'boolean': {
       const word = trimmed.toLowerCase();
       if (YES.has(word)) return { ok: true, value: true };

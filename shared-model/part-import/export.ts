@@ -65,7 +65,7 @@ function cellOf(value: unknown, exponent: number): CsvCell {
     const text = shiftedText(value, exponent);
     return String(Number(text)) === text ? Number(text) : text;
   }
-  return String(value);
+  return typeof value === 'object' && value !== null ? JSON.stringify(value) : String(value);
 }
 
 /** The parts as CSV text (see the file header). */

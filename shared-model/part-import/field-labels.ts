@@ -38,6 +38,7 @@ export const FIELD_WORDS: Readonly<Record<string, FieldWords>> = {
   'outputCapacitance.cossF': { label: 'Coss', aliases: ['coss', 'output capacitance'] },
   'outputCapacitance.qossC': { label: 'Qoss', aliases: ['qoss', 'output charge'] },
   'outputCapacitance.eossJ': { label: 'Eoss', aliases: ['eoss', 'output energy'] },
+  'outputCapacitance.points': { label: 'Coss(VDS) table (JSON)', aliases: ['coss table', 'coss curve'] },
   'outputCapacitance.atV': { label: 'Coss measured at', aliases: ['coss at', 'coss vds', 'coss voltage', 'vds for coss'] },
   bodyDiodeVsdV: { label: 'Body diode VSD', aliases: ['vsd', 'body diode vf', 'body diode forward voltage'] },
   bodyDiodeQrrC: { label: 'Body diode Qrr', aliases: ['qrr', 'body diode qrr'] },

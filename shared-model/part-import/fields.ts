@@ -6,7 +6,7 @@
  *   - A field of an alternative form (a discriminated union such as the RDS(on) temperature law) names
  *     its union and the forms that hold it; the union's tag ("rdsTemperatureLaw.law") is a choice field.
  *   - A field of an optional group (inductance roll-off, capacitor life) names its group.
- *   - A datasheet curve (a table of points, e.g. Coss(VDS)) has no column: it is pasted in the editor.
+ *   - A datasheet curve (a table of points, e.g. Coss(VDS)) travels as JSON text in one cell (type "json").
  */
 import { z } from 'zod';
 import { unitOfKey } from '../design/key-units.ts';
@@ -16,7 +16,8 @@ import type { PartKind } from '../design/parts.ts';
 import { defOf, unwrap, type Schema } from '../design/zod-problems.ts';
 import { FIELD_WORDS, KIND_WORDS } from './field-labels.ts';
 
-export type FieldType = 'number' | 'text' | 'choice' | 'boolean';
+/** `json`: a list or record no single cell can spell (a digitised curve): the cell holds its JSON text. */
+export type FieldType = 'number' | 'text' | 'choice' | 'boolean' | 'json';
 
 export interface PartField {
   path: string;
@@ -42,25 +43,22 @@ export interface PartField {
 
 const isOptional = (s: Schema): boolean => defOf(s).type === 'optional';
 
-function typeOf(s: Schema): { type: FieldType; choices: string[] } | undefined {
+function typeOf(s: Schema): { type: FieldType; choices: string[] } {
   const def = defOf(unwrap(s));
   if (def.type === 'number') return { type: 'number', choices: [] };
   if (def.type === 'string') return { type: 'text', choices: [] };
   if (def.type === 'boolean') return { type: 'boolean', choices: [] };
   if (def.type === 'enum') return { type: 'choice', choices: Object.values(def.entries as Record<string, string>) };
   if (def.type === 'literal') return { type: 'choice', choices: (def.values as unknown[]).map(String) };
-  return undefined;
+  return { type: 'json', choices: [] };
 }
 
 function collect(): PartField[] {
   const byPath = new Map<string, PartField>();
   const add = (path: string, s: Schema, kind: PartKind, required: boolean, extra: Pick<PartField, 'union' | 'group'>): void => {
-    // A datasheet curve (a table of points) is not one spreadsheet cell: it is typed or pasted in the editor.
-    if (defOf(unwrap(s)).type === 'array') return;
     const t = typeOf(s);
-    if (!t) throw new Error(`part-import: no column type for ${kind}.${path}`);
-    const words = FIELD_WORDS[path];
-    if (!words) throw new Error(`part-import: no label for the part field ${path}`);
+    // A field added to the part schema before it has words here is still imported and exported, under its path.
+    const words = FIELD_WORDS[path] ?? { label: path, aliases: [] };
     const known = byPath.get(path);
     if (known) {
       if (!known.kinds.includes(kind)) known.kinds.push(kind);
@@ -102,8 +100,6 @@ function collect(): PartField[] {
         forms.forEach((form, i) => {
           for (const [sub, s] of Object.entries(defOf(form).shape as Record<string, Schema>)) {
             if (sub === tag) continue;
-            // A digitised curve (an array of points, e.g. the Coss(VDS) table) is not one spreadsheet cell.
-            if (defOf(unwrap(s)).type === 'array') continue;
             add(`${key}.${sub}`, s, kind, !isOptional(s), { union: { key, tag, forms: [formNames[i] as string] } });
           }
         });

@@ -6,6 +6,8 @@
  *                   power law: R(T) = R25 · ((T + 273.15) / 298.15)^k          (kelvin ratio)
  *                   two-point: α = (ratio − 1)/(Thot − 25) or k = ln(ratio)/ln((Thot + 273.15)/298.15),
  *                              fitted so the law passes through R(Thot) = ratio · R25.
+ *                   table:     R(T) = R25 · ratio(T), the datasheet's normalised curve, straight lines
+ *                              between its points and its end ratios held outside it.
  * - Copper (IEC 60028):        R(T) = R20 · (1 + 0.00393 · (T − 20))
  * - Diode threshold:           VF0(T) = VF0(25 °C) + dVF0/dT · (T − 25)
  * - Reverse leakage:           IR(T) = IR(T0) · 2^((T − T0)/ΔTdouble)
@@ -15,7 +17,7 @@
  * Sources: docs/methods.md §5 (RDS(on) laws, common practice; physics in Sze & Ng, Baliga [memory]), §8 (IEC
  * 60028 copper, α20 0.00393/K [memory for α]), §6 (VF0 drift and leakage doubling, common practice).
  */
-import type { Capacitor, Diode, Mosfet, Resistor } from '../design/parts.ts';
+import type { Capacitor, Diode, Mosfet, RdsPoint, Resistor } from '../design/parts.ts';
 
 const KELVIN_OFFSET = 273.15;
 const REFERENCE_C = 25;
@@ -41,6 +43,8 @@ export function rdsOnAt(mosfet: Mosfet, tC: number): number {
       return linearClamped(r25, law.alphaPerK, tC);
     case 'power':
       return powerLaw(r25, law.exponent, tC);
+    case 'table':
+      return r25 * rdsRatioAt(law.points, tC);
     case 'two-point': {
       if (law.shape === 'linear') {
         const span = law.hotC - REFERENCE_C;
@@ -52,6 +56,18 @@ export function rdsOnAt(mosfet: Mosfet, tC: number): number {
       return powerLaw(r25, k, tC);
     }
   }
+}
+
+/** RDS(on)(T)/RDS(on)(25 °C) from a normalised curve: straight lines between points, ends held. */
+export function rdsRatioAt(points: readonly RdsPoint[], tC: number): number {
+  const n = points.length;
+  if (tC <= points[0]!.tjC) return points[0]!.ratio;
+  if (tC >= points[n - 1]!.tjC) return points[n - 1]!.ratio;
+  let i = 0;
+  while (points[i + 1]!.tjC < tC) i++;
+  const a = points[i]!;
+  const b = points[i + 1]!;
+  return a.ratio + ((tC - a.tjC) / (b.tjC - a.tjC)) * (b.ratio - a.ratio);
 }
 
 /** Copper winding resistance at tC from its value at 20 °C (IEC 60028), Ω. */

@@ -21,6 +21,7 @@ import { figuresOfMerit } from '../sweep/figures-of-merit.ts';
 import { isUsablePoint } from '../ledger/regulated.ts';
 import type { LoadSweep, SweepSpacing } from '../sweep/types.ts';
 import type { MonteCarlo } from '../tolerance/monte-carlo.ts';
+import { calibrationSection } from '../fit/report-section.ts';
 import type { WorstCase } from '../tolerance/worst-case.ts';
 import { summarize } from './summary.ts';
 import { REPORT_CAUTIONS } from './cautions.ts';
@@ -171,9 +172,11 @@ export function buildReport(input: ReportInput): ReportModel {
     summary: summarize(rated, inputVoltages, sweep),
     comparison,
     tolerance,
+    calibration: calibrationSection(design),
     methods: methodsFor({
       mechanisms,
       loadKind: loadKindOf(design.spec),
+      pulseSkipping: design.topology.lightLoad === 'pulse-skipping',
       capacitorLife: rated.checks.some((c) => c.check === 'capacitor-life'),
       comparison: comparison !== null,
       tolerance: tolerance !== null,

@@ -58,6 +58,21 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     ],
   },
   {
+    id: 'pulse-skipping',
+    title: 'Pulse skipping (PFM) at light load',
+    formula:
+      'Below the mode-change load I = Q·fs, pulses ramp the inductor to the minimum peak current Ipk and back to zero: ' +
+      't_on = L·Ipk/(V_on − R_on·Ipk/2), t_off = L·Ipk/(V_off + R_off·Ipk/2), charge to the output per pulse Q; pulse rate (equivalent ' +
+      'switching frequency) f_p = Io/Q. The point is the DCM point at the period 1/f_p, so per-pulse losses scale with f_p; the controller ' +
+      'draws Iq while a pulse runs and its sleep current between pulses; the output ripple is one pulse\'s charge on the bank plus its ESR step.',
+    source: 'WattLedger methods §14 (the packet picture is common practice; the working is ours), checked against an exact time-domain simulation.',
+    limits: [
+      'One pulse per packet, evenly spaced; a controller that bursts several pulses per packet makes a proportionally larger ripple.',
+      'The losses that take no volt-seconds are paid by a slightly higher peak at the rate set by the minimum peak (the same energy to first order).',
+      'At no load no pulse carries current (the feedback network\'s own draw is not modelled); the AC winding loss of the short pulses uses the harmonics of the pulse period.',
+    ],
+  },
+  {
     id: 'conduction',
     title: 'MOSFET conduction',
     formula: 'P = Irms² · RDS(on)(Tj), with RDS(on)(T) = R25 · (1 + α · (T − 25 °C)) or R(T0) · (T/T0)^k in kelvin.',
@@ -281,6 +296,8 @@ export interface MethodSelection {
   mechanisms: Iterable<Mechanism>;
   /** What the load is (the design's spec.loadKind, absent: constant current): picks its load-model entry. */
   loadKind: LoadKind;
+  /** The design skips pulses at light load (topology.lightLoad "pulse-skipping"). */
+  pulseSkipping?: boolean;
   capacitorLife: boolean;
   comparison: boolean;
   tolerance: boolean;
@@ -291,6 +308,7 @@ export function methodsFor(selection: MethodSelection): MethodEntry[] {
   const wanted = new Set<string>(['operating-point', `load-${selection.loadKind}`, 'thermal-network', 'electro-thermal', 'ratings', 'burn-hazard', 'landmarks', 'figures-of-merit']);
   for (const m of selection.mechanisms) wanted.add(BY_MECHANISM[m]);
   if (selection.capacitorLife) wanted.add('capacitor-life');
+  if (selection.pulseSkipping) wanted.add('pulse-skipping');
   if (selection.comparison) wanted.add('comparison');
   if (selection.tolerance) wanted.add('tolerance');
   return METHOD_CATALOGUE.filter((entry) => wanted.has(entry.id));

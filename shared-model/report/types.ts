@@ -5,6 +5,7 @@
  * Units as in the engine: W, A, V, Hz, °C, K; loads in A.
  */
 import type { Design, Role } from '../design/schema.ts';
+import type { CalibrationSection } from '../fit/report-section.ts';
 import type { Evaluation } from '../ledger/types.ts';
 import type { Landmarks } from '../landmarks/types.ts';
 import type { FiguresOfMerit } from '../sweep/figures-of-merit.ts';
@@ -131,6 +132,8 @@ export interface ReportModel {
   summary: ReportSummary;
   comparison: ReportComparison | null;
   tolerance: ReportTolerance | null;
+  /** The bench measurement the design carries, its adopted fitted values and residuals (null without one). */
+  calibration: CalibrationSection | null;
   methods: MethodEntry[];
   cautions: string[];
 }

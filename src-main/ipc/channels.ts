@@ -19,6 +19,7 @@ export const INVOKE_CHANNELS = {
   openRecentLibrary: 'wattledger:open-recent-library',
   listRecentLibraries: 'wattledger:list-recent-libraries',
   saveLibrary: 'wattledger:save-library',
+  openSpreadsheet: 'wattledger:open-spreadsheet',
   exportFile: 'wattledger:export-file',
   printToPdf: 'wattledger:print-to-pdf',
   writeRecovery: 'wattledger:write-recovery',

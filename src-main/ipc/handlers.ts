@@ -23,6 +23,7 @@ export interface FileFilter {
 
 export const DESIGN_FILTERS: FileFilter[] = [{ name: 'WattLedger design', extensions: ['json'] }];
 export const LIBRARY_FILTERS: FileFilter[] = [{ name: 'WattLedger parts library', extensions: ['json'] }];
+export const SPREADSHEET_FILTERS: FileFilter[] = [{ name: 'Spreadsheet as CSV or tab-separated text', extensions: ['csv', 'tsv', 'txt'] }];
 
 export interface HandlerDeps<S> {
   chooseFileToOpen(sender: S, filters: FileFilter[]): Promise<string | null>;
@@ -62,11 +63,13 @@ export function createHandlers<S>(deps: HandlerDeps<S>) {
     return result.readOnly ? { ok: false, cancelled: false, readOnly: true, message: result.message } : { ok: false, cancelled: false, message: result.message };
   }
 
-  type Kind = 'design' | 'library';
+  /** A spreadsheet is only read: it is neither granted for writing nor listed as recent. */
+  type Kind = 'design' | 'library' | 'spreadsheet';
   const recentOf = (kind: Kind) => (kind === 'design' ? deps.recent : deps.recentLibraries);
 
   /** A path enters the grants and a recent list only here: after the user opened or saved it. */
   async function remember(path: string, kind: Kind = 'design'): Promise<void> {
+    if (kind === 'spreadsheet') return;
     deps.grants.grant(path);
     const list = await recentOf(kind).add(path);
     if (kind === 'design') deps.recentChanged(list);
@@ -142,6 +145,7 @@ export function createHandlers<S>(deps: HandlerDeps<S>) {
     openRecentLibrary: (_sender: S, path: string): Promise<OpenedFile | { error: string }> => openFromRecent(path, 'library'),
     listRecentLibraries: (): Promise<string[]> => deps.recentLibraries.list(),
     saveLibrary: (sender: S, request: SaveRequest): Promise<SaveOutcome> => saveDocument(sender, request, LIBRARY_FILTERS, 'json', 'library'),
+    openSpreadsheet: (sender: S): Promise<OpenedFile | null> => openChosen(sender, SPREADSHEET_FILTERS, 'spreadsheet'),
     async exportFile(sender: S, request: ExportRequest): Promise<SaveOutcome> {
       const data = request.encoding === 'base64' ? new Uint8Array(Buffer.from(request.content, 'base64')) : request.content;
       const name = withExtension(request.suggestedName, request.extensions[0] ?? 'txt');

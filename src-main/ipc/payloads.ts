@@ -54,6 +54,7 @@ export const INVOKE_PAYLOADS = {
   openRecentLibrary: z.tuple([filePath]),
   listRecentLibraries: z.tuple([]),
   saveLibrary: z.tuple([saveRequestSchema]),
+  openSpreadsheet: z.tuple([]),
   exportFile: z.tuple([exportRequestSchema]),
   printToPdf: z.tuple([pdfRequestSchema]),
   writeRecovery: z.tuple([text]),

@@ -7,11 +7,11 @@ import type { FileAccess, RecoverySnapshot } from './file-access.ts';
 
 export const RECOVERY_KEY = 'wattledger.recovery.v1';
 
-function pickFile(): Promise<File | null> {
+function pickFile(accept = '.json,application/json'): Promise<File | null> {
   return new Promise((resolve) => {
     const input = document.createElement('input');
     input.type = 'file';
-    input.accept = '.json,application/json';
+    input.accept = accept;
     input.addEventListener('change', () => resolve(input.files?.[0] ?? null), { once: true });
     input.addEventListener('cancel', () => resolve(null), { once: true });
     input.click();
@@ -54,6 +54,10 @@ export function createBrowserFileAccess(): FileAccess {
     kind: 'browser',
     async open() {
       const file = await pickFile();
+      return file ? readFile(file) : null;
+    },
+    async openSpreadsheet() {
+      const file = await pickFile('.csv,.tsv,.txt,text/csv,text/tab-separated-values,text/plain');
       return file ? readFile(file) : null;
     },
     async save(request) {

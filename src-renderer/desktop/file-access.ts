@@ -23,6 +23,8 @@ export interface FileAccess {
   readonly kind: 'electron' | 'browser';
   /** Asks the user for a design file; null when cancelled. */
   open(): Promise<OpenedFile | null>;
+  /** Asks the user for a spreadsheet saved as CSV or tab-separated text; null when cancelled. */
+  openSpreadsheet(): Promise<OpenedFile | null>;
   /** Saves to request.path (Electron, atomically) or asks / downloads. */
   save(request: SaveRequest): Promise<SaveOutcome>;
   exportFile(request: ExportRequest): Promise<SaveOutcome>;
@@ -40,6 +42,7 @@ export function createFileAccess(): FileAccess {
   return {
     kind: 'electron',
     open: () => api.openDesign(),
+    openSpreadsheet: () => api.openSpreadsheet(),
     save: (request) => api.saveDesign(request),
     exportFile: (request) => api.exportFile(request),
     readRecovery: () => api.readRecovery(),

@@ -2,6 +2,14 @@
 import { CONTACT_LABELS, contactSchema, TOPOLOGIES } from '../../shared-model/index.ts';
 import { num, type ChoiceSpec, type FieldSpec } from './field-spec.ts';
 
+export const IDENTITY_FIELDS: FieldSpec[] = [
+  { type: 'text', key: 'name', label: 'Design name' },
+  { type: 'text', key: 'project', label: 'Project', optional: true },
+  { type: 'text', key: 'revision', label: 'Revision' },
+  { type: 'text', key: 'author', label: 'Author' },
+  { type: 'text', key: 'notes', label: 'Notes', multiline: true },
+];
+
 export const SPEC_FIELDS: FieldSpec[] = [
   num('vinMinV', 'Input voltage, lowest', 'V'),
   num('vinNomV', 'Input voltage, nominal', 'V'),
@@ -59,8 +67,14 @@ export const LIGHT_LOAD_CHOICE: ChoiceSpec = {
   options: [
     { value: 'forced-pwm', label: 'Keep switching (current may reverse)' },
     { value: 'diode-emulation', label: 'Stop the rectifier at zero current (DCM)' },
+    { value: 'pulse-skipping', label: 'Pulse skipping (PFM): pulses at a minimum peak current' },
   ],
 };
+
+export const PULSE_SKIPPING_FIELDS: FieldSpec[] = [
+  num('minPeakCurrentA', 'Minimum peak current of a pulse', 'A'),
+  num('sleepCurrentA', 'Controller current while asleep', 'A'),
+];
 
 export const SENSE_CHOICE: ChoiceSpec = {
   type: 'choice',

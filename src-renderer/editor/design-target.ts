@@ -9,6 +9,7 @@ export function designTarget(doc: DocumentStore): EditTarget {
     get: (path) => getAt(doc.design, path),
     set: (path, value, label) => doc.edit(path, value, label),
     seal: () => doc.seal(),
-    problems: (path) => doc.problemsAt(path).map((p) => p.message),
+    problems: (path) => doc.shownAt(path).own,
+    related: (path) => doc.shownAt(path).related,
   };
 }

@@ -13,6 +13,8 @@ export interface EditTarget {
   seal(): void;
   /** Validation sentences for exactly this field. */
   problems(path: Path): string[];
+  /** Labels of fields whose problem concerns this field too (a rule relating two fields). */
+  related?(path: Path): string[];
 }
 
 export function fieldId(target: EditTarget, path: Path): string {

@@ -31,6 +31,33 @@ const rdsLaw: UnionSpec = {
       ],
       defaults: () => ({ shape: 'linear', hotC: 125, hotRatio: 1.5 }),
     },
+    {
+      value: 'table',
+      label: 'Normalised curve from the datasheet',
+      fields: [
+        {
+          type: 'table',
+          key: 'points',
+          label: 'RDS(on)(Tj) / RDS(on)(25 °C)',
+          columns: [
+            { key: 'tjC', label: 'Tj', unit: '°C' },
+            { key: 'ratio', label: 'Ratio', unit: '' },
+          ],
+          minRows: CURVE_POINTS.min,
+          maxRows: CURVE_POINTS.max,
+          help: 'Tj rising, ratio never falling. Between points RDS(on) follows straight lines; beyond the ends the end ratio is held (a notice says when the table stops below Tj max).',
+        },
+      ],
+      // A starting curve of the usual shape (invented): edit or paste over it.
+      defaults: () => ({
+        points: [
+          { tjC: -50, ratio: 0.75 },
+          { tjC: 25, ratio: 1 },
+          { tjC: 100, ratio: 1.45 },
+          { tjC: 150, ratio: 1.8 },
+        ],
+      }),
+    },
   ],
 };
 

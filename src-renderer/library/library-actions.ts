@@ -1,5 +1,5 @@
 /** Library commands that talk to the user or the file system: add, import, export. */
-import type { PartKind } from '../../shared-model/index.ts';
+import { partsToCsv, type PartKind } from '../../shared-model/index.ts';
 import { KIND_LABELS } from '../editor/part-fields.ts';
 import type { Workspace } from '../state/workspace.svelte.ts';
 
@@ -36,6 +36,15 @@ export async function importLibrary(ws: Workspace): Promise<void> {
 export async function exportLibrary(ws: Workspace): Promise<void> {
   const outcome = await ws.files
     .exportFile({ suggestedName: 'wattledger-parts.json', content: ws.library.exportText(), encoding: 'utf8', filterName: 'Part library', extensions: ['json'] })
+    .catch((error: Error) => ({ ok: false as const, cancelled: false, message: error.message }));
+  if (outcome.ok) ws.messages.success(`Exported ${ws.library.parts.length} parts to ${outcome.name}.`);
+  else if (!outcome.cancelled) ws.messages.error('The part library was not exported.', [outcome.message]);
+}
+
+/** The library as CSV, units in the headers (engine partsToCsv); reads back to the same parts through the import. */
+export async function exportLibraryCsv(ws: Workspace): Promise<void> {
+  const outcome = await ws.files
+    .exportFile({ suggestedName: 'wattledger-parts.csv', content: partsToCsv(ws.library.parts), encoding: 'utf8', filterName: 'CSV', extensions: ['csv'] })
     .catch((error: Error) => ({ ok: false as const, cancelled: false, message: error.message }));
   if (outcome.ok) ws.messages.success(`Exported ${ws.library.parts.length} parts to ${outcome.name}.`);
   else if (!outcome.cancelled) ws.messages.error('The part library was not exported.', [outcome.message]);

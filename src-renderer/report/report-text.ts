@@ -23,11 +23,13 @@ export function topologySentence(d: Design): string {
   const kind = topologyOf(d).title;
   const rect = t.rectifier === 'synchronous' ? 'synchronous rectifier (MOSFET)' : 'diode rectifier';
   const light =
-    t.rectifier === 'synchronous'
-      ? t.lightLoad === 'forced-pwm'
-        ? ', forced PWM at light load (current may reverse, stays in CCM)'
-        : ', diode emulation at light load (enters DCM)'
-      : '';
+    t.lightLoad === 'pulse-skipping'
+      ? ', pulse skipping (PFM) at light load (pulses at the minimum peak current with idle time between them)'
+      : t.rectifier === 'synchronous'
+        ? t.lightLoad === 'forced-pwm'
+          ? ', forced PWM at light load (current may reverse, stays in CCM)'
+          : ', diode emulation at light load (enters DCM)'
+        : '';
   const dead = t.rectifier === 'synchronous' ? `; dead times ${formatEngineering(t.deadTimeBeforeOnS, 's', 3, 'table')} before turn-on and ${formatEngineering(t.deadTimeAfterOffS, 's', 3, 'table')} after turn-off` : '';
   const sense = t.senseLocation === 'none' ? '; no current-sense resistor' : `; current-sense resistor in the ${t.senseLocation} path`;
   return `${kind[0]!.toUpperCase()}${kind.slice(1)} converter with a ${rect}${light}, switching at ${formatHertz(d.spec.switchingFrequencyHz)}${dead}${sense}.`;

@@ -38,6 +38,17 @@ export function setRectifier(ws: Workspace, rectifier: Design['topology']['recti
   }
 }
 
+/** Starting values of pulse skipping's parameters when a design first chooses it (invented, round numbers). */
+export const PULSE_SKIPPING_DEFAULTS = { minPeakCurrentA: 0.5, sleepCurrentA: 20e-6 } as const;
+
+/** Sets the light-load behaviour; choosing pulse skipping adds its parameters when absent (one undo step). */
+export function setLightLoad(ws: Workspace, lightLoad: Design['topology']['lightLoad']): void {
+  const design = ws.doc.design;
+  const pulseSkipping = design.topology.pulseSkipping ?? (lightLoad === 'pulse-skipping' ? { ...PULSE_SKIPPING_DEFAULTS } : undefined);
+  const topology = { ...design.topology, lightLoad, ...(pulseSkipping ? { pulseSkipping } : {}) };
+  ws.doc.commit({ ...design, topology }, 'Set the light-load behaviour');
+}
+
 export function setSenseLocation(ws: Workspace, location: Design['topology']['senseLocation']): void {
   try {
     const { design, removed } = withSenseLocation(ws.doc.design, location, ws.stash, ws.library.parts);

@@ -5,6 +5,7 @@
  */
 import { validateDesign } from '../../shared-model/index.ts';
 import type { Design, Problem } from '../../shared-model/index.ts';
+import { groupPlaced, NOT_SHOWN, placeProblems, type PlacedProblem, type ShownAtField } from '../editor/problem-words.ts';
 import { History } from './history.ts';
 import { groupByPath, pathKey, setAt, type Path } from './paths.ts';
 
@@ -32,6 +33,11 @@ export class DocumentStore {
   valid = $derived(this.problems.length === 0);
   /** Validation problems by dotted field path, for showing them in place. */
   problemsByPath = $derived(groupByPath(this.problems));
+  /** The field edited last: a rule relating two fields is shown on the one the user touched. */
+  editedPath: string | null = $state(null);
+  /** Every problem in the user's words (field labels, not paths), placed on the field it is shown at. */
+  placed: PlacedProblem[] = $derived(placeProblems(this.problems, this.design, this.editedPath));
+  #shownAt = $derived(groupPlaced(this.placed));
 
   constructor(initial: Design, fileName = UNTITLED, filePath: string | null = null) {
     this.#history = new History(initial);
@@ -40,6 +46,7 @@ export class DocumentStore {
 
   /** Sets one field (one undo step; keystrokes into the same field merge until `seal`). */
   edit(path: Path, value: unknown, label: string, mergeKey: string | null = pathKey(path)): void {
+    this.editedPath = pathKey(path);
     this.commit(setAt(this.design, path, value), label, mergeKey);
   }
 
@@ -68,6 +75,7 @@ export class DocumentStore {
 
   /** Replaces the document (new, open, restore): fresh history. `dirty` marks a restored draft. */
   load(design: Design, fileName: string, filePath: string | null, dirty = false): void {
+    this.editedPath = null;
     this.#history.reset(design);
     this.fileName = fileName;
     this.filePath = filePath;
@@ -86,6 +94,11 @@ export class DocumentStore {
 
   problemsAt(path: Path | string): Problem[] {
     return this.problemsByPath.get(pathKey(path)) ?? [];
+  }
+
+  /** The sentences shown at a field, and the labels of the fields whose problem concerns it too. */
+  shownAt(path: Path | string): ShownAtField {
+    return this.#shownAt.get(pathKey(path)) ?? NOT_SHOWN;
   }
 
   #sync(): void {

@@ -7,6 +7,9 @@ import { designText, readDesignText, readRecoveryText, recoveryText, suggestFile
 import { UNTITLED } from './document.svelte.ts';
 import type { Workspace } from './workspace.svelte.ts';
 
+/** Tag of the messages that concern the draft's invalid fields: they leave when it is valid. */
+export const INVALID_DRAFT = 'invalid-draft';
+
 /** How often a changed draft is written as a recovery snapshot. */
 export const RECOVERY_INTERVAL_MS = 3000;
 
@@ -75,9 +78,12 @@ export function saveDesign(ws: Workspace, asNew: boolean): Promise<boolean> {
 async function saveNow(ws: Workspace, asNew: boolean): Promise<boolean> {
   const doc = ws.doc;
   if (!doc.valid) {
-    ws.messages.error(
+    // One message, replaced by the next refusal and gone once the draft is valid (MessageList).
+    ws.messages.show(
+      'error',
       `“${doc.fileName}” was not saved: ${doc.problems.length} field${doc.problems.length === 1 ? ' is' : 's are'} invalid. Correct them first (the recovery snapshot keeps your draft meanwhile).`,
-      doc.problems.map((p) => p.message),
+      doc.placed.map((p) => p.text),
+      INVALID_DRAFT,
     );
     return false;
   }

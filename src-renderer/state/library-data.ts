@@ -3,8 +3,8 @@
  * schema; bad entries are reported by index, field, value and reason and left out), writing the
  * export file, and naming copies.
  */
-import { PARTS_LIBRARY_FORMAT, PARTS_LIBRARY_VERSION, partSchema, validatePartsLibrary } from '../../shared-model/index.ts';
-import type { Part, PartKind, PartsLibrary } from '../../shared-model/index.ts';
+import { freeId, PARTS_LIBRARY_FORMAT, PARTS_LIBRARY_VERSION, partSchema, validatePartsLibrary } from '../../shared-model/index.ts';
+import type { Part, PartKind, PartsLibrary, Problem } from '../../shared-model/index.ts';
 import { groupByPath } from './paths.ts';
 
 export const LIBRARY_FORMAT = PARTS_LIBRARY_FORMAT;
@@ -71,14 +71,8 @@ export function idsOf(parts: readonly Part[]): ReadonlySet<string> {
   return new Set(parts.map((p) => p.id));
 }
 
-/** An id not yet used in `taken`: base, base-2, base-3, ... */
-export function uniqueId(base: string, taken: ReadonlySet<string>): string {
-  if (!taken.has(base)) return base;
-  for (let n = 2; ; n++) {
-    const candidate = `${base}-${n}`;
-    if (!taken.has(candidate)) return candidate;
-  }
-}
+/** An id not yet used in `taken`: base, base-2, base-3, ... (the engine's freeId, shared with the import). */
+export const uniqueId = freeId;
 
 /** Merges imported parts: an id already present gets a fresh id so nothing is overwritten. */
 export function mergeParts(existing: readonly Part[], incoming: readonly Part[]): Part[] {
@@ -105,11 +99,12 @@ export function partsOfKind<K extends PartKind>(parts: readonly Part[], kind: K)
  * Every problem of a part record, by dotted path, in the engine's own sentences (field, value found,
  * allowed range): the part is checked as a one-part library and the "parts[0]." prefix removed.
  */
-export function partProblems(part: unknown): ReadonlyMap<string, { path: string; message: string }[]> {
+export function partProblems(part: unknown): ReadonlyMap<string, Problem[]> {
   const check = validatePartsLibrary({ format: PARTS_LIBRARY_FORMAT, version: PARTS_LIBRARY_VERSION, id: 'draft', name: 'draft', notes: '', parts: [part] });
   if (check.ok) return groupByPath([]);
   return groupByPath(
     check.problems.map((problem) => ({
+      ...problem,
       path: problem.path.replace(/^parts\[0\]\.?/, ''),
       message: problem.message.replaceAll('parts[0].', ''),
     })),

@@ -2,7 +2,7 @@
  * The user's part library: starts with the invented demo parts, then holds whatever the user adds,
  * edits, duplicates, deletes or imports. Kept in localStorage (browser and Electron renderer alike).
  */
-import type { Part, PartKind } from '../../shared-model/index.ts';
+import { applyImport, type ImportApplied, type Part, type PartKind } from '../../shared-model/index.ts';
 import { duplicatePart, idsOf, libraryFileText, mergeParts, partsOfKind, readLibraryText, uniqueId } from './library-data.ts';
 
 export const LIBRARY_KEY = 'wattledger.library.v1';
@@ -42,6 +42,13 @@ export class PartLibrary {
     const stored = { ...part, id: uniqueId(part.id, idsOf(this.parts)) };
     this.#set([...this.parts, stored]);
     return stored;
+  }
+
+  /** Adds imported parts at the end, all of them; ids made unique and every renamed part listed (engine applyImport). */
+  addImported(parts: readonly Part[]): ImportApplied {
+    const applied = applyImport(this.parts, parts);
+    this.#set(applied.parts);
+    return applied;
   }
 
   update(id: string, part: Part): void {

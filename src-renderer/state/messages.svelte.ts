@@ -10,6 +10,8 @@ export interface Message {
   kind: MessageKind;
   title: string;
   details: string[];
+  /** Messages with a tag replace each other (one at a time) and can be dismissed together. */
+  tag?: string;
 }
 
 export interface Question {
@@ -27,9 +29,10 @@ export class Messages {
   question = $state<Question | null>(null);
   #next = 1;
 
-  show(kind: MessageKind, title: string, details: string[] = []): number {
+  show(kind: MessageKind, title: string, details: string[] = [], tag?: string): number {
     const id = this.#next++;
-    this.list = [...this.list, { id, kind, title, details }];
+    const kept = tag === undefined ? this.list : this.list.filter((m) => m.tag !== tag);
+    this.list = [...kept, { id, kind, title, details, ...(tag === undefined ? {} : { tag }) }];
     if (kind !== 'error') setTimeout(() => this.dismiss(id), FADE_MS);
     return id;
   }
@@ -48,6 +51,11 @@ export class Messages {
 
   dismiss(id: number): void {
     this.list = this.list.filter((m) => m.id !== id);
+  }
+
+  /** Removes every message with this tag (their cause is gone). */
+  dismissTagged(tag: string): void {
+    if (this.list.some((m) => m.tag === tag)) this.list = this.list.filter((m) => m.tag !== tag);
   }
 
   /** Asks a yes/no question in the page; resolves true when the user confirms. */

@@ -8,13 +8,14 @@ import type { Design, Part } from '../../shared-model/index.ts';
 import type { FileAccess } from '../desktop/file-access.ts';
 import { suggestFileName, type Recovered } from './design-file.ts';
 import { DocumentStore, UNTITLED } from './document.svelte.ts';
+import { ImportSession } from '../import/import-session.svelte.ts';
 import { PartLibrary } from './library.svelte.ts';
 import { Messages } from './messages.svelte.ts';
 import { ResultsState } from './results.svelte.ts';
 import { ThemeState } from './theme.svelte.ts';
 import type { PartStash } from './topology-edits.ts';
 
-export type Screen = 'design' | 'library' | 'report';
+export type Screen = 'design' | 'library' | 'import' | 'bench' | 'report';
 
 export interface RecoveryOffer {
   recovered: Recovered;
@@ -30,6 +31,8 @@ export class Workspace {
   readonly doc: DocumentStore;
   readonly results: ResultsState;
   readonly library: PartLibrary;
+  /** The spreadsheet import in progress; kept while the user visits other screens. */
+  readonly partImport = new ImportSession();
   readonly messages = new Messages();
   readonly theme = new ThemeState();
   screen: Screen = $state('design');

@@ -3,6 +3,7 @@
  * computation. No state, no browser API: the worker and the tests call the same function.
  */
 import {
+  buildReport,
   checkFrequencySweepOptions,
   checkGridOptions,
   checkLoadSweepOptions,
@@ -74,6 +75,8 @@ export function runJob(request: Extract<EngineRequest, { type: 'run' }>): JobRes
         if (problems.length > 0) return refused(problems);
         return { ok: true, output: monteCarlo(design, options) };
       }
+      case 'report':
+        return { ok: true, output: buildReport(request.input) };
     }
   } catch (e) {
     // A programmer error inside the engine: report it as data so the UI can show it and stay alive.

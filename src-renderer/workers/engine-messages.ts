@@ -19,6 +19,8 @@ import type {
   OptionProblem,
   Ranking,
   RankOptions,
+  ReportInput,
+  ReportModel,
   SweepFamilies,
   SweepLandmarkOptions,
   SweepWithLandmarks,
@@ -42,6 +44,8 @@ export interface EngineJobs {
   rank: { input: { design: Design; options: Plain<RankOptions> }; output: Ranking };
   'worst-case': { input: { design: Design; options?: Plain<WorstCaseOptions> }; output: WorstCase };
   'monte-carlo': { input: { design: Design; options: Plain<MonteCarloOptions> }; output: MonteCarlo };
+  /** The review report's model (a few hundred electro-thermal evaluations). */
+  report: { input: ReportInput; output: ReportModel };
 }
 
 export type JobKind = keyof EngineJobs;

@@ -6,8 +6,9 @@
  * "well under a second"). Value: median CPU time (user + system) per fit after a 1 s warm-up; the lead
  * wires it into bench.ts. Run alone: `npx tsx test/bench/fit-figure.ts`.
  */
+import { demoDesign } from '../helpers/demo.ts';
 import { calibrate } from '../../shared-model/index.ts';
-import { demoDesign } from '../shared-model/report/demo.ts';
+
 import { benchPoints, syntheticMeasurement } from '../shared-model/fit/synthetic.ts';
 import { timeRuns } from './timing.ts';
 

@@ -7,8 +7,9 @@ import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { openThroughChooser, pasteInto } from './helpers/app-page.ts';
 import { axeSeriousViolations, type AppSession, type Theme } from './helpers/browser.ts';
-import { demoText } from './helpers/engine.ts';
+
 import { e2eSuite } from './helpers/suite.ts';
+import { demoText } from '../helpers/demo.ts';
 
 const suite = e2eSuite();
 

@@ -13,9 +13,10 @@ import type { Part } from '../../shared-model/index.ts';
 import { closeTo } from '../helpers/close-to.ts';
 import { field } from './helpers/app-page.ts';
 import { SCREENSHOT_DIR } from './helpers/browser.ts';
-import { demoDesign } from './helpers/engine.ts';
+
 import { e2eSuite } from './helpers/suite.ts';
 import { repoRoot } from './helpers/build.ts';
+import { demoDesign } from '../helpers/demo.ts';
 
 const suite = e2eSuite();
 // Two invented MOSFETs of the demo library for the control switch: the low-RDS(on) 30 V part and the

@@ -4,11 +4,12 @@
  * that cannot be read names the row and the column and leaves the design alone; a curve that breaks the
  * physics (Coss rising with VDS) gets the validator's sentence in place.
  */
+import { demoDesign } from '../helpers/demo.ts';
 import { describe, expect, it } from 'vitest';
 import type { Design } from '../../shared-model/index.ts';
 import { closeTo } from '../helpers/close-to.ts';
 import { field, readSummary } from './helpers/app-page.ts';
-import { demoDesign, expectedEvaluation } from './helpers/engine.ts';
+import { expectedEvaluation } from './helpers/engine.ts';
 import { e2eSuite } from './helpers/suite.ts';
 import type { Page } from 'playwright-core';
 

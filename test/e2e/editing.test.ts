@@ -8,9 +8,10 @@ import { validateDesign } from '../../shared-model/index.ts';
 import type { Design } from '../../shared-model/index.ts';
 import { closeTo } from '../helpers/close-to.ts';
 import { field, fieldNote, pasteInto, readOperatingPoint, typeInto, valueAtKey } from './helpers/app-page.ts';
-import { demoDesign, expectedOperatingPoint } from './helpers/engine.ts';
+import { expectedOperatingPoint } from './helpers/engine.ts';
 import { e2eSuite } from './helpers/suite.ts';
 import type { Page } from 'playwright-core';
+import { demoDesign } from '../helpers/demo.ts';
 
 const suite = e2eSuite();
 
@@ -60,7 +61,7 @@ describe('editing the design', () => {
       await expectTableOf(page, demoDesign());
     }));
 
-  it('shows the validator sentence in place for a value outside its range, and keeps the results', () =>
+  it('shows the validator sentence in place, in on-screen words, for a value outside its range, and keeps the results', () =>
     suite.run(async (app) => {
       const { page } = app;
       // Pasted, so no intermediate keystroke ("2") makes a valid design in between.
@@ -70,7 +71,11 @@ describe('editing the design', () => {
       expect(check.ok).toBe(false); // shared-model validator: a buck cannot step up (issue 2 §2)
       const expectedMessage = check.ok ? '' : check.problems.find((p) => p.path === 'spec.voutV')?.message;
       expect(expectedMessage).toBeTruthy();
-      await expect(fieldNote(page, 'spec.voutV')).resolves.toBe(expectedMessage); // the engine's sentence: field, value, allowed range
+      expect(expectedMessage).toContain('spec.vinMinV'); // the engine's sentence names the partner field by its path...
+      const note = await fieldNote(page, 'spec.voutV');
+      expect(note).toContain('Output voltage: 20 V'); // ...the screen by its label (issue 16 §2), with the value
+      expect(note).toContain('must be below “Input voltage, lowest” (10.8 V)'); // and the partner's label and value
+      expect(note).not.toContain('spec.');
       await expect(field(page, 'spec.voutV').getAttribute('aria-invalid')).resolves.toBe('true');
       await expect(page.getByTestId('stale-note').isVisible()).resolves.toBe(true);
       await expectTableOf(page, demoDesign()); // still the last valid design
@@ -79,7 +84,7 @@ describe('editing the design', () => {
       await expectTableOf(page, { ...demoDesign(), spec: { ...demoDesign().spec, voutV: 2 } });
       await app.screenshot('design-invalid');
       // The problem list moves the focus to the field.
-      await page.getByRole('button', { name: expectedMessage! }).click();
+      await page.getByRole('button', { name: note }).click();
       await expect(page.evaluate(() => document.activeElement?.getAttribute('data-path'))).resolves.toBe('spec.voutV');
     }));
 

@@ -8,9 +8,10 @@ import { describe, expect, it } from 'vitest';
 import { parseDesignText } from '../../shared-model/index.ts';
 import { closeTo } from '../helpers/close-to.ts';
 import { dropFile, field, openThroughChooser, readOperatingPoint, typeInto, valueAtKey } from './helpers/app-page.ts';
-import { demoDesign, demoText, expectedOperatingPoint } from './helpers/engine.ts';
+import { expectedOperatingPoint } from './helpers/engine.ts';
 import { e2eSuite } from './helpers/suite.ts';
 import type { Page } from 'playwright-core';
+import { demoDesign, demoText } from '../helpers/demo.ts';
 
 const suite = e2eSuite();
 

@@ -8,8 +8,9 @@ import type { Page } from 'playwright-core';
 import { validatePartsLibrary } from '../../shared-model/index.ts';
 import { closeTo } from '../helpers/close-to.ts';
 import { field, readOperatingPoint, valueAtKey } from './helpers/app-page.ts';
-import { demoDesign, expectedOperatingPoint } from './helpers/engine.ts';
+import { expectedOperatingPoint } from './helpers/engine.ts';
 import { e2eSuite } from './helpers/suite.ts';
+import { demoDesign } from '../helpers/demo.ts';
 
 const suite = e2eSuite();
 const list = (page: Page) => page.locator('nav[aria-label="Parts in the library"] li button');
@@ -79,8 +80,9 @@ describe('part library', () => {
       await page.locator('[data-path="rdsOn25Ohm"]').fill('-3m');
       await expect(page.getByRole('button', { name: 'Save changes' }).isDisabled()).resolves.toBe(true);
       const note = await page.locator(`[id="${await page.locator('[data-path="rdsOn25Ohm"]').getAttribute('aria-describedby')}"]`).textContent();
-      expect(note).toContain('rdsOn25Ohm is -0.003'); // shared-model validator sentence: field and value
-      expect(note).toContain('allowed'); // ... and the allowed range
+      expect(note).toContain('RDS(on) at 25 °C: −3 mΩ'); // the field by its on-screen label, and the value (issue 16 §2)
+      expect(note).toMatch(/must be (above|at least) .+ and at most /); // ... and the allowed range in words
+      expect(note).not.toContain('rdsOn25Ohm');
     }));
 
   it('imports the good parts of a file and reports the bad ones', () =>

@@ -6,8 +6,9 @@ import { describe, expect, it } from 'vitest';
 import { parseEngineering } from '../../shared-model/index.ts';
 import { closeTo } from '../helpers/close-to.ts';
 import { readOperatingPoint, valueAtKey } from './helpers/app-page.ts';
-import { demoDesign, expectedOperatingPoint } from './helpers/engine.ts';
+import { expectedOperatingPoint } from './helpers/engine.ts';
 import { e2eSuite } from './helpers/suite.ts';
+import { demoDesign } from '../helpers/demo.ts';
 
 const suite = e2eSuite();
 

@@ -15,8 +15,9 @@ import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { evaluate, formatPercent } from '../../shared-model/index.ts';
 import { repoRoot } from './helpers/build.ts';
-import { demoDesign } from './helpers/engine.ts';
+
 import { e2eSuite } from './helpers/suite.ts';
+import { demoDesign } from '../helpers/demo.ts';
 
 const suite = e2eSuite();
 const OUT = join(repoRoot, '.artifacts', 'report');

@@ -35,7 +35,7 @@ import type { Design, ReportModel } from '../../shared-model/index.ts';
 import { ensureReportBundle, readBuiltPage, REPO_ROOT } from '../../src-main/report/bundle.ts';
 import { findChromium, reportPdf } from '../../src-main/report/pdf.ts';
 import { singleFileReport, type PageSize } from '../../src-main/report/single-file.ts';
-import { demoDesign } from '../shared-model/report/demo.ts';
+import { demoDesign } from '../helpers/demo.ts';
 
 const OUT = join(REPO_ROOT, '.artifacts', 'report');
 const DATE = '2026-12-02';

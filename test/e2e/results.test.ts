@@ -15,8 +15,9 @@ import type { Design } from '../../shared-model/index.ts';
 import { closeTo } from '../helpers/close-to.ts';
 import { field, typeInto } from './helpers/app-page.ts';
 import { SCREENSHOT_DIR } from './helpers/browser.ts';
-import { demoDesign } from './helpers/engine.ts';
+
 import { e2eSuite } from './helpers/suite.ts';
+import { demoDesign } from '../helpers/demo.ts';
 
 const suite = e2eSuite();
 const SECTIONS = ['notices', 'ledger', 'efficiency', 'loss-curves', 'temperatures', 'operating', 'frequency', 'tolerance', 'compare'];

@@ -41,7 +41,11 @@ export interface DesignSketch {
 
 const ids = { id: 'x', name: 'x', invented: true };
 
-export function inventedMosfet(rdsOn25Ohm: number, vdsRatingV = 100, idRatingA = 100): Mosfet {
+/** The docs/methods.md §4 gate-charge check figures (Qg 12 nC, Qgs2 2.5 nC, Qgd 3 nC, Vpl 2.8 V, Rg 1.2 Ω). */
+export const SECTION_4_GATE = { qgC: 12e-9, qgs2C: 2.5e-9, qgdC: 3e-9, plateauV: 2.8, vthV: 1.6, rgInternalOhm: 1.2 } as const;
+
+/** The one invented MOSFET of the tests: round numbers, any RDS(on), optional other fields replaced. */
+export function inventedMosfet(rdsOn25Ohm: number, vdsRatingV = 100, idRatingA = 100, changes: Partial<Mosfet> = {}): Mosfet {
   return {
     kind: 'mosfet',
     ...ids,
@@ -62,6 +66,7 @@ export function inventedMosfet(rdsOn25Ohm: number, vdsRatingV = 100, idRatingA =
     bodyDiodeQrrC: 10e-9,
     tjMaxC: 150,
     thetaJcKPerW: 2,
+    ...changes,
   };
 }
 

@@ -5,14 +5,9 @@
  * layered windings, estimated Qgs2, a linear drive rail.
  */
 import fc from 'fast-check';
-import type { Design, Mosfet, ThermalPath } from '../../shared-model/index.ts';
+import type { Design, ThermalPath } from '../../shared-model/index.ts';
 import { validateDesign } from '../../shared-model/index.ts';
-import { inventedMosfet, makeDesign, type DesignSketch } from './designs.ts';
-
-/** A MOSFET record with the docs/methods.md §4 gate-charge figures (Qgs2 2.5 nC, Qgd 3 nC, Qg 12 nC, Vpl 2.8 V). */
-export function inventedFet(): Mosfet {
-  return { ...inventedMosfet(0.01), qgC: 12e-9, qgs2C: 2.5e-9, qgdC: 3e-9, plateauV: 2.8, vthV: 1.6, rgInternalOhm: 1.2 };
-}
+import { inventedMosfet, makeDesign, SECTION_4_GATE, type DesignSketch } from './designs.ts';
 
 /** The docs/methods.md §1 buck (12 V → 5 V, 3 A, 10 µH, 500 kHz), synchronous, with invented parts. */
 export const SYNC_BUCK: DesignSketch = {
@@ -38,7 +33,7 @@ export const DIODE_BOOST: DesignSketch = {
 
 export function design(sketch: DesignSketch, edit?: (d: Design) => void): Design {
   const d = makeDesign(sketch);
-  d.parts.switch = { ...inventedFet(), id: 'ledger-fet', name: 'Invented ledger-test MOSFET' };
+  d.parts.switch = inventedMosfet(0.01, 100, 100, { ...SECTION_4_GATE, id: 'ledger-fet', name: 'Invented ledger-test MOSFET' });
   if (edit) edit(d);
   return d;
 }

@@ -84,7 +84,7 @@ export function elementsOf(design: Design, conditions: Conditions, conduction: C
     dcrOhm: conduction.inductorDcrOhm,
     senseOhm: parts.senseResistor ? conduction.senseOhm : 0,
     senseAt: parts.senseResistor ? topology.senseLocation : 'none',
-    blocks: !synchronous || topology.lightLoad === 'diode-emulation',
+    blocks: !synchronous || topology.lightLoad !== 'forced-pwm',
     periodS: 1 / conditions.switchingFrequencyHz,
   };
 }

@@ -151,7 +151,7 @@ export function referenceSteadyState(
     values,
     period,
     tOn: dutyCycle * period,
-    blocksReverse: !synchronous || topology.lightLoad === 'diode-emulation',
+    blocksReverse: !synchronous || topology.lightLoad !== 'forced-pwm',
   };
   const solveAt = (vin1: number): { pieces: Piece[]; mode: 'CCM' | 'DCM' } => {
     const ccm = ccmPieces(setup, vin1);

@@ -101,6 +101,7 @@ export function renderSweep(design: Design, sweep: LoadSweep, m: Landmarks, figu
     landmarkLine('Peak efficiency', m.peak, pct),
     landmarkLine('Light-load knee', m.knee, pct),
     landmarkLine('CCM/DCM boundary', m.modeBoundary, pct),
+    ...(design.topology.lightLoad === 'pulse-skipping' ? [landmarkLine('Pulse skipping (PFM) below', m.pulseSkipping, pct)] : []),
     landmarkLine(`Thermal ceiling${tc.part ? ` (${tc.part}, ${tc.limitKind})` : ''}`, tc, (v) => fmt(v, '°C', 4)),
     landmarkLine(`Regulation limit${m.regulationLimit.cause ? ` (${m.regulationLimit.cause})` : ''}`, m.regulationLimit, (v) => `duty ${fmt(v, '', 3)}`),
   ];

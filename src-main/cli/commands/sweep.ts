@@ -48,7 +48,7 @@ export const sweepCommand: Command = {
   ],
   details: [
     'JSON: points (load A, efficiency, totalLoss W, temperatures °C by part, margins K, losses W, mode,',
-    'warnings) and landmarks (peak, knee, modeBoundary, thermalCeiling, regulationLimit), each with load',
+    'warnings) and landmarks (peak, knee, modeBoundary, pulseSkipping, thermalCeiling, regulationLimit), each with load',
     'and value when found, else found: false with a reason. Peak, knee and figures of merit use regulated, converged points',
     'only; a point past the regulation limit has regulated: false and the output it reaches (voutV). The knee is our own',
     'definition, printed with it.',

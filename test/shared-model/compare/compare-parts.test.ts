@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { compareParts, substitutePart } from '../../../shared-model/index.ts';
 import type { Design, Mosfet } from '../../../shared-model/index.ts';
 import { closeTo } from '../../helpers/close-to.ts';
-import { crossoverFets, demoDesign, evaluate, handCrossoverDesign } from '../landmarks/hand-designs.ts';
+import { crossoverFets, evaluate, handCrossoverDesign } from '../landmarks/hand-designs.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 function withSwitch(design: Design, fet: Mosfet): Design {
   const s = substitutePart(design, 'switch', fet);

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_PARTS_LIBRARY, rankParts, substitutePart, validatePartsLibrary } from '../../../shared-model/index.ts';
 import type { Part } from '../../../shared-model/index.ts';
-import { demoDesign, evaluate } from '../landmarks/hand-designs.ts';
+import { evaluate } from '../landmarks/hand-designs.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 function library(): Part[] {
   const r = validatePartsLibrary(DEMO_PARTS_LIBRARY);

@@ -1,12 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Design, Inductor, Mosfet, PartsLibrary } from '../../../shared-model/index.ts';
-import { DEMO_DESIGNS, DEMO_PARTS_LIBRARY, partsOfKind, validateDesign, validatePartsLibrary } from '../../../shared-model/index.ts';
-
-function design(id: string): Design {
-  const r = validateDesign(DEMO_DESIGNS.find((d) => d.id === id)?.json);
-  if (!r.ok) throw new Error(`${id}: ${JSON.stringify(r.problems)}`);
-  return r.design;
-}
+import { DEMO_DESIGNS, DEMO_PARTS_LIBRARY, partsOfKind, validatePartsLibrary } from '../../../shared-model/index.ts';
+import { demoDesign as design } from '../../helpers/demo.ts';
 
 function library(): PartsLibrary {
   const r = validatePartsLibrary(DEMO_PARTS_LIBRARY);

@@ -1,12 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import type { ConditionOverrides, Design } from '../../../shared-model/index.ts';
-import { checkConditionOverrides, CONDITION_RANGES, DEMO_DESIGNS, DESIGN_RANGES, validateDesign } from '../../../shared-model/index.ts';
+import type { ConditionOverrides } from '../../../shared-model/index.ts';
+import { checkConditionOverrides, CONDITION_RANGES, DESIGN_RANGES } from '../../../shared-model/index.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
-function demoDesign(id: string): Design {
-  const r = validateDesign(DEMO_DESIGNS.find((d) => d.id === id)?.json);
-  if (!r.ok) throw new Error(id);
-  return r.design;
-}
 const buck = demoDesign('synchronous-buck');
 
 describe('condition overrides take the range of the design field they stand for', () => {

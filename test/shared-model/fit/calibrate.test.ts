@@ -6,9 +6,10 @@
  */
 import { describe, expect, it } from 'vitest';
 import { calibrate, type Calibration } from '../../../shared-model/index.ts';
-import { demoDesign } from '../report/demo.ts';
+
 import { closeTo } from '../../helpers/close-to.ts';
 import { benchPoints, syntheticMeasurement } from './synthetic.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 const design = demoDesign('synchronous-buck');
 const points = benchPoints(design);

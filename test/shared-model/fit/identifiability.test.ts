@@ -8,8 +8,9 @@
  */
 import { describe, expect, it } from 'vitest';
 import { calibrate } from '../../../shared-model/index.ts';
-import { demoDesign } from '../report/demo.ts';
+
 import { benchPoints, syntheticMeasurement } from './synthetic.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 const design = demoDesign('synchronous-buck');
 

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_KNEE_THRESHOLD_POINTS, findLandmarks, sweepLoad } from '../../../shared-model/index.ts';
 import { closeTo } from '../../helpers/close-to.ts';
-import { demoDesign, evaluate } from './hand-designs.ts';
+import { evaluate } from './hand-designs.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 const DEMOS = ['synchronous-buck.json', 'diode-boost.json', 'hot-fin-buck.json'];
 

@@ -2,18 +2,10 @@
  * Test-only designs whose landmarks can be computed by hand, derived from the shipped demo synchronous
  * buck (assets/designs/synchronous-buck.json, an invented scenario). Each change is stated with the reason.
  */
-import { readFileSync } from 'node:fs';
-import { validateDesign } from '../../../shared-model/index.ts';
 import type { Design, Mosfet } from '../../../shared-model/index.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 export { evaluate } from '../../../shared-model/index.ts';
-
-export function demoDesign(file: string): Design {
-  const json: unknown = JSON.parse(readFileSync(new URL(`../../../assets/designs/${file}`, import.meta.url), 'utf8'));
-  const checked = validateDesign(json);
-  if (!checked.ok) throw new Error(`${file} is not a valid design: ${checked.problems.map((p) => p.message).join(' ')}`);
-  return checked.design;
-}
 
 /** Inductor values of the hand thermal-ceiling design. */
 export const CEILING = { dcr20Ohm: 0.02, thetaKPerW: 150, tMaxC: 125, marginK: 15, ambientC: 40 } as const;

@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { findLandmarks, sweepLoad, sweepWithLandmarks } from '../../../shared-model/index.ts';
-import { demoDesign } from './hand-designs.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 const DEMOS = ['synchronous-buck.json', 'diode-boost.json', 'hot-fin-buck.json'];
 

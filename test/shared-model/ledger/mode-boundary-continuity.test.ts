@@ -8,15 +8,10 @@
  * (operating-point/assemble.ts), the same swing as CCM at zero current, so it must not step either.
  */
 import { describe, expect, it } from 'vitest';
-import { DEMO_DESIGNS, evaluate, findLandmarks, sweepLoad, validateDesign } from '../../../shared-model/index.ts';
-import type { Design, Evaluation } from '../../../shared-model/index.ts';
+import { evaluate, findLandmarks, sweepLoad } from '../../../shared-model/index.ts';
+import type { Evaluation } from '../../../shared-model/index.ts';
 import { closeTo } from '../../helpers/close-to.ts';
-
-function demo(id: string): Design {
-  const r = validateDesign(DEMO_DESIGNS.find((d) => d.id === id)?.json);
-  if (!r.ok) throw new Error(`demo ${id} is invalid`);
-  return r.design;
-}
+import { demoDesign as demo } from '../../helpers/demo.ts';
 
 const watts = (e: Evaluation, mechanism: string) =>
   e.losses.filter((t) => t.mechanism === mechanism).reduce((sum, t) => sum + t.watts, 0);

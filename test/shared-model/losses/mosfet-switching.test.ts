@@ -8,7 +8,7 @@ import { cossAt, outputCapacitance } from '../../../shared-model/losses/output-c
 import { conduction } from '../../../shared-model/losses/conduction.ts';
 import { qgs2Of } from '../../../shared-model/losses/gate-charge.ts';
 import { closeTo } from '../../helpers/close-to.ts';
-import { inventedFet } from '../../helpers/ledger-designs.ts';
+import { inventedMosfet, SECTION_4_GATE } from '../../helpers/designs.ts';
 
 // docs/methods.md §4 check case: Vin 12 V, Ion 8.5 A, Ioff 11.5 A, fs 500 kHz, Vdrv 5 V, Rup 1.5 Ω, Rdn 0.8 Ω,
 // Rg 1.2 Ω, Vpl 2.8 V, Qgs2 2.5 nC, Qgd 3.0 nC, Qg 12 nC.
@@ -120,7 +120,7 @@ describe('conduction', () => {
 
 describe('Qgs2 estimate', () => {
   it('takes the datasheet value when given, else Qgs·(Vpl − Vth)/Vpl', () => {
-    const fet = inventedFet();
+    const fet = inventedMosfet(0.01, 100, 100, SECTION_4_GATE);
     expect(qgs2Of(fet, 5).source).toBe('datasheet');
     const noQgs2 = { ...fet, qgs2C: undefined, qgsC: 4e-9, vthV: 1.4, plateauV: 2.8 };
     const est = qgs2Of(noQgs2, 5);

@@ -6,8 +6,9 @@
  */
 import { describe, expect, it } from 'vitest';
 import { measuredBalance, readMeasurement, type MeasurementProblem } from '../../../shared-model/index.ts';
-import { demoDesign } from '../report/demo.ts';
+
 import { closeTo } from '../../helpers/close-to.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 const design = demoDesign('synchronous-buck');
 

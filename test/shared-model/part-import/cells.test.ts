@@ -25,6 +25,8 @@ describe('readCell', () => {
 
   it('lets a cell with its own prefix or unit override the column unit', () => {
     expect(value('rdsOn25Ohm', '8 mΩ', 'mOhm')).toBe(0.008); // the cell's own unit wins
+    expect(value('rdsOn25Ohm', '6.5 mΩ', 'Ohm')).toBe(0.0065); // exactly the double of "0.0065" (Node: 6.5 * 1e-3 is 0.006500000000000001); SI Brochure Table 7
+    expect(value('capacitanceF', '4.7 µF', '')).toBe(4.7e-6); // the decimal exponent moved, not a multiplication (SI Brochure Table 7)
     expect(value('rdsOn25Ohm', '8m')).toBeCloseTo(8e-3, 18); // engineering notation (SI prefix m)
     expect(value('inductanceH', '4u7')).toBeCloseTo(4.7e-6, 20); // IEC 60062 letter as decimal point
     expect(value('rdsOn25Ohm', '8')).toBe(8); // no unit anywhere: SI

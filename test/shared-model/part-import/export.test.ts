@@ -44,6 +44,15 @@ describe('partsToCsv', () => {
     expect(reimport(csv).good).toEqual([base, ...odd]); // ECMA-262 Number::toString is the shortest round-trip decimal; a decimal shift keeps it
   });
 
+  it('carries a list no cell can spell (a digitised Coss curve) as JSON text, and reads it back', () => {
+    const base = demo.find((p) => p.kind === 'mosfet') as Extract<Part, { kind: 'mosfet' }>;
+    const points = [{ vdsV: 1, cossF: 900e-12 }, { vdsV: 10, cossF: 300e-12 }, { vdsV: 30, cossF: 150e-12 }];
+    const curved = { ...base, id: 'curved', outputCapacitance: { kind: 'table', points } } as unknown as Part;
+    const csv = partsToCsv([curved]);
+    expect(readCsv(csv).rows[1]?.cells).toContain(JSON.stringify(points));
+    expect(reimport(csv).good).toEqual([curved]);
+  });
+
   it('writes an empty column set for nothing but the identity columns', () => {
     expect(partsToCsv([])).toBe('Kind,Identifier,Name\r\n');
   });

@@ -19,7 +19,8 @@ import {
   worstCase,
 } from '../../../shared-model/index.ts';
 import type { ReportModel } from '../../../shared-model/index.ts';
-import { demoDesign, designText } from './demo.ts';
+import { designText } from './demo.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 const SLOW = 600_000;
 

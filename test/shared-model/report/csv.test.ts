@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { csvText, evaluate, ledgerCsv, sweepCsv, sweepLoad } from '../../../shared-model/index.ts';
-import { demoDesign } from './demo.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 /** RFC 4180 reader: CRLF records, quoted fields with doubled quotes. */
 function readCsv(text: string): string[][] {

@@ -5,32 +5,10 @@
  * frequencies and thermal runaway.
  */
 import { describe, expect, it } from 'vitest';
-import {
-  compareParts,
-  DEMO_DESIGNS,
-  DEMO_PARTS_LIBRARY,
-  evaluate,
-  evaluatorFor,
-  figuresOfMerit,
-  ledgerEvaluator,
-  monteCarlo,
-  rankParts,
-  sweepFamilies,
-  sweepFrequency,
-  sweepGrid,
-  sweepLoad,
-  validateDesign,
-  validatePartsLibrary,
-  worstCase,
-} from '../../../shared-model/index.ts';
+import { compareParts, DEMO_DESIGNS, DEMO_PARTS_LIBRARY, evaluate, evaluatorFor, figuresOfMerit, ledgerEvaluator, monteCarlo, rankParts, sweepFamilies, sweepFrequency, sweepGrid, sweepLoad, validatePartsLibrary, worstCase } from '../../../shared-model/index.ts';
 import type { Design, PointEvaluator } from '../../../shared-model/index.ts';
 import { SYNC_BUCK, allDirect, design as sketch, valid } from '../../helpers/ledger-designs.ts';
-
-function demo(id: string): Design {
-  const r = validateDesign(DEMO_DESIGNS.find((d) => d.id === id)?.json);
-  if (!r.ok) throw new Error(`demo ${id} is invalid`);
-  return r.design;
-}
+import { demoDesign as demo } from '../../helpers/demo.ts';
 
 /** The reference: a fresh `evaluate` (full set-up) for every point, as the sweeps did before the reuse. */
 const fromScratch: PointEvaluator = (d, c) => evaluate(d, c);

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { sweepFamilies, sweepFrequency, sweepGrid } from '../../../shared-model/index.ts';
 import { closeTo } from '../../helpers/close-to.ts';
-import { demoDesign, evaluate, handCrossoverDesign } from '../landmarks/hand-designs.ts';
+import { evaluate, handCrossoverDesign } from '../landmarks/hand-designs.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 const SWITCHING = ['turn-on overlap', 'turn-off overlap', 'output capacitance', 'gate drive', 'dead-time diode', 'reverse recovery', 'junction capacitance'];
 

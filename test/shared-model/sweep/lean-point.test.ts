@@ -26,14 +26,9 @@ import { dutyLimitOf, solveVoltSecond } from '../../../shared-model/operating-po
 import { circuitOf } from '../../../shared-model/operating-point/circuit.ts';
 import { conductionParameters, nominalConditions, uniformTemps } from '../../../shared-model/operating-point/conditions.ts';
 import { DIODE_BOOST, SYNC_BUCK, allDirect, arbitraryDesign, design as sketch, valid } from '../../helpers/ledger-designs.ts';
+import { demoDesign as demo } from '../../helpers/demo.ts';
 
 const SEED = 42;
-
-function demo(id: string): Design {
-  const r = validateDesign(DEMO_DESIGNS.find((d) => d.id === id)?.json);
-  if (!r.ok) throw new Error(`demo ${id} is invalid`);
-  return r.design;
-}
 
 /** The independent side: a full `evaluate` from scratch for every point (no reused set-up, no lean path). */
 const fullFromScratch: PointEvaluator = (d, c) => evaluate(d, c);

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { axisValues, checkLoadSweepOptions, sweepLoad } from '../../../shared-model/index.ts';
 import { closeTo } from '../../helpers/close-to.ts';
-import { demoDesign, evaluate } from '../landmarks/hand-designs.ts';
+import { evaluate } from '../landmarks/hand-designs.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 describe('axisValues', () => {
   it('spaces points evenly on a linear or a logarithmic scale, ends exact', () => {

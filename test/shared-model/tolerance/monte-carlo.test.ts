@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { createRandom, drawVariation, monteCarlo, resolveTolerances } from '../../../shared-model/index.ts';
 import { closeTo } from '../../helpers/close-to.ts';
-import { CEILING, demoDesign, handCeilingDesign } from '../landmarks/hand-designs.ts';
+import { CEILING, handCeilingDesign } from '../landmarks/hand-designs.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 const design = demoDesign('synchronous-buck.json');
 const zero = { rdsOnFraction: 0, dcrFraction: 0, esrFraction: 0, inductanceFraction: 0, frequencyFraction: 0 };

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { checkTolerances, cornerVariations, resolveTolerances, worstCase } from '../../../shared-model/index.ts';
 import { closeTo } from '../../helpers/close-to.ts';
-import { demoDesign, evaluate, handCeilingDesign } from '../landmarks/hand-designs.ts';
+import { evaluate, handCeilingDesign } from '../landmarks/hand-designs.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 const ZERO = { vinV: { min: 14.4, max: 14.4 }, ambientC: { min: 40, max: 40 }, rdsOnFraction: 0, dcrFraction: 0, esrFraction: 0, inductanceFraction: 0, frequencyFraction: 0 };
 

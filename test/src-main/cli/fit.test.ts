@@ -4,12 +4,13 @@
  * parameter the design does not offer. The measurement is synthetic: the demo buck with its switching
  * charge ×1.3, evaluated by the engine, plus seeded noise — so the truth is known.
  */
+import { demoDesign, demoText } from '../../helpers/demo.ts';
 import { describe, expect, it } from 'vitest';
 import { EXIT } from '../../../src-main/cli/io.ts';
 import { runCli } from '../../../src-main/cli/main.ts';
-import { demoDesign } from '../../shared-model/report/demo.ts';
+
 import { benchPoints, syntheticMeasurement } from '../../shared-model/fit/synthetic.ts';
-import { demoText, memoryIo } from './memory-io.ts';
+import { memoryIo } from './memory-io.ts';
 
 const design = demoDesign('synchronous-buck');
 const measured = syntheticMeasurement(design, { truth: { switchCharge: 1.3 }, points: benchPoints(design, 16), seed: 3, lossNoiseW: 0.005 });

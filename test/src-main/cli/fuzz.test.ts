@@ -11,7 +11,7 @@ import os from 'node:os';
 import nodePath from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_DESIGNS, serializeDesign, validateDesign } from '../../../shared-model/index.ts';
-import type { CliIo } from '../../../src-main/cli/io.ts';
+import { memoryIo } from './memory-io.ts';
 import { processIo } from '../../../src-main/cli/io.ts';
 import { runCli } from '../../../src-main/cli/main.ts';
 import { mulberry32 } from '../../reference/prng.ts';
@@ -28,8 +28,10 @@ afterAll(async () => {
   await nodeFs.rm(folder, { recursive: true, force: true });
 });
 
-function capture(cwd: string): CliIo & { stdout: string; stderr: string } {
-  const io = { stdout: '', stderr: '', out: (t: string) => void (io.stdout += `${t}\n`), err: (t: string) => void (io.stderr += `${t}\n`), readText: processIo(cwd).readText };
+/** The in-memory terminal reading the real files of `cwd`. */
+function capture(cwd: string): ReturnType<typeof memoryIo> {
+  const io = memoryIo();
+  io.readText = processIo(cwd).readText;
   return io;
 }
 

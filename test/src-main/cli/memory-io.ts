@@ -3,7 +3,6 @@
  * out/err end each text with one line break exactly as processIo (src-main/cli/io.ts) does.
  */
 import nodePath from 'node:path';
-import { DEMO_DESIGNS } from '../../../shared-model/index.ts';
 import type { CliIo } from '../../../src-main/cli/io.ts';
 
 const line = (text: string): string => (text.endsWith('\n') ? text : `${text}\n`);
@@ -22,4 +21,3 @@ export function memoryIo(files: Record<string, string> = {}): CliIo & { stdout: 
   return io;
 }
 
-export const demoText = (id: string): string => JSON.stringify(DEMO_DESIGNS.find((d) => d.id === id)?.json);

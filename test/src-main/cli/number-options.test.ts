@@ -6,7 +6,8 @@ import { COMMANDS } from '../../../src-main/cli/commands/index.ts';
 import { EXIT } from '../../../src-main/cli/io.ts';
 import { runCli } from '../../../src-main/cli/main.ts';
 import { optionRangeText } from '../../../src-main/cli/number-option.ts';
-import { demoText, memoryIo } from './memory-io.ts';
+import { memoryIo } from './memory-io.ts';
+import { demoText } from '../../helpers/demo.ts';
 
 /** Every numeric option of every registered command (a new command or option is covered without an edit). */
 const NUMBER_OPTIONS: [string, Command, NumberFlag][] = COMMANDS.flatMap((c) =>

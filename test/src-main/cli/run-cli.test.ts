@@ -4,8 +4,8 @@ import { COMMANDS } from '../../../src-main/cli/commands/index.ts';
 import { EXIT } from '../../../src-main/cli/io.ts';
 import { runCli } from '../../../src-main/cli/main.ts';
 import versionZero from '../../shared-model/design/fixtures/synchronous-buck.v0.json';
-import { demoText, memoryIo } from './memory-io.ts';
-
+import { memoryIo } from './memory-io.ts';
+import { demoText } from '../../helpers/demo.ts';
 
 describe('runCli dispatches through the command registry', () => {
   it('lists every registered command in the usage text', async () => {

@@ -3,8 +3,9 @@ import { DEMO_DESIGNS, findLandmarks, sweepLoad, validateDesign } from '../../..
 import type { Design } from '../../../shared-model/index.ts';
 import { EXIT } from '../../../src-main/cli/io.ts';
 import { runCli } from '../../../src-main/cli/main.ts';
-import { demoText, memoryIo } from './memory-io.ts';
+import { memoryIo } from './memory-io.ts';
 import { demoPath, wattledger } from './spawn.ts';
+import { demoText } from '../../helpers/demo.ts';
 
 function design(id: string): Design {
   const r = validateDesign(DEMO_DESIGNS.find((d) => d.id === id)?.json);

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { EXIT } from '../../../src-main/cli/io.ts';
 import { runCli } from '../../../src-main/cli/main.ts';
-import { demoText, memoryIo } from './memory-io.ts';
+import { memoryIo } from './memory-io.ts';
+import { demoText } from '../../helpers/demo.ts';
 
 describe('wattledger tolerance', () => {
   it('reproduces the Monte Carlo exactly for the same seed and shows the seed', async () => {

@@ -280,3 +280,17 @@ describe('parts library files', () => {
     expect(deps.errors).toHaveLength(1);
   });
 });
+
+describe('openSpreadsheet', () => {
+  it('reads a CSV chosen in the dialog without granting it for writing or listing it as recent', async () => {
+    nextOpenPath = nodePath.join(folder, 'approved.csv');
+    await nodeFs.writeFile(nextOpenPath, 'Part No.,Rds(on) (mOhm)\nINV-1,8\n');
+    const handlers = createHandlers(deps);
+    const opened = await handlers.invoke.openSpreadsheet('w');
+    expect(deps.chooseFileToOpen).toHaveBeenCalledWith('w', [{ name: 'Spreadsheet as CSV or tab-separated text', extensions: ['csv', 'tsv', 'txt'] }]);
+    expect(opened).toEqual({ path: nextOpenPath, name: 'approved.csv', text: 'Part No.,Rds(on) (mOhm)\nINV-1,8\n' });
+    expect(deps.grants.has(nextOpenPath)).toBe(false);
+    expect(await handlers.invoke.listRecent()).toEqual([]);
+    expect(await handlers.invoke.listRecentLibraries()).toEqual([]);
+  });
+});

@@ -4,7 +4,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { runCli } from '../../../src-main/cli/main.ts';
-import { demoText, memoryIo } from '../cli/memory-io.ts';
+import { memoryIo } from '../cli/memory-io.ts';
+import { demoText } from '../../helpers/demo.ts';
 
 describe('wattledger report, usage', () => {
   it('asks for the output file when -o is missing', async () => {

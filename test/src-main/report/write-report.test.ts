@@ -6,7 +6,8 @@ import { describe, expect, it } from 'vitest';
 import { buildReport, ledgerCsv, sweepCsv } from '../../../shared-model/index.ts';
 import type { ReportWriterDeps } from '../../../src-main/report/write-report.ts';
 import { reportPaths, writeReportFiles } from '../../../src-main/report/write-report.ts';
-import { demoDesign, designText } from '../../shared-model/report/demo.ts';
+import { designText } from '../../shared-model/report/demo.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 describe('reportPaths', () => {
   it('puts the PDF and the CSV files beside the HTML with the same stem', () => {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { compareParts } from '../../../shared-model/index.ts';
 import { candidatesFor, compareRows, crossoverMarkers, winnerAtLoad } from '../../../src-renderer/compare/compare-data.ts';
 import { closeTo } from '../../helpers/close-to.ts';
-import { demoDesign, demoParts } from '../results/demo.ts';
+import { demoDesign, demoParts } from '../../helpers/demo.ts';
 
 describe('comparison tables and curves', () => {
   const design = demoDesign();

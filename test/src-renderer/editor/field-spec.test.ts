@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { partSchema } from '../../../shared-model/index.ts';
 import { switchVariant, type UnionSpec } from '../../../src-renderer/editor/field-spec.ts';
 import { PART_FIELDS } from '../../../src-renderer/editor/part-fields.ts';
-import { demoParts } from '../fixtures.ts';
+import { demoParts } from '../../helpers/demo.ts';
 
 const unionsOf = (kind: keyof typeof PART_FIELDS) => PART_FIELDS[kind].values.filter((f): f is UnionSpec => f.type === 'union');
 

@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../../shared-model/index.ts';
 import { ledgerRows, ledgerTotals, sortLedger } from '../../../src-renderer/results/ledger-rows.ts';
 import { closeTo } from '../../helpers/close-to.ts';
-import { demoDesign, labelOf } from './demo.ts';
+import { labelOf } from './demo.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 describe('ledger rows of the demo design at rated load', () => {
   const evaluation = evaluate(demoDesign());

@@ -3,7 +3,8 @@ import { findLandmarks, sweepLoad } from '../../../shared-model/index.ts';
 import { efficiencyCurves, lossStack } from '../../../src-renderer/results/load-curves.ts';
 import { temperatureCurves } from '../../../src-renderer/results/temperature-curves.ts';
 import { closeTo } from '../../helpers/close-to.ts';
-import { demoDesign, labelOf } from './demo.ts';
+import { labelOf } from './demo.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 describe('load-curve chart data of the demo design', () => {
   const design = demoDesign();

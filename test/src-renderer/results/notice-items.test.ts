@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../../shared-model/index.ts';
 import { noticesOf, surfaceRows } from '../../../src-renderer/results/notice-items.ts';
-import { demoDesign, labelOf } from './demo.ts';
+import { labelOf } from './demo.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 describe('warnings and hazards in one list', () => {
   const design = demoDesign();

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../../shared-model/index.ts';
 import { operatingPointRows, ratingShare, ratingState } from '../../../src-renderer/results/operating-point-rows.ts';
 import { closeTo } from '../../helpers/close-to.ts';
-import { demoDesign } from '../fixtures.ts';
+import { demoDesign } from '../../helpers/demo.ts';
 
 function valueAt(record: unknown, key: string): unknown {
   return key.split('.').reduce<unknown>((node, part) => (node as Record<string, unknown>)[part], record);

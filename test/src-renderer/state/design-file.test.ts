@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { DESIGN_VERSION } from '../../../shared-model/index.ts';
 import { designText, readDesignText, readRecoveryText, recoveryText, suggestFileName } from '../../../src-renderer/state/design-file.ts';
-import { demoDesign, demoText } from '../fixtures.ts';
+import { demoDesign, demoText } from '../../helpers/demo.ts';
 
 describe('reading design files', () => {
   it('accepts the shipped demo unchanged', () => {

@@ -7,7 +7,7 @@ import type { OpenedFile, SaveOutcome, SaveRequest } from '../../../shared-model
 import type { FileAccess } from '../../../src-renderer/desktop/file-access.ts';
 import { saveDesign } from '../../../src-renderer/state/file-actions.ts';
 import { Workspace } from '../../../src-renderer/state/workspace.svelte.ts';
-import { demoDesign, demoParts } from '../fixtures.ts';
+import { demoDesign, demoParts } from '../../helpers/demo.ts';
 
 /** A desktop adapter whose saves finish only when the test says so, newest first if it could. */
 function slowFiles(): FileAccess & { requests: SaveRequest[]; finish(index: number, outcome?: SaveOutcome): void; inFlight: number; maxInFlight: number } {
@@ -18,6 +18,7 @@ function slowFiles(): FileAccess & { requests: SaveRequest[]; finish(index: numb
     inFlight: 0,
     maxInFlight: 0,
     open: async (): Promise<OpenedFile | null> => null,
+    openSpreadsheet: async (): Promise<OpenedFile | null> => null,
     save(request: SaveRequest): Promise<SaveOutcome> {
       files.requests.push(request);
       files.inFlight += 1;

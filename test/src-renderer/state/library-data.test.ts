@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { validatePartsLibrary } from '../../../shared-model/index.ts';
 import { duplicatePart, libraryFileText, mergeParts, readLibraryText, uniqueId } from '../../../src-renderer/state/library-data.ts';
-import { demoParts } from '../fixtures.ts';
+import { demoParts } from '../../helpers/demo.ts';
 
 describe('part library data', () => {
   it('exports a document the engine accepts as a parts library', () => {

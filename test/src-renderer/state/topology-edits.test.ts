@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { validateDesign } from '../../../shared-model/index.ts';
 import { stashRemoved, withRectifier, withSenseLocation } from '../../../src-renderer/state/topology-edits.ts';
-import { demoDesign, demoParts } from '../fixtures.ts';
+import { demoDesign, demoParts } from '../../helpers/demo.ts';
 
 describe('edits that keep the document whole', () => {
   it('switching to a diode rectifier puts a diode in and keeps the MOSFET for switching back', () => {

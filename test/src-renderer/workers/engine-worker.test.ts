@@ -6,6 +6,7 @@ import type { JobResult } from '../../../src-renderer/workers/engine-jobs.ts';
 import { runJob } from '../../../src-renderer/workers/engine-jobs.ts';
 import type { EngineRequest, EngineResponse } from '../../../src-renderer/workers/engine-messages.ts';
 import type { Design } from '../../../shared-model/index.ts';
+import { demoDesign, demoText } from '../../helpers/demo.ts';
 
 type Run = Extract<EngineRequest, { type: 'run' }>;
 
@@ -79,6 +80,13 @@ describe('engine worker protocol', () => {
     const broken = { name: 'no spec' } as unknown as Design;
     const result = runJob({ type: 'run', id: 1, lane: 'f', kind: 'figures', input: { design: broken } });
     expect(result.ok).toBe(false); // team brief: errors travel as data, the worker stays alive
+  });
+
+  it('builds the report through the same protocol, and a failure comes back as data naming the job', () => {
+    const built = runJob({ type: 'run', id: 1, lane: 'report', kind: 'report', input: { design: demoDesign(), documentText: demoText(), date: '2026-01-02', appVersion: '0.0.0' } });
+    expect(built.ok && 'title' in built.output ? built.output.title.date : null).toBe('2026-01-02'); // the date is the caller's (report/build.ts: the engine reads no clock)
+    const broken = runJob({ type: 'run', id: 2, lane: 'report', kind: 'report', input: { design: { name: 'no spec' } as unknown as Design, documentText: '', date: '2026-01-02', appVersion: '0.0.0' } });
+    expect(broken.ok ? '' : broken.error.message).toMatch(/report job/); // team brief: errors travel as data, the worker stays alive
   });
 
   it('settles a cancelled request as superseded', async () => {
