@@ -8,6 +8,7 @@
  *   rank-10k-parts-s                                                      rank-figure.ts
  *   cli-evaluate-ms                                                       cli-figure.ts
  *   time-domain-ratio                                                     time-domain-figure.ts
+ *   fit-30-points-4-params-ms (issue 12)                                  fit-figure.ts
  *   keystroke-all-charts-ms, keystroke-one-chart-ms                       keystroke-browser.ts (child)
  *
  * Options: --quick (fewer runs; rank times 1 000 candidates and scales), --only a,b (named figures),
@@ -19,6 +20,7 @@
 import { spawnSync } from 'node:child_process';
 import { cliFigure } from './cli-figure.ts';
 import { allocationFigure, monteCarloFigure, pointFigures, sweepFigures, sweepTimeMs } from './engine-figures.ts';
+import { fitFigure } from './fit-figure.ts';
 import { lineOf, machineFacts, writeFigures, type Figure } from './figures.ts';
 import { rankFigure } from './rank-figure.ts';
 import { YOUNG_CHILD_FLAG } from './sweep-budget.ts';
@@ -50,6 +52,15 @@ if (wanted('alloc-per-point-kb')) add(await allocationFigure(quick));
 if (wanted('cli-evaluate-ms')) add(cliFigure(quick));
 if (wanted('time-domain-ratio')) add(timeDomainFigure(quick));
 if (wanted('rank-10k-parts-s')) add(rankFigure(quick));
+if (wanted('fit-30-points-4-params-ms')) {
+  const f = await fitFigure(quick ? 5 : 15);
+  add({
+    ...f,
+    better: 'lower',
+    met: f.goal === null ? null : f.value <= f.goal,
+    what: 'one calibration of the demo buck against 30 synthetic measured points with 4 free parameters (shared-model/fit), CPU time',
+  });
+}
 if (!process.argv.includes('--no-browser') && wanted('keystroke-all-charts-ms', 'keystroke-one-chart-ms')) {
   const child = spawnSync(process.execPath, ['--import', 'tsx', 'test/bench/keystroke-browser.ts', ...(quick ? ['--quick'] : [])], {
     encoding: 'utf8',

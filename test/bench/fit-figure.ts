@@ -46,7 +46,7 @@ export async function fitFigure(runs = 15): Promise<FitFigure> {
   return { name: 'fit-30-points-4-params-ms', value, unit: 'ms', goal: 1000, min: Math.min(...cpuMs), median: value, runs };
 }
 
-if (import.meta.url === `file://${process.argv[1]}`) {
+if (import.meta.url === `file://${process.argv[1]}` && import.meta.url.endsWith('/fit-figure.ts')) {
   const f = await fitFigure();
   console.log(JSON.stringify(f));
 }
