@@ -213,6 +213,10 @@ export { sizeDesign, sizeFromCorners } from './sizing/size-design.ts';
 export type { HandInput, HandSizing } from './sizing/hand-method.ts';
 export { handSizing } from './sizing/hand-method.ts';
 
+// --- design checks: the chosen parts and the targets against the sizing ---
+export type * from './design-checks/types.ts';
+export { reviewDesign } from './design-checks/review.ts';
+
 // --- bench measurements and calibration ---
 export type { CalibrationRecord, MeasuredPoint, MeasuredTemperatures, Measurement } from './measurement/schema.ts';
 export { calibrationSchema, measuredPointSchema, measurementSchema } from './measurement/schema.ts';

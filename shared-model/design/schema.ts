@@ -29,9 +29,9 @@ export const specificationSchema = z.object({
   /** Largest duty cycle the controller can command (0.05 ≤ maxDuty < 1). */
   maxDuty: q('maxDuty'),
   /**
-   * Optional targets. Only `efficiencyAtRated` is read today: the report's summary says whether the rated
-   * point meets it and the Monte Carlo counts the samples that do. The two ripple targets are stored but
-   * not yet checked against any result (the sizing checks, issue 11, will).
+   * Optional targets. The report's summary says whether the rated point meets `efficiencyAtRated` and the
+   * Monte Carlo counts the samples that do; the design checks (design-checks/, `reviewDesign`) hold all
+   * three against the solved corners, and the sizing (sizing/) uses the two ripple targets.
    */
   targets: z
     .object({
