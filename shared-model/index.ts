@@ -202,6 +202,13 @@ export {
   monteCarlo,
 } from './tolerance/monte-carlo.ts';
 
+// --- interleaved phases (issue 13 §1) ---
+export type * from './interleave/types.ts';
+export type { PhaseOptions } from './interleave/evaluate-phases.ts';
+export { evaluatePhases } from './interleave/evaluate-phases.ts';
+export { delayWaveform, interleavedSum, sumWaveforms } from './interleave/phase-shift.ts';
+export { phaseCount, phaseDesign, phaseLoads } from './interleave/phase-design.ts';
+
 // --- sizing from the specification ---
 export type * from './sizing/types.ts';
 export type { SolvedCorner } from './sizing/corners.ts';
