@@ -15,8 +15,7 @@ export type { Severity, Warning, WarningCode } from './warnings.ts';
 export * from './design/parts.ts';
 export * from './design/schema.ts';
 export type { QuantityName, QuantityRange } from './design/numbers.ts';
-export { RANGES as DESIGN_RANGES } from './design/numbers.ts';
-export { unitOfKey, unitOfPath } from './design/key-units.ts';
+export { unitOfPath } from './design/key-units.ts';
 export type { DesignNotice, Problem } from './design/problems.ts';
 export { describeValue } from './design/problems.ts';
 export type { NumberRange } from './design/number-range.ts';
@@ -27,10 +26,8 @@ export { checkConditionOverrides, CONDITION_RANGES } from './design/overrides.ts
 export type { DesignValidation } from './design/validate.ts';
 export { validateDesign } from './design/validate.ts';
 export type { MigrationResult } from './design/migrate.ts';
-export { migrateDesign } from './design/migrate.ts';
 export { parseDesignText, serializeDesign } from './design/document-text.ts';
 export type { JsonSyntaxError } from './design/json-position.ts';
-export { findJsonSyntaxError } from './design/json-position.ts';
 export { freeId, idFromName } from './design/ids.ts';
 export type { PartsLibrary, PartsLibraryValidation } from './design/parts-library.ts';
 export {
@@ -41,7 +38,6 @@ export {
   validatePartsLibrary,
 } from './design/parts-library.ts';
 export type { LibraryMigration } from './design/parts-library-migrate.ts';
-export { migratePartsLibrary } from './design/parts-library-migrate.ts';
 export { parsePartsLibraryText, serializePartsLibrary } from './design/parts-library-text.ts';
 export { DESIGN_SCHEMA_FILE, designJsonSchema, PARTS_SCHEMA_FILE, partsLibraryJsonSchema } from './design/json-schema.ts';
 export type { DemoDesign } from './design/demos.ts';
@@ -49,25 +45,23 @@ export { DEMO_DESIGNS, DEMO_PARTS_LIBRARY } from './design/demos.ts';
 
 // --- library links (a design's parts against their library entries) ---
 export type { FieldDifference, LinkState, PartLink } from './library-links/link-status.ts';
-export { linkStatus, partDifferences, partOfRole } from './library-links/link-status.ts';
+export { linkStatus } from './library-links/link-status.ts';
 export { takeLibraryPart, unlinkPart, updateFromLibrary } from './library-links/update-link.ts';
 
 // --- part import and export (spreadsheets) ---
 export type { FieldType, PartField } from './part-import/fields.ts';
 export { fieldsOfKind, PART_FIELDS, partField } from './part-import/fields.ts';
-export { FIELD_WORDS, KIND_WORDS } from './part-import/field-labels.ts';
+export { KIND_WORDS } from './part-import/field-labels.ts';
 export type { HeaderParts } from './part-import/header-unit.ts';
-export { headerReadings, normaliseHeader } from './part-import/header-unit.ts';
 export type { CellRead } from './part-import/cells.ts';
-export { readCell, unitExponent } from './part-import/cells.ts';
 export type { ColumnMapping, MappingProblem, PartMapping } from './part-import/mapping.ts';
 export { checkMapping, mappingDocument, PART_MAPPING_FORMAT, PART_MAPPING_VERSION, partMappingSchema } from './part-import/mapping.ts';
-export { guessColumn, guessMapping, reuseMapping } from './part-import/guess.ts';
+export { guessMapping, reuseMapping } from './part-import/guess.ts';
 export type { ImportPreview, PreviewRow, RowProblem } from './part-import/preview.ts';
 export { previewImport } from './part-import/preview.ts';
 export type { ImportApplied } from './part-import/apply.ts';
 export { applyImport } from './part-import/apply.ts';
-export { partsToCsv, shiftedText } from './part-import/export.ts';
+export { partsToCsv } from './part-import/export.ts';
 
 // --- operating point ---
 export type * from './operating-point/types.ts';
@@ -172,32 +166,16 @@ export { DEFAULT_CURRENT_DERATING, ratingShortfalls, stressOf } from './compare/
 export type { RankCriterion, RankedPart, RankOptions, Ranking, RejectedPart } from './compare/rank-parts.ts';
 export { RANK_CRITERIA, rankParts } from './compare/rank-parts.ts';
 export type { RandomSource } from './tolerance/prng.ts';
-export { createRandom, isValidSeed, MT19937_DEFAULT_SEED } from './tolerance/prng.ts';
 export type { SampleHistogram, SampleSummary } from './tolerance/statistics.ts';
-export {
-  fractionWhere,
-  sampleHistogram,
-  sampleMean,
-  sampleQuantile,
-  sampleStandardDeviation,
-  summarizeSamples,
-} from './tolerance/statistics.ts';
 export type { ResolvedTolerances, SpreadKey, ToleranceRange, Tolerances, Variation } from './tolerance/variation.ts';
-export {
-  checkTolerances,
-  DEFAULT_AMBIENT_SPREAD_K,
-  DEFAULT_SPREADS,
-  describeVariation,
-  resolveTolerances,
-} from './tolerance/variation.ts';
+export { checkTolerances, DEFAULT_AMBIENT_SPREAD_K, DEFAULT_SPREADS, describeVariation } from './tolerance/variation.ts';
 export type { CornerTemperature, ToleranceCorner, WorstCase, WorstCaseOptions } from './tolerance/worst-case.ts';
-export { cornerVariations, worstCase } from './tolerance/worst-case.ts';
+export { worstCase } from './tolerance/worst-case.ts';
 export type { MonteCarlo, MonteCarloDistribution, MonteCarloOptions, PartDistribution } from './tolerance/monte-carlo.ts';
 export {
   checkMonteCarloOptions,
   DEFAULT_MONTE_CARLO_SAMPLES,
   DEFAULT_MONTE_CARLO_SEED,
-  drawVariation,
   MAX_MONTE_CARLO_SAMPLES,
   monteCarlo,
 } from './tolerance/monte-carlo.ts';
@@ -235,12 +213,10 @@ export type { MeasuredBalance } from './measurement/loss.ts';
 export { measuredBalance } from './measurement/loss.ts';
 export { measurementHash, measurementText } from './measurement/hash.ts';
 export type { LeastSquaresOptions, LeastSquaresProblem, LeastSquaresResult, StopReason } from './fit/least-squares.ts';
-export { leastSquares } from './fit/least-squares.ts';
 export type { IdentifiabilityIssue, ParameterStatistics } from './fit/intervals.ts';
-export { CORRELATION_LIMIT, parameterStatistics } from './fit/intervals.ts';
-export { studentTCdf, studentTQuantile } from './fit/student-t.ts';
+export { CORRELATION_LIMIT } from './fit/intervals.ts';
 export type { FitParameter, FitParameterName } from './fit/parameters.ts';
-export { applyParameters, defaultFitParameters, fitParameters, SCALE_BOUNDS } from './fit/parameters.ts';
+export { defaultFitParameters, fitParameters, SCALE_BOUNDS } from './fit/parameters.ts';
 export type * from './fit/types.ts';
 export type { CalibrationOptions, CalibrationOutcome } from './fit/calibrate.ts';
 export { calibrate } from './fit/calibrate.ts';
@@ -254,16 +230,15 @@ export { calibrationSection } from './fit/report-section.ts';
 export type * from './report/types.ts';
 export { REPORT_FORMAT, REPORT_VERSION } from './report/types.ts';
 export type { ReportInput } from './report/build.ts';
-export { buildReport, titleBlock } from './report/build.ts';
+export { buildReport } from './report/build.ts';
 export type { MethodSelection } from './report/methods.ts';
-export { METHOD_CATALOGUE } from './report/methods.ts';
-export { REPORT_CAUTIONS, SHORT_CAUTION } from './report/cautions.ts';
+export { SHORT_CAUTION } from './report/cautions.ts';
 export { ledgerCsv, sweepCsv } from './report/csv.ts';
 export type { CsvCell } from './csv/write.ts';
-export { csvLines, csvNumber, csvText } from './csv/write.ts';
+export { csvLines } from './csv/write.ts';
 export type { CsvReadProblem, CsvRow, CsvTable } from './csv/read.ts';
 export { readCsv } from './csv/read.ts';
-export { sha256, sha256Hex, utf8Bytes } from './report/sha256.ts';
+export { sha256 } from './report/sha256.ts';
 export { CHECK_LABELS, CONTACT_LABELS, describePath, ROLE_LABELS, roleLabel } from './report/labels.ts';
 export {
   balanceDecimals,
@@ -271,7 +246,6 @@ export {
   formatCelsius,
   formatDuty,
   formatFigurePercent,
-  formatFixed,
   formatHertz,
   formatHours,
   formatKelvin,

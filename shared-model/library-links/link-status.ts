@@ -10,6 +10,7 @@
 import type { Part } from '../design/parts.ts';
 import type { PartsLibrary } from '../design/parts-library.ts';
 import type { Design, PartSource, Role } from '../design/schema.ts';
+import { partInRole } from '../compare/substitute-part.ts';
 import { PART_FIELDS } from '../part-import/fields.ts';
 
 export type LinkState = 'same' | 'differs' | 'part-missing' | 'library-missing';
@@ -29,13 +30,6 @@ export interface PartLink {
   differences: FieldDifference[];
   /** One sentence for the user. */
   message: string;
-}
-
-/** The part record a role holds (the capacitor banks hold theirs in `part`). */
-export function partOfRole(design: Design, role: Role): Part | undefined {
-  const slot = design.parts[role];
-  if (slot === undefined) return undefined;
-  return 'count' in slot && 'part' in slot ? slot.part : (slot as Part);
 }
 
 function leaves(value: unknown, prefix: string, out: Map<string, unknown>): Map<string, unknown> {
@@ -66,7 +60,7 @@ export function linkStatus(design: Design, libraries: readonly PartsLibrary[]): 
   const out: PartLink[] = [];
   for (const [role, source] of Object.entries(design.sources ?? {}) as [Role, PartSource][]) {
     const library = libraries.find((l) => l.id === source.libraryId);
-    const own = partOfRole(design, role);
+    const own = partInRole(design, role);
     if (!library) {
       out.push({ role, source, state: 'library-missing', differences: [], message: `The library "${source.libraryName}" is not open; the design uses its own copy of ${source.partId}.` });
       continue;

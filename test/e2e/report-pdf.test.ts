@@ -10,27 +10,9 @@ import { execFileSync } from 'node:child_process';
 import { mkdirSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
-import {
-  balanceDecimals,
-  buildReport,
-  evaluate,
-  figuresOfMerit,
-  formatFigurePercent,
-  findLandmarks,
-  formatAmps,
-  formatCelsius,
-  formatDuty,
-  formatKelvin,
-  formatPercent,
-  formatWatts,
-  formatWattsFixed,
-  METHOD_CATALOGUE,
-  REPORT_CAUTIONS,
-  roleLabel,
-  serializeDesign,
-  sweepLoad,
-  validateDesign,
-} from '../../shared-model/index.ts';
+import { balanceDecimals, buildReport, evaluate, figuresOfMerit, formatFigurePercent, findLandmarks, formatAmps, formatCelsius, formatDuty, formatKelvin, formatPercent, formatWatts, formatWattsFixed, roleLabel, serializeDesign, sweepLoad, validateDesign } from '../../shared-model/index.ts';
+import { METHOD_CATALOGUE } from '../../shared-model/report/methods.ts';
+import { REPORT_CAUTIONS } from '../../shared-model/report/cautions.ts';
 import type { Design, ReportModel } from '../../shared-model/index.ts';
 import { ensureReportBundle, readBuiltPage, REPO_ROOT } from '../../src-main/report/bundle.ts';
 import { findChromium, reportPdf } from '../../src-main/report/pdf.ts';

@@ -6,7 +6,7 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import nodePath from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { METHOD_CATALOGUE } from '../../shared-model/index.ts';
+import { METHOD_CATALOGUE } from '../../shared-model/report/methods.ts';
 
 const ROOT = nodePath.resolve(import.meta.dirname, '../..');
 const methods = readFileSync(nodePath.join(ROOT, 'docs/methods.md'), 'utf8');

@@ -2,7 +2,8 @@
  * csvText / csvNumber / csvLines: RFC 4180 quoting and the OWASP formula-injection rule.
  */
 import { describe, expect, it } from 'vitest';
-import { csvLines, csvNumber, csvText } from '../../../shared-model/index.ts';
+import { csvLines } from '../../../shared-model/index.ts';
+import { csvNumber, csvText } from '../../../shared-model/csv/write.ts';
 
 describe('csvText', () => {
   it('leaves a plain cell as it is', () => {

@@ -5,7 +5,8 @@
 import { readFileSync } from 'node:fs';
 import { createHash } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
-import { DEMO_DESIGNS, parseDesignText, serializeDesign, sha256Hex } from '../../../shared-model/index.ts';
+import { DEMO_DESIGNS, parseDesignText, serializeDesign } from '../../../shared-model/index.ts';
+import { sha256Hex } from '../../../shared-model/report/sha256.ts';
 
 const demoFile = (id: string): string => readFileSync(new URL(`../../../assets/designs/${id}.json`, import.meta.url), 'utf8');
 

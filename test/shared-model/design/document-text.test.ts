@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { findJsonSyntaxError, parseDesignText, serializeDesign, validateDesign } from '../../../shared-model/index.ts';
+import { parseDesignText, serializeDesign, validateDesign } from '../../../shared-model/index.ts';
+import { findJsonSyntaxError } from '../../../shared-model/design/json-position.ts';
 import { demo, setPath } from './fixtures.ts';
 
 const demoText = (): string => `${JSON.stringify(demo('synchronous-buck'), null, 2)}\n`;

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { designJsonSchema, parseEngineering, partsLibraryJsonSchema, unitOfKey, unitOfPath } from '../../../shared-model/index.ts';
+import { designJsonSchema, parseEngineering, partsLibraryJsonSchema, unitOfPath } from '../../../shared-model/index.ts';
+import { unitOfKey } from '../../../shared-model/design/key-units.ts';
 
 /** Every key whose JSON Schema type is number or integer (walks properties, items and oneOf). */
 function numberKeys(schema: unknown, key = '', out = new Set<string>()): Set<string> {

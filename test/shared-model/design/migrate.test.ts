@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { DESIGN_VERSION, migrateDesign, validateDesign } from '../../../shared-model/index.ts';
+import { DESIGN_VERSION, validateDesign } from '../../../shared-model/index.ts';
+import { migrateDesign } from '../../../shared-model/design/migrate.ts';
 import versionZero from './fixtures/synchronous-buck.v0.json';
 import { demo } from './fixtures.ts';
 

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { ConditionOverrides } from '../../../shared-model/index.ts';
-import { checkConditionOverrides, CONDITION_RANGES, DESIGN_RANGES } from '../../../shared-model/index.ts';
+import { checkConditionOverrides, CONDITION_RANGES } from '../../../shared-model/index.ts';
+import { RANGES as DESIGN_RANGES } from '../../../shared-model/design/numbers.ts';
 import { demoDesign } from '../../helpers/demo.ts';
 
 const buck = demoDesign('synchronous-buck');

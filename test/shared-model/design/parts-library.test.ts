@@ -1,6 +1,7 @@
 /** The parts library document: version 2 with its id, migration from version 1, canonical text. */
 import { describe, expect, it } from 'vitest';
-import { DEMO_PARTS_LIBRARY, migratePartsLibrary, parsePartsLibraryText, PARTS_LIBRARY_VERSION, serializePartsLibrary, validatePartsLibrary } from '../../../shared-model/index.ts';
+import { DEMO_PARTS_LIBRARY, parsePartsLibraryText, PARTS_LIBRARY_VERSION, serializePartsLibrary, validatePartsLibrary } from '../../../shared-model/index.ts';
+import { migratePartsLibrary } from '../../../shared-model/design/parts-library-migrate.ts';
 
 const v2 = DEMO_PARTS_LIBRARY as { id: string; version: number; name: string };
 

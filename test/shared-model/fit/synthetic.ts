@@ -3,16 +3,9 @@
  * evaluated by the engine at chosen points, plus seeded Gaussian noise on the input power (and on
  * temperatures when asked). The truth is known, so a fit can be checked against it.
  */
-import {
-  applyParameters,
-  createRandom,
-  fitParameters,
-  modelPoints,
-  type Design,
-  type FitParameterName,
-  type Measurement,
-  type Role,
-} from '../../../shared-model/index.ts';
+import { fitParameters, modelPoints, type Design, type FitParameterName, type Measurement, type Role } from '../../../shared-model/index.ts';
+import { applyParameters } from '../../../shared-model/fit/parameters.ts';
+import { createRandom } from '../../../shared-model/tolerance/prng.ts';
 
 export interface SyntheticOptions {
   truth: Partial<Record<FitParameterName, number>>;

@@ -3,20 +3,8 @@
  * is reported, field by field, and one action updates it. Parts and libraries are invented.
  */
 import { describe, expect, it } from 'vitest';
-import {
-  evaluate,
-  linkStatus,
-  parseDesignText,
-  partDifferences,
-  serializeDesign,
-  takeLibraryPart,
-  unlinkPart,
-  updateFromLibrary,
-  validatePartsLibrary,
-  DEMO_PARTS_LIBRARY,
-  type Design,
-  type PartsLibrary,
-} from '../../../shared-model/index.ts';
+import { evaluate, linkStatus, parseDesignText, serializeDesign, takeLibraryPart, unlinkPart, updateFromLibrary, validatePartsLibrary, DEMO_PARTS_LIBRARY, type Design, type PartsLibrary } from '../../../shared-model/index.ts';
+import { partDifferences } from '../../../shared-model/library-links/link-status.ts';
 import { demoDesign } from '../../helpers/demo.ts';
 
 function library(): PartsLibrary {

@@ -1,6 +1,8 @@
 /** One cell as a field's value: engineering notation, the column's unit, exact decimal scaling, the field's range. */
 import { describe, expect, it } from 'vitest';
-import { partField, readCell, shiftedText, unitExponent, type PartField } from '../../../shared-model/index.ts';
+import { partField, type PartField } from '../../../shared-model/index.ts';
+import { readCell, unitExponent } from '../../../shared-model/part-import/cells.ts';
+import { shiftedText } from '../../../shared-model/part-import/export.ts';
 
 const field = (path: string): PartField => {
   const f = partField(path);

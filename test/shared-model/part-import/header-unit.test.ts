@@ -1,6 +1,6 @@
 /** Column headers: the unit is split off only where it reads as a unit; names compare without case or punctuation. */
 import { describe, expect, it } from 'vitest';
-import { headerReadings, normaliseHeader } from '../../../shared-model/index.ts';
+import { headerReadings, normaliseHeader } from '../../../shared-model/part-import/header-unit.ts';
 
 const first = (h: string) => headerReadings(h)[0];
 

@@ -4,20 +4,8 @@
  */
 import { createHash } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
-import {
-  buildReport,
-  compareParts,
-  DEMO_PARTS_LIBRARY,
-  evaluate,
-  figuresOfMerit,
-  findLandmarks,
-  monteCarlo,
-  partsOfKind,
-  sweepLoad,
-  titleBlock,
-  validatePartsLibrary,
-  worstCase,
-} from '../../../shared-model/index.ts';
+import { buildReport, compareParts, DEMO_PARTS_LIBRARY, evaluate, figuresOfMerit, findLandmarks, monteCarlo, partsOfKind, sweepLoad, validatePartsLibrary, worstCase } from '../../../shared-model/index.ts';
+import { titleBlock } from '../../../shared-model/report/build.ts';
 import type { ReportModel } from '../../../shared-model/index.ts';
 import { designText } from './demo.ts';
 import { demoDesign } from '../../helpers/demo.ts';

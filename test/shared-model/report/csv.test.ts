@@ -3,7 +3,8 @@
  * every field count matches its header, and every number reads back to the engine's exact value.
  */
 import { describe, expect, it } from 'vitest';
-import { csvText, evaluate, ledgerCsv, sweepCsv, sweepLoad } from '../../../shared-model/index.ts';
+import { evaluate, ledgerCsv, sweepCsv, sweepLoad } from '../../../shared-model/index.ts';
+import { csvText } from '../../../shared-model/csv/write.ts';
 import { demoDesign } from '../../helpers/demo.ts';
 
 /** RFC 4180 reader: CRLF records, quoted fields with doubled quotes. */

@@ -3,16 +3,8 @@
  * of the printed digits) and the SI prefixes of the SI Brochure (BIPM, 9th ed. 2019, Table 7).
  */
 import { describe, expect, it } from 'vitest';
-import {
-  balanceDecimals,
-  formatCelsius,
-  formatFixed,
-  formatHours,
-  formatKelvin,
-  formatPercent,
-  formatQuantity,
-  formatEngineering,
-} from '../../../shared-model/index.ts';
+import { balanceDecimals, formatCelsius, formatHours, formatKelvin, formatPercent, formatQuantity, formatEngineering } from '../../../shared-model/index.ts';
+import { formatFixed } from '../../../shared-model/report/format.ts';
 
 // Independent reader of a formatted SI value: number, optional prefix, unit (SI Brochure Table 7).
 const PREFIX: Record<string, number> = { p: 1e-12, n: 1e-9, µ: 1e-6, m: 1e-3, '': 1, k: 1e3, M: 1e6, G: 1e9 };

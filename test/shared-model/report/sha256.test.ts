@@ -4,7 +4,7 @@
  */
 import { createHash } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
-import { sha256Hex, utf8Bytes } from '../../../shared-model/index.ts';
+import { sha256Hex, utf8Bytes } from '../../../shared-model/report/sha256.ts';
 
 const reference = (data: Uint8Array | string): string => createHash('sha256').update(data).digest('hex');
 

@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { createRandom, drawVariation, monteCarlo, resolveTolerances } from '../../../shared-model/index.ts';
+import { monteCarlo } from '../../../shared-model/index.ts';
+import { createRandom } from '../../../shared-model/tolerance/prng.ts';
+import { drawVariation } from '../../../shared-model/tolerance/monte-carlo.ts';
+import { resolveTolerances } from '../../../shared-model/tolerance/variation.ts';
 import { closeTo } from '../../helpers/close-to.ts';
 import { CEILING, handCeilingDesign } from '../landmarks/hand-designs.ts';
 import { demoDesign } from '../../helpers/demo.ts';

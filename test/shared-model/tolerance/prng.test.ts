@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { createRandom, isValidSeed, MT19937_DEFAULT_SEED } from '../../../shared-model/index.ts';
+import { createRandom, isValidSeed, MT19937_DEFAULT_SEED } from '../../../shared-model/tolerance/prng.ts';
 import reference from './reference/mt19937-numpy.json';
 
 describe('createRandom (MT19937)', () => {

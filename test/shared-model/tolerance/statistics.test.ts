@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fractionWhere, sampleHistogram as histogram, sampleMean as mean, sampleQuantile as quantile, sampleStandardDeviation as standardDeviation, summarizeSamples as summarize } from '../../../shared-model/index.ts';
+import { fractionWhere, sampleHistogram as histogram, sampleMean as mean, sampleQuantile as quantile, sampleStandardDeviation as standardDeviation, summarizeSamples as summarize } from '../../../shared-model/tolerance/statistics.ts';
 import { closeTo } from '../../helpers/close-to.ts';
 
 describe('sample statistics', () => {

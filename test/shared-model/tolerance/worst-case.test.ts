@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { checkTolerances, cornerVariations, resolveTolerances, worstCase } from '../../../shared-model/index.ts';
+import { checkTolerances, worstCase } from '../../../shared-model/index.ts';
+import { cornerVariations } from '../../../shared-model/tolerance/worst-case.ts';
+import { resolveTolerances } from '../../../shared-model/tolerance/variation.ts';
 import { closeTo } from '../../helpers/close-to.ts';
 import { evaluate, handCeilingDesign } from '../landmarks/hand-designs.ts';
 import { demoDesign } from '../../helpers/demo.ts';
