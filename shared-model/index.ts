@@ -219,6 +219,8 @@ export type { SizingOptions } from './sizing/size-design.ts';
 export { sizeDesign, sizeFromCorners } from './sizing/size-design.ts';
 export type { HandInput, HandSizing } from './sizing/hand-method.ts';
 export { handSizing } from './sizing/hand-method.ts';
+export type { SizingRow } from './sizing/rows.ts';
+export { sizingRows } from './sizing/rows.ts';
 
 // --- design checks: the chosen parts and the targets against the sizing ---
 export type * from './design-checks/types.ts';

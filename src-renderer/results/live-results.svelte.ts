@@ -21,6 +21,7 @@ import {
 import type {
   Comparison,
   Design,
+  DesignReview,
   Evaluation,
   FiguresOfMerit,
   FrequencySweep,
@@ -91,6 +92,8 @@ export class LiveResults {
   readonly frequency = new JobSlot<FrequencySweep>();
   readonly grid = new JobSlot<LoadGrid>();
   readonly worstCase = new JobSlot<WorstCase>();
+  /** Sizing and design checks of the design (its own corners; the chosen load does not enter). */
+  readonly review = new JobSlot<DesignReview>();
   readonly monteCarlo = new JobSlot<MonteCarlo>();
   readonly comparison = new JobSlot<Comparison>();
 
@@ -212,6 +215,11 @@ export class LiveResults {
     const axis = this.gridAxis;
     const conditions = axis === 'frequency' ? { vinV: this.conditions.vinV } : {};
     void this.grid.run({ design, axis, vinV: conditions.vinV ?? null }, () => this.heavy.run('grid', { design, options: { axis, conditions } }), (o) => o.output);
+  }
+
+  requestReview(): void {
+    const design = this.design;
+    void this.review.run({ design }, () => this.heavy.run('review', { design }), (o) => o.output);
   }
 
   requestWorstCase(): void {

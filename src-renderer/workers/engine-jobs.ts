@@ -12,6 +12,7 @@ import {
   compareParts,
   figuresOfMerit,
   rankParts,
+  reviewDesign,
   sweepFamilies,
   sweepFrequency,
   sweepGrid,
@@ -63,6 +64,8 @@ export function runJob(request: Extract<EngineRequest, { type: 'run' }>): JobRes
       }
       case 'rank':
         return { ok: true, output: rankParts(request.input.design, request.input.options) };
+      case 'review':
+        return { ok: true, output: reviewDesign(request.input.design) };
       case 'worst-case': {
         const { design, options = {} } = request.input;
         const problems = checkTolerances(options.tolerances ?? {});
