@@ -14,6 +14,7 @@ import { specificationRules } from './rules-spec.ts';
 import { thermalRules } from './rules-thermal.ts';
 import { validityRules } from './rules-validity.ts';
 import { problemsFromZod } from './zod-problems.ts';
+import { labelProblems } from './labelled-problems.ts';
 
 export type DesignValidation =
   | { ok: true; design: Design; warnings?: DesignNotice[] }
@@ -68,7 +69,7 @@ export function validateDesign(json: unknown): DesignValidation {
   const problems = parsed.success ? [] : problemsFromZod(parsed.error.issues, designSchema, doc);
   const refused = parsed.success ? [] : parsed.error.issues.map((issue) => issue.path);
   problems.push(...crossFieldProblems(withoutRefused(doc, refused)));
-  if (problems.length > 0 || !parsed.success) return { ok: false, problems: unique(problems) };
+  if (problems.length > 0 || !parsed.success) return { ok: false, problems: labelProblems(unique(problems), doc) };
   const warnings = [...migrated.notes, ...ignoredKeys(doc, parsed.data), ...designNotices(parsed.data)];
   return warnings.length > 0 ? { ok: true, design: parsed.data, warnings } : { ok: true, design: parsed.data };
 }
