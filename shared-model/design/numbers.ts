@@ -113,6 +113,9 @@ export const RANGES = {
   rippleRatio: { min: 0.01, max: 4, why: `Inductor ripple target as a fraction of the rated inductor current, 0.01 … 4 (${TRADE}: 0.2–0.4 in CCM, 2 at the DCM boundary).` },
   derating: { min: 0.1, max: 1, why: `Fraction of a rating that may be used, 0.1 … 1 (${TRADE}: 0.5–0.9).` },
   bankCount: { min: 1, max: 100, integer: true, why: `Capacitors in parallel, 1 … 100 (${OURS}).` },
+  phaseCount: { min: 1, max: 8, integer: true, why: `Interleaved power stages, 1 … 8 (${OURS}: discrete multiphase rails rarely exceed 8 phases; 1 is a single-phase converter).` },
+  sharingMismatch: { min: 0, max: 0.5, why: `Current-sharing mismatch of the worst phase, 0 … 0.5 (${TRADE}: current-mode sharing holds a few per cent, ±5–10 %; 0.5 leaves margin for a poorly matched layout).` },
+  sheddingHysteresis: { min: 0, max: 0.5, why: `Phase-shedding hysteresis as a fraction of the crossover load, 0 … 0.5 (${OURS}: 5–20 % keeps a load near the crossover from toggling a phase).` },
   // --- bench measurements and calibration (shared-model/measurement, shared-model/fit) ---
   measuredLoadA: { min: 0, minExclusive: true, max: 1000, why: `Measured load current, above 0 up to 1 kA (${OURS}: the rated-load range; a point at no load has no efficiency).` },
   measuredPowerW: { min: 0, minExclusive: true, max: 100_000, why: `Measured input power, above 0 up to 100 kW (${OURS}: a few hundred A at a few hundred V with margin).` },
