@@ -115,6 +115,9 @@ export const RANGES = {
   rippleRatio: { min: 0.01, max: 4, why: `Inductor ripple target as a fraction of the rated inductor current, 0.01 … 4 (${TRADE}: 0.2–0.4 in CCM, 2 at the DCM boundary).` },
   derating: { min: 0.1, max: 1, why: `Fraction of a rating that may be used, 0.1 … 1 (${TRADE}: 0.5–0.9).` },
   bankCount: { min: 1, max: 100, integer: true, why: `Capacitors in parallel, 1 … 100 (${OURS}).` },
+  phaseCount: { min: 1, max: 8, integer: true, why: `Interleaved power stages, 1 … 8 (${OURS}: discrete multiphase rails rarely exceed 8 phases; 1 is a single-phase converter).` },
+  sharingMismatch: { min: 0, max: 0.5, why: `Current-sharing mismatch of the worst phase, 0 … 0.5 (${TRADE}: current-mode sharing holds a few per cent, ±5–10 %; 0.5 leaves margin for a poorly matched layout).` },
+  sheddingHysteresis: { min: 0, max: 0.5, why: `Phase-shedding hysteresis as a fraction of the crossover load, 0 … 0.5 (${OURS}: 5–20 % keeps a load near the crossover from toggling a phase).` },
   // --- bench measurements and calibration (shared-model/measurement, shared-model/fit) ---
   measuredLoadA: { min: 0, minExclusive: true, max: 1000, why: `Measured load current, above 0 up to 1 kA (${OURS}: the rated-load range; a point at no load has no efficiency).` },
   measuredPowerW: { min: 0, minExclusive: true, max: 100_000, why: `Measured input power, above 0 up to 100 kW (${OURS}: a few hundred A at a few hundred V with margin).` },
@@ -123,6 +126,11 @@ export const RANGES = {
   measuredPercent: { min: 0, minExclusive: true, max: 100, maxExclusive: true, why: 'Efficiency in percent, strictly between 0 % and 100 %.' },
   fittedValue: { min: -1e12, max: 1e12, why: `A fitted parameter or its interval bound, in the parameter's own unit (${OURS}: multipliers of order one, currents in A).` },
   lifeHours: { min: 1, max: 1e7, why: `Life in hours, 1 h … 10 million h (${OURS}).` },
+  // --- mission profile (shared-model/mission) ---
+  timeFraction: { min: 0, max: 1, why: 'Share of the operating time spent at a row, 0 … 1 (by definition a fraction; the rows add up to 1).' },
+  missionLoadA: { min: 0, max: 1000, why: `Load of a mission-profile row, 0 (standby) … 1 kA (${OURS}: the rated-load range, from no load up).` },
+  hoursPerDay: { min: 0, minExclusive: true, max: 24, why: `Operating hours per day, above 0 up to 24 (a day has 24 h; refusing 0 is ${OURS}).` },
+  batteryWh: { min: 1e-3, max: 1e6, why: `Battery capacity, 1 mWh … 1 MWh (${OURS}: from a coin cell to a stationary storage bank).` },
 } as const satisfies Record<string, QuantityRange>;
 
 export type QuantityName = keyof typeof RANGES;

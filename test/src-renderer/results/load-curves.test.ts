@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { findLandmarks, sweepLoad } from '../../../shared-model/index.ts';
 import { efficiencyCurves, lossStack } from '../../../src-renderer/results/load-curves.ts';
-import { temperatureCurves } from '../../../src-renderer/results/temperature-curves.ts';
+import { SHORT_ROLE, temperatureCurves } from '../../../src-renderer/results/temperature-curves.ts';
 import { closeTo } from '../../helpers/close-to.ts';
 import { labelOf } from './demo.ts';
 import { demoDesign } from '../../helpers/demo.ts';
@@ -39,5 +39,17 @@ describe('load-curve chart data of the demo design', () => {
     expect(one.markers.find((m) => m.key === 'derated')?.value).toBe(column?.deratedLimitC); // engine column: limit less the design margin
     const touch = sweep.columns.hazards.find((h) => h.part === 'switch');
     expect(one.markers.find((m) => m.key === 'touch')?.value).toBe(touch?.limitC); // engine column: touch limit of the surface
+  });
+
+  it('names the owner of every limit line when every part is shown', () => {
+    const all = temperatureCurves(sweep, landmarks, null, labelOf);
+    for (const c of sweep.columns.temperatures) {
+      const line = all.markers.find((m) => m.axis === 'y' && m.value === c.deratedLimitC && !m.dashed);
+      expect(line?.label, c.part).toContain(SHORT_ROLE[c.part]); // issue 16 §4: each limit says whose it is (engine column: limit less the design margin)
+    }
+    for (const h of sweep.columns.hazards) {
+      const line = all.markers.find((m) => m.axis === 'y' && m.value === h.limitC && m.dashed);
+      expect(line?.label, h.part).toContain(SHORT_ROLE[h.part]); // issue 16 §4: each touch limit names its surface's part (engine hazard column)
+    }
   });
 });
