@@ -124,6 +124,11 @@ export const RANGES = {
   measuredPercent: { min: 0, minExclusive: true, max: 100, maxExclusive: true, why: 'Efficiency in percent, strictly between 0 % and 100 %.' },
   fittedValue: { min: -1e12, max: 1e12, why: `A fitted parameter or its interval bound, in the parameter's own unit (${OURS}: multipliers of order one, currents in A).` },
   lifeHours: { min: 1, max: 1e7, why: `Life in hours, 1 h … 10 million h (${OURS}).` },
+  // --- mission profile (shared-model/mission) ---
+  timeFraction: { min: 0, max: 1, why: 'Share of the operating time spent at a row, 0 … 1 (by definition a fraction; the rows add up to 1).' },
+  missionLoadA: { min: 0, max: 1000, why: `Load of a mission-profile row, 0 (standby) … 1 kA (${OURS}: the rated-load range, from no load up).` },
+  hoursPerDay: { min: 0, minExclusive: true, max: 24, why: `Operating hours per day, above 0 up to 24 (a day has 24 h; refusing 0 is ${OURS}).` },
+  batteryWh: { min: 1e-3, max: 1e6, why: `Battery capacity, 1 mWh … 1 MWh (${OURS}: from a coin cell to a stationary storage bank).` },
 } as const satisfies Record<string, QuantityRange>;
 
 export type QuantityName = keyof typeof RANGES;

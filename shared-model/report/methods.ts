@@ -271,6 +271,22 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     source: 'Hyndman & Fan, The American Statistician 50(4), 1996; Matsumoto & Nishimura, ACM TOMACS 8(1), 1998 (from memory for the volume).',
     limits: ['Corners bound a result only where it changes monotonically with each tolerance; default spreads are common practice, not datasheet values.'],
   },
+  {
+    id: 'design-checks',
+    title: 'Sizing and design checks',
+    formula:
+      'The design evaluated at rated load at Vin min, nominal and max (and, for a boost, Vin = Vout/2); from those solved points the inductance for ' +
+      'the ripple target, the output capacitance and ESR for the ripple target, the ratings after derating, the duty range, the compensating ramp ' +
+      'm2/2 and the crossover limit min(fs/10, fz/5). Each check holds a value at its worst regulated corner against its limit: pass, warn ' +
+      '(between the derated and the full rating, or guidance) or fail.',
+    source: `${EM}, ch. 2, 3 and 8 (from memory for chapter numbers); Ridley, IEEE Trans. Power Electronics 6(2), 1991 (from memory); WattLedger methods §23, §24.`,
+    limits: [
+      'Corners at rated load only; light-load and transient stresses are not checked.',
+      'ESL, ringing and voltage spikes are not modelled: measure them.',
+      'Slope compensation and crossover are guidance for a loop design, not a loop design; the controller\'s own ramp is not known.',
+      'Derating rules (80 % current, 20–40 % ripple, fs/10, fz/5) are common practice, not standards.',
+    ],
+  },
 ];
 
 const BY_MECHANISM: Readonly<Record<Mechanism, string>> = {
