@@ -234,6 +234,16 @@ export { sizeDesign, sizeFromCorners } from './sizing/size-design.ts';
 export type { HandInput, HandSizing } from './sizing/hand-method.ts';
 export { handSizing } from './sizing/hand-method.ts';
 
+// --- mission profile (issue 11 §4) ---
+export type { MissionProfile, MissionRow } from './mission/schema.ts';
+export { MAX_MISSION_ROWS, missionProfileSchema } from './mission/schema.ts';
+export type { WeightingId, WeightingSet } from './mission/weightings.ts';
+export { profileFromWeighting, ratedPointProfile, WEIGHTING_SETS, weightingSet } from './mission/weightings.ts';
+export { FRACTION_SUM_TOLERANCE } from './mission/rules.ts';
+export type * from './mission/types.ts';
+export type { MissionOptions } from './mission/evaluate-mission.ts';
+export { evaluateMission } from './mission/evaluate-mission.ts';
+
 // --- design checks: the chosen parts and the targets against the sizing ---
 export type * from './design-checks/types.ts';
 export { reviewDesign } from './design-checks/review.ts';
