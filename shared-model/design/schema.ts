@@ -8,6 +8,7 @@ import { z } from 'zod';
 import { capacitorSchema, controllerSchema, diodeSchema, inductorSchema, mosfetSchema, resistorSchema } from './parts.ts';
 import { quantity as q } from './numbers.ts';
 import { calibrationSchema, measurementSchema } from '../measurement/schema.ts';
+import { missionProfileSchema } from '../mission/schema.ts';
 
 export const DESIGN_FORMAT = 'wattledger.design';
 export const DESIGN_VERSION = 1;
@@ -29,9 +30,9 @@ export const specificationSchema = z.object({
   /** Largest duty cycle the controller can command (0.05 ≤ maxDuty < 1). */
   maxDuty: q('maxDuty'),
   /**
-   * Optional targets. Only `efficiencyAtRated` is read today: the report's summary says whether the rated
-   * point meets it and the Monte Carlo counts the samples that do. The two ripple targets are stored but
-   * not yet checked against any result (the sizing checks, issue 11, will).
+   * Optional targets. The report's summary says whether the rated point meets `efficiencyAtRated` and the
+   * Monte Carlo counts the samples that do; the design checks (design-checks/, `reviewDesign`) hold all
+   * three against the solved corners, and the sizing (sizing/) uses the two ripple targets.
    */
   targets: z
     .object({
@@ -217,6 +218,8 @@ export const designSchema = z.object({
   measurements: measurementSchema.optional(),
   /** Set when fitted values were adopted: the measurement's hash and the values (shared-model/fit). */
   calibration: calibrationSchema.optional(),
+  /** How the product is used: rows of (Vin, load, ambient, fraction of time) (optional; shared-model/mission). */
+  missionProfile: missionProfileSchema.optional(),
 });
 
 export type Specification = z.infer<typeof specificationSchema>;

@@ -90,11 +90,8 @@ export interface LoopWork {
   lean: LeanPoint;
   /** The final point of a sweep evaluation, filled as the record would be (point-view.ts); made on first use. */
   summary: LeanPoint | undefined;
-  raised: Float64Array;
-  base: Float64Array;
   ambient: Float64Array;
   cp: ConductionParameters;
-  cpRaised: ConductionParameters;
   circuit: Circuit;
   thermal: ThermalWork;
 }
@@ -142,11 +139,8 @@ export function ledgerContext(design: Design, vinV = design.spec.vinNomV, freque
       probe: newShape(),
       lean: newLeanPoint(),
       summary: undefined,
-      raised: new Float64Array(net.nodes.length),
-      base: new Float64Array(net.nodes.length),
       ambient: new Float64Array(net.nodes.length),
       cp: newConduction(),
-      cpRaised: newConduction(),
       circuit: newCircuit(),
       thermal: new ThermalWork(net.network.size, net.network.sinkKPerW.length),
     },

@@ -7,8 +7,8 @@
  *      f(D) = Vin·Iin(D) − Pout − P_path(D, T), warm-started from the previous call's duty and slope,
  *      until |f| ≤ 1e-12·Pin (usually one or two steps once the temperatures settle;
  *      a single step while the temperatures are still more than 1 K from their fixed point);
- *   3. per-part losses from the kernel on a reused LeanPoint; the tangents ∂P_i/∂T_i by one more kernel
- *      pass with every temperature raised by SLOPE_STEP_K and the electrical point held.
+ *   3. per-part losses from the kernel on a reused LeanPoint; the tangents ∂P_i/∂T_i exact, from the
+ *      filled slots and the laws' slopes with the electrical point held (kernel-slopes.ts), no further pass.
  * `finalPoint(T)` then builds the solver's OperatingPoint record once at the converged duty, exactly as
  * solveOperatingPoint(design, conditions, conduction(T), { lossOf, sourceLossOf }) would (test:
  * test/shared-model/ledger/joint-loop.test.ts).
@@ -32,17 +32,15 @@ import { addWarnings } from '../operating-point/checks.ts';
 import type { ConductionParameters } from '../operating-point/types.ts';
 import type { LossAt } from '../thermal/fixed-point.ts';
 import { conductionInto, fillLosses, type LedgerContext } from './kernel.ts';
+import { nodeSlopesInto } from './kernel-slopes.ts';
 import {
   leanPointAt,
   newLeanPoint,
   rippleSquaresOf,
   rippleSquaresOfLean,
   type PointSummary,
-  type PointView,
-  type RippleSquares,
 } from './point-view.ts';
 
-export const SLOPE_STEP_K = 0.01;
 const LOOSE_ABOVE_K = 1;
 
 export interface JointLoop {
@@ -168,26 +166,15 @@ export class Loop implements JointLoop, BalanceProblem {
     b.slope = (this.vin * (shapeAt(w.circuit, Math.min(d + h, this.ctx.design.spec.maxDuty), this.vo, w.probe).iin - w.shape.iin)) / h;
   }
 
-  private slopesAt(view: PointView, ripple: RippleSquares, T: Float64Array, P: Float64Array, G: Float64Array): void {
-    const ctx = this.ctx;
-    const { base, raised: Tp, cpRaised } = ctx.work;
-    const n = ctx.net.nodes.length;
-    base.set(P);
-    for (let i = 0; i < n; i++) Tp[i] = T[i]! + SLOPE_STEP_K;
-    fillLosses(ctx, view, ripple, Tp, conductionInto(ctx, Tp, cpRaised), true);
-    const q = ctx.nodePowerW;
-    for (let i = 0; i < n; i++) G[i] = (q[i]! - base[i]!) / SLOPE_STEP_K;
-  }
-
   /** One electro-thermal step (see header): the solver's LossAt. */
   step(T: Float64Array, P: Float64Array, G: Float64Array, residualK: number): boolean {
     const ctx = this.ctx;
     const w = ctx.work;
     const cp = conductionInto(ctx, T, w.cp);
     if (!this.fast) {
-      const op = this.slowPoint(T, cp);
+      this.slowPoint(T, cp);
       P.set(ctx.nodePowerW);
-      this.slopesAt(op, ctx.ripple, T, P, G);
+      nodeSlopesInto(ctx, T, G);
       return true;
     }
     const dMax = ctx.design.spec.maxDuty;
@@ -202,7 +189,7 @@ export class Loop implements JointLoop, BalanceProblem {
       this.d = vs.d;
       this.balance(T, cp);
       P.set(ctx.nodePowerW);
-      this.slopesAt(w.lean, ctx.ripple, T, P, G);
+      nodeSlopesInto(ctx, T, G);
       return true;
     }
     // Far from the thermal fixed point (residual above LOOSE_ABOVE_K) one duty step is enough: the
@@ -219,7 +206,7 @@ export class Loop implements JointLoop, BalanceProblem {
     }
     const ok = b.status === BALANCED;
     P.set(ctx.nodePowerW);
-    this.slopesAt(w.lean, ctx.ripple, T, P, G);
+    nodeSlopesInto(ctx, T, G);
     return ok;
   }
 

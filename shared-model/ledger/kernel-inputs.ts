@@ -149,6 +149,9 @@ export function fillRectifierInputs(ctx: LedgerContext, op: PointView, T: Float6
     f.iavgA = op.stats.rectifier.averageA;
     f.irmsA = op.stats.rectifier.rmsA;
     f.temperatureC = tR;
+    f.segments = op.waveforms.inductor.segments;
+    f.periodS = op.periodS;
+    f.fraction = op.rectifierFraction;
     const l = s.diodeLeakage!.inputs;
     l.leakageA = leakageAt(rect, tR);
     l.reverseV = op.stress.rectifierV;
@@ -161,10 +164,9 @@ export function fillRectifierInputs(ctx: LedgerContext, op: PointView, T: Float6
 }
 
 /**
- * The passive parts' and the controller's slots: winding DC and AC (the Dowell factor kept on a
- * thermal-only refill), core, both capacitor banks' ESR, the sense resistor, the quiescent current.
+ * The passive parts' and the controller's slots: winding DC and AC, core, both capacitor banks' ESR, the sense resistor, the quiescent current.
  */
-export function fillPassiveInputs(ctx: LedgerContext, op: PointView, T: Float64Array, cp: ConductionParameters, thermalOnly: boolean): void {
+export function fillPassiveInputs(ctx: LedgerContext, op: PointView, T: Float64Array, cp: ConductionParameters): void {
   const { design, slots: s } = ctx;
   const parts = design.parts;
   const drv = parts.controller;
@@ -181,16 +183,14 @@ export function fillPassiveInputs(ctx: LedgerContext, op: PointView, T: Float64A
     x.acRmsA = op.inductor.acRmsA;
     x.dcrOhm = cp.inductorDcrOhm;
     x.temperatureC = tL;
-    // A thermal-only refill keeps the Dowell factor of the previous fill: its slope with temperature
-    // (through the resistivity in the skin depth) is negligible next to DCR's and is left out of ∂P/∂T.
-    if (!thermalOnly) {
-      x.factor =
-        spec.kind === 'factor'
-          ? spec.racOverRdc
-          : spec.kind === 'dowell'
-            ? dowellRippleFactor(op.waveforms.inductor.segments, op.inductor.acRmsA, spec.layers, spec.conductorThicknessM, spec.porosity, tL, ctx.scratch)
-            : 1;
-    }
+    // The Dowell factor's slope with temperature (through the resistivity in the skin depth) is negligible
+    // next to DCR's and is left out of ∂P/∂T (kernel-slopes.ts).
+    x.factor =
+      spec.kind === 'factor'
+        ? spec.racOverRdc
+        : spec.kind === 'dowell'
+          ? dowellRippleFactor(op.waveforms.inductor.segments, op.inductor.acRmsA, spec.layers, spec.conductorThicknessM, spec.porosity, tL, ctx.scratch)
+          : 1;
   }
   const k = s.core.inputs;
   k.kiWPerM3 = ctx.core.ki;

@@ -26,9 +26,7 @@ import type { LedgerContext } from './context.ts';
 export { conductionAt, conductionInto, ledgerContext, type LedgerContext } from './context.ts';
 
 /**
- * Computes every loss of `op` at node temperatures T into the slots and ctx outputs (with `thermalOnly`,
- * a refill of the point of the previous call: the slots that do not depend on temperature keep their
- * watts). `ripple` holds the
+ * Computes every loss of `op` at node temperatures T into the slots and ctx outputs. `ripple` holds the
  * slope parts of the branch mean squares (point-view.ts): the resistive losses they carry are moved from
  * the duty-moving sum (pathLossW) to the source sum (sourceLossW), see slots.ts.
  */
@@ -38,11 +36,10 @@ export function fillLosses(
   ripple: RippleSquares,
   T: Float64Array,
   cp: ConductionParameters,
-  thermalOnly = false,
 ): void {
   fillSwitchInputs(ctx, op, T, cp);
   fillRectifierInputs(ctx, op, T, cp);
-  fillPassiveInputs(ctx, op, T, cp, thermalOnly);
+  fillPassiveInputs(ctx, op, T, cp);
   const s = ctx.slots;
   const parts = ctx.design.parts;
   const sw = parts.switch;
@@ -57,8 +54,7 @@ export function fillLosses(
   let source = 0;
   let offDrop = 0;
   let insideW = 0;
-  // thermalOnly: a refill of the same point at other temperatures; only temperature-dependent slots change.
-  slotWatts(s, thermalOnly);
+  slotWatts(s);
   for (let i = 0; i < all.length; i++) {
     const slot = all[i]!;
     if (slot === s.driver) continue;

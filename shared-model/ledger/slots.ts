@@ -29,7 +29,8 @@ import { capacitorEsr, type CapacitorEsrInputs } from '../losses/capacitor-esr.t
 import { conduction, type ConductionInputs } from '../losses/conduction.ts';
 import { coreLoss, type CoreLossInputs } from '../losses/core-loss.ts';
 import { deadTime, type DeadTimeInputs } from '../losses/dead-time.ts';
-import { diodeForward, type DiodeForwardInputs } from '../losses/diode-forward.ts';
+import { diodeForward } from '../losses/diode-forward.ts';
+import { diodeForwardCurve, type DiodeCurveInputs } from '../losses/diode-forward-curve.ts';
 import { driverSupply, type DriverSupplyInputs } from '../losses/driver-supply.ts';
 import { gateDrive, type GateDriveInputs } from '../losses/gate-drive.ts';
 import { junctionCapacitance, type JunctionCapacitanceInputs } from '../losses/junction-capacitance.ts';
@@ -93,7 +94,7 @@ export interface Slots {
   rectConduction?: Slot<ConductionInputs>;
   rectGate?: Slot<GateDriveInputs>;
   rectDeadTime?: Slot<DeadTimeInputs>;
-  diodeForward?: Slot<DiodeForwardInputs>;
+  diodeForward?: Slot<DiodeCurveInputs>;
   diodeLeakage?: Slot<ReverseLeakageInputs>;
   windingDc: Slot<WindingDcInputs>;
   windingAc?: Slot<WindingAcInputs>;
@@ -142,7 +143,10 @@ export function slotsOf(design: Design, synchronous: boolean): Slots {
     } else {
       s.swRecovery = at('switch', reverseRecovery, recoveryIn());
     }
-    s.diodeForward = at('rectifier', diodeForward, { vf0V: 0, rdOhm: 0, iavgA: 0, irmsA: 0, temperatureC: 0 });
+    const curves = rect.kind === 'diode' ? rect.vfCurves?.points : undefined;
+    s.diodeForward = at<DiodeCurveInputs>('rectifier', curves ? diodeForwardCurve : diodeForward, {
+      vf0V: 0, rdOhm: 0, iavgA: 0, irmsA: 0, temperatureC: 0, vfCurves: curves, segments: [], periodS: 0, fraction: 0,
+    });
     s.diodeLeakage = at('rectifier', reverseLeakage, {
       leakageA: 0, reverseV: 0, reverseFraction: 0, idleV: 0, idleFraction: 0, temperatureC: 0,
     });
@@ -161,53 +165,52 @@ export function slotsOf(design: Design, synchronous: boolean): Slots {
 }
 
 /**
- * Sets `watts` of every slot but the driver (whose input needs the FETs' gate shares first): all of them,
- * or with `thermalOnly` only those whose mechanism depends on temperature (the others keep their watts).
+ * Sets `watts` of every slot but the driver (whose input needs the FETs' gate shares first).
  * One call site per slot on purpose: each site always calls the same model, so the engine can inline
  * it (a shared call site sees every model, and each of its results would be boxed on the heap); three
  * small functions rather than one, so that each has room to inline its models.
  */
-export function slotWatts(s: Slots, thermalOnly: boolean): void {
-  switchWatts(s, !thermalOnly);
-  rectifierWatts(s, !thermalOnly);
-  passiveWatts(s, !thermalOnly);
+export function slotWatts(s: Slots): void {
+  switchWatts(s);
+  rectifierWatts(s);
+  passiveWatts(s);
 }
 
-function switchWatts(s: Slots, all: boolean): void {
-  if (all || s.swConduction.thermal) s.swConduction.watts = s.swConduction.model.watts(s.swConduction.inputs);
-  if (all || s.swTurnOn.thermal) s.swTurnOn.watts = s.swTurnOn.model.watts(s.swTurnOn.inputs);
-  if (all || s.swTurnOff.thermal) s.swTurnOff.watts = s.swTurnOff.model.watts(s.swTurnOff.inputs);
-  if (all || s.swCoss.thermal) s.swCoss.watts = s.swCoss.model.watts(s.swCoss.inputs);
+function switchWatts(s: Slots): void {
+  s.swConduction.watts = s.swConduction.model.watts(s.swConduction.inputs);
+  s.swTurnOn.watts = s.swTurnOn.model.watts(s.swTurnOn.inputs);
+  s.swTurnOff.watts = s.swTurnOff.model.watts(s.swTurnOff.inputs);
+  s.swCoss.watts = s.swCoss.model.watts(s.swCoss.inputs);
   const a = s.swDeadTime;
-  if (a && (all || a.thermal)) a.watts = a.model.watts(a.inputs);
+  if (a) a.watts = a.model.watts(a.inputs);
   const b = s.swRecovery;
-  if (b && (all || b.thermal)) b.watts = b.model.watts(b.inputs);
+  if (b) b.watts = b.model.watts(b.inputs);
   const c = s.swJunction;
-  if (c && (all || c.thermal)) c.watts = c.model.watts(c.inputs);
-  if (all || s.swGate.thermal) s.swGate.watts = s.swGate.model.watts(s.swGate.inputs);
+  if (c) c.watts = c.model.watts(c.inputs);
+  s.swGate.watts = s.swGate.model.watts(s.swGate.inputs);
 }
 
-function rectifierWatts(s: Slots, all: boolean): void {
+function rectifierWatts(s: Slots): void {
   const d = s.rectConduction;
-  if (d && (all || d.thermal)) d.watts = d.model.watts(d.inputs);
+  if (d) d.watts = d.model.watts(d.inputs);
   const e = s.diodeForward;
-  if (e && (all || e.thermal)) e.watts = e.model.watts(e.inputs);
+  if (e) e.watts = e.model.watts(e.inputs);
   const f = s.rectDeadTime;
-  if (f && (all || f.thermal)) f.watts = f.model.watts(f.inputs);
+  if (f) f.watts = f.model.watts(f.inputs);
   const g = s.diodeLeakage;
-  if (g && (all || g.thermal)) g.watts = g.model.watts(g.inputs);
+  if (g) g.watts = g.model.watts(g.inputs);
   const h = s.rectGate;
-  if (h && (all || h.thermal)) h.watts = h.model.watts(h.inputs);
+  if (h) h.watts = h.model.watts(h.inputs);
 }
 
-function passiveWatts(s: Slots, all: boolean): void {
-  if (all || s.windingDc.thermal) s.windingDc.watts = s.windingDc.model.watts(s.windingDc.inputs);
+function passiveWatts(s: Slots): void {
+  s.windingDc.watts = s.windingDc.model.watts(s.windingDc.inputs);
   const w = s.windingAc;
-  if (w && (all || w.thermal)) w.watts = w.model.watts(w.inputs);
-  if (all || s.core.thermal) s.core.watts = s.core.model.watts(s.core.inputs);
-  if (all || s.inputEsr.thermal) s.inputEsr.watts = s.inputEsr.model.watts(s.inputEsr.inputs);
-  if (all || s.outputEsr.thermal) s.outputEsr.watts = s.outputEsr.model.watts(s.outputEsr.inputs);
+  if (w) w.watts = w.model.watts(w.inputs);
+  s.core.watts = s.core.model.watts(s.core.inputs);
+  s.inputEsr.watts = s.inputEsr.model.watts(s.inputEsr.inputs);
+  s.outputEsr.watts = s.outputEsr.model.watts(s.outputEsr.inputs);
   const r = s.sense;
-  if (r && (all || r.thermal)) r.watts = r.model.watts(r.inputs);
-  if (all || s.quiescent.thermal) s.quiescent.watts = s.quiescent.model.watts(s.quiescent.inputs);
+  if (r) r.watts = r.model.watts(r.inputs);
+  s.quiescent.watts = s.quiescent.model.watts(s.quiescent.inputs);
 }

@@ -25,6 +25,7 @@ export const capacitorEsr: LossModel<CapacitorEsrInputs> = {
   drop: true,
   formula: 'ESR(T) · Irms² / n',
   watts: (x) => nonNegativeFinite((x.esrOhm * x.irmsA * x.irmsA) / x.count),
+  sensitivity: (x) => nonNegativeFinite((x.irmsA * x.irmsA) / x.count), // ∂P/∂ESR
   describe: (x) => [
     input('Irms (bank)', x.irmsA, 'A'),
     input('ESR(T)', x.esrOhm, 'Ω'),

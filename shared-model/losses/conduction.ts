@@ -27,6 +27,7 @@ export const conduction: LossModel<ConductionInputs> = {
   drop: true,
   formula: 'Irms² · RDS(on)(Tj)',
   watts: (x) => nonNegativeFinite(x.irmsA * x.irmsA * x.resistanceOhm),
+  sensitivity: (x) => nonNegativeFinite(x.irmsA * x.irmsA), // ∂P/∂RDS(on)
   describe: (x) => [
     input('Irms', x.irmsA, 'A'),
     input('RDS(on)(Tj)', x.resistanceOhm, 'Ω'),

@@ -25,6 +25,7 @@ export const diodeForward: LossModel<DiodeForwardInputs> = {
   drop: true,
   formula: 'Vf0(Tj) · Iavg + Rd · Irms²',
   watts: (x) => nonNegativeFinite(x.vf0V * x.iavgA + x.rdOhm * x.irmsA * x.irmsA),
+  sensitivity: (x) => nonNegativeFinite(x.iavgA), // ∂P/∂Vf0
   describe: (x) => [
     input('Vf0(Tj)', x.vf0V, 'V'),
     input('Rd', x.rdOhm, 'Ω'),

@@ -32,6 +32,12 @@ export interface LossModel<I> {
   /** Short formula in plain text, as it appears in the ledger. */
   formula: string;
   watts(inputs: I): number;
+  /**
+   * Thermal models only: ∂watts/∂(the one input that follows the part's temperature — RDS(on), Vf0, IR,
+   * DCR, ESR or R — with the others held), finite and ≥ 0. The electro-thermal loop multiplies it by that
+   * law's exact slope (physics/temperature-slopes.ts) to get ∂P/∂T (ledger/kernel-slopes.ts).
+   */
+  sensitivity?(inputs: I): number;
   /** The inputs (and derived intermediate values) the formula used, in SI units. */
   describe(inputs: I): LossInput[];
 }

@@ -31,6 +31,8 @@ export const reverseLeakage: LossModel<ReverseLeakageInputs> = {
     nonNegativeFinite(
       x.leakageA * (nonNegativeFinite(x.reverseV) * x.reverseFraction + nonNegativeFinite(x.idleV) * x.idleFraction),
     ),
+  // ∂P/∂IR
+  sensitivity: (x) => nonNegativeFinite(nonNegativeFinite(x.reverseV) * x.reverseFraction + nonNegativeFinite(x.idleV) * x.idleFraction),
   describe: (x) => [
     input('IR(Tj)', x.leakageA, 'A'),
     input('VR', x.reverseV, 'V'),

@@ -20,5 +20,6 @@ export const senseResistor: LossModel<SenseResistorInputs> = {
   drop: true,
   formula: 'Irms² · R(T)',
   watts: (x) => nonNegativeFinite(x.irmsA * x.irmsA * x.resistanceOhm),
+  sensitivity: (x) => nonNegativeFinite(x.irmsA * x.irmsA), // ∂P/∂R
   describe: (x) => [input('Irms', x.irmsA, 'A'), input('R(T)', x.resistanceOhm, 'Ω'), input('T', x.temperatureC, '°C')],
 };

@@ -27,6 +27,7 @@ export const windingAc: LossModel<WindingAcInputs> = {
   drop: false,
   formula: 'Iac,rms² · DCR(T) · (F_R − 1)',
   watts: (x) => nonNegativeFinite(x.acRmsA * x.acRmsA * x.dcrOhm * (x.factor - 1)),
+  sensitivity: (x) => nonNegativeFinite(x.acRmsA * x.acRmsA * (x.factor - 1)), // ∂P/∂DCR (F_R held)
   describe: (x) => [
     input('Iac,rms', x.acRmsA, 'A'),
     input('DCR(T)', x.dcrOhm, 'Ω'),

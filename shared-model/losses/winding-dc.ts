@@ -23,5 +23,6 @@ export const windingDc: LossModel<WindingDcInputs> = {
   drop: true,
   formula: 'IL,rms² · DCR(T)',
   watts: (x) => nonNegativeFinite(x.irmsA * x.irmsA * x.dcrOhm),
+  sensitivity: (x) => nonNegativeFinite(x.irmsA * x.irmsA), // ∂P/∂DCR
   describe: (x) => [input('IL,rms', x.irmsA, 'A'), input('DCR(T)', x.dcrOhm, 'Ω'), input('T', x.temperatureC, '°C')],
 };

@@ -17,7 +17,7 @@
  * Sources: docs/methods.md §5 (RDS(on) laws, common practice; physics in Sze & Ng, Baliga [memory]), §8 (IEC
  * 60028 copper, α20 0.00393/K [memory for α]), §6 (VF0 drift and leakage doubling, common practice).
  */
-import type { Capacitor, Diode, Mosfet, RdsPoint, Resistor } from '../design/parts.ts';
+import type { Capacitor, Diode, Mosfet, RdsPoint, RdsTemperatureLaw, Resistor } from '../design/parts.ts';
 
 const KELVIN_OFFSET = 273.15;
 const REFERENCE_C = 25;
@@ -45,17 +45,23 @@ export function rdsOnAt(mosfet: Mosfet, tC: number): number {
       return powerLaw(r25, law.exponent, tC);
     case 'table':
       return r25 * rdsRatioAt(law.points, tC);
-    case 'two-point': {
-      if (law.shape === 'linear') {
-        const span = law.hotC - REFERENCE_C;
-        const alpha = span !== 0 ? (law.hotRatio - 1) / span : 0;
-        return linearClamped(r25, alpha, tC);
-      }
-      const logT = Math.log((law.hotC + KELVIN_OFFSET) / (REFERENCE_C + KELVIN_OFFSET));
-      const k = logT !== 0 && Number.isFinite(logT) ? Math.log(law.hotRatio) / logT : 0;
-      return powerLaw(r25, k, tC);
-    }
+    case 'two-point':
+      return law.shape === 'linear' ? linearClamped(r25, twoPointAlpha(law), tC) : powerLaw(r25, twoPointExponent(law), tC);
   }
+}
+
+type TwoPointLaw = Extract<RdsTemperatureLaw, { law: 'two-point' }>;
+
+/** α of the linear law through R(hotC) = hotRatio · R25, 1/K (0 for a degenerate point). */
+export function twoPointAlpha(law: TwoPointLaw): number {
+  const span = law.hotC - REFERENCE_C;
+  return span !== 0 ? (law.hotRatio - 1) / span : 0;
+}
+
+/** k of the power law through R(hotC) = hotRatio · R25 (0 for a degenerate point). */
+export function twoPointExponent(law: TwoPointLaw): number {
+  const logT = Math.log((law.hotC + KELVIN_OFFSET) / (REFERENCE_C + KELVIN_OFFSET));
+  return logT !== 0 && Number.isFinite(logT) ? Math.log(law.hotRatio) / logT : 0;
 }
 
 /** RDS(on)(T)/RDS(on)(25 °C) from a normalised curve: straight lines between points, ends held. */

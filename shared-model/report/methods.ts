@@ -133,9 +133,14 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
   {
     id: 'diode-forward',
     title: 'Diode forward conduction',
-    formula: 'P = Vf0(Tj) · Iavg + Rd · Irms², Vf0(Tj) = Vf0 + (dVf0/dT) · (Tj − 25 °C).',
+    formula:
+      'P = Vf0(Tj) · Iavg + Rd · Irms², Vf0(Tj) = Vf0 + (dVf0/dT) · (Tj − 25 °C); with the datasheet\'s VF(IF, Tj) curves, ' +
+      'P = (1/Ts) · ∫ VF(i, Tj) · i dt over the rectifier current, exact over straight lines between the points and between the curves\' temperatures.',
     source: `WattLedger methods §6; ${EM}, ch. 3 (from memory).`,
-    limits: ['The straight-line forward model holds over the current range; Rd does not change with temperature.'],
+    limits: [
+      'The straight-line forward model holds over the current range; Rd does not change with temperature.',
+      'Curves: beyond a curve\'s last point VF follows its last segment, outside the curves\' temperatures the nearest curve is used (a warning says so); the duty solver sees the curve\'s tangent at the rated load current.',
+    ],
   },
   {
     id: 'junction-capacitance',
@@ -270,6 +275,22 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
       'quantiles by Hyndman & Fan type 7.',
     source: 'Hyndman & Fan, The American Statistician 50(4), 1996; Matsumoto & Nishimura, ACM TOMACS 8(1), 1998 (from memory for the volume).',
     limits: ['Corners bound a result only where it changes monotonically with each tolerance; default spreads are common practice, not datasheet values.'],
+  },
+  {
+    id: 'design-checks',
+    title: 'Sizing and design checks',
+    formula:
+      'The design evaluated at rated load at Vin min, nominal and max (and, for a boost, Vin = Vout/2); from those solved points the inductance for ' +
+      'the ripple target, the output capacitance and ESR for the ripple target, the ratings after derating, the duty range, the compensating ramp ' +
+      'm2/2 and the crossover limit min(fs/10, fz/5). Each check holds a value at its worst regulated corner against its limit: pass, warn ' +
+      '(between the derated and the full rating, or guidance) or fail.',
+    source: `${EM}, ch. 2, 3 and 8 (from memory for chapter numbers); Ridley, IEEE Trans. Power Electronics 6(2), 1991 (from memory); WattLedger methods §23, §24.`,
+    limits: [
+      'Corners at rated load only; light-load and transient stresses are not checked.',
+      'ESL, ringing and voltage spikes are not modelled: measure them.',
+      'Slope compensation and crossover are guidance for a loop design, not a loop design; the controller\'s own ramp is not known.',
+      'Derating rules (80 % current, 20–40 % ripple, fs/10, fz/5) are common practice, not standards.',
+    ],
   },
 ];
 

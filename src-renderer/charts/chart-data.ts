@@ -4,8 +4,17 @@
  * types here: the results screens build these records without knowing the charting library.
  */
 
-/** A colour chosen from the theme: a series slot (0…11) or a named role of the palette. */
-export type Tone = number | 'accent' | 'danger' | 'caution' | 'muted' | 'text' | 'focus';
+/**
+ * A colour chosen from the theme: a series slot (0…11), a named role of the palette, or a part's own
+ * hue (the same on every chart) with a shade, 0 (the hue itself) to 1 (the chart surface).
+ */
+export type Tone = number | 'accent' | 'danger' | 'caution' | 'muted' | 'text' | 'focus' | PartTone;
+
+export interface PartTone {
+  /** A part role of the design ("switch", "inductor"…). */
+  part: string;
+  shade?: number;
+}
 
 export interface AxisSpec {
   /** Axis title without the unit ("Load current"). */
@@ -15,6 +24,8 @@ export interface AxisSpec {
   scale?: 'linear' | 'log';
   min?: number;
   max?: number;
+  /** Values that always get a labelled tick on a log axis (the rated load). */
+  marks?: readonly number[];
 }
 
 export interface LineSeries {

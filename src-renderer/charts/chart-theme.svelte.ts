@@ -4,9 +4,12 @@
  * changes, so every chart re-reads its colours and redraws in place.
  */
 import './chart-palette.css';
-import type { Tone } from './chart-data.ts';
+import type { PartTone, Tone } from './chart-data.ts';
 
 export const SERIES_SLOTS = 12;
+
+/** The part roles with a hue of their own (chart-palette.css --part-<role>). */
+const PART_HUES = ['switch', 'rectifier', 'inductor', 'inputCapacitor', 'outputCapacitor', 'senseResistor', 'controller'] as const;
 
 export interface ChartPalette {
   surface: string;
@@ -14,7 +17,8 @@ export interface ChartPalette {
   muted: string;
   grid: string;
   series: string[];
-  named: Record<Exclude<Tone, number>, string>;
+  named: Record<Exclude<Tone, number | PartTone>, string>;
+  parts: Record<string, string>;
   heat: { low: string; mid: string; high: string; missing: string };
 }
 
@@ -49,6 +53,7 @@ export function readPalette(): ChartPalette {
       text: v('--text', '#1b1f24'),
       focus: v('--focus', '#1b5fc1'),
     },
+    parts: Object.fromEntries(PART_HUES.map((role) => [role, v(`--part-${role}`, '#1f5fa8')])),
     heat: { low: v('--heat-low', '#e9f1f8'), mid: v('--heat-mid', '#6fa6c9'), high: v('--heat-high', '#1b3d6b'), missing: v('--heat-missing', '#c9cfd6') },
   };
 }
@@ -62,7 +67,20 @@ export function currentPalette(version: number): ChartPalette {
 }
 
 export function toneColour(palette: ChartPalette, tone: Tone): string {
-  return typeof tone === 'number' ? palette.series[((tone % SERIES_SLOTS) + SERIES_SLOTS) % SERIES_SLOTS] : palette.named[tone];
+  if (typeof tone === 'number') return palette.series[((tone % SERIES_SLOTS) + SERIES_SLOTS) % SERIES_SLOTS];
+  if (typeof tone === 'string') return palette.named[tone];
+  return mixColours(palette.parts[tone.part] ?? palette.named.muted, palette.surface, tone.shade ?? 0);
+}
+
+/** `a` moved towards `b` by t (0…1), per sRGB channel, from #rrggbb; anything else returns `a`. */
+export function mixColours(a: string, b: string, t: number): string {
+  const pa = /^#([0-9a-f]{6})$/i.exec(a);
+  const pb = /^#([0-9a-f]{6})$/i.exec(b);
+  if (!pa || !pb || t <= 0) return a;
+  const na = parseInt(pa[1], 16);
+  const nb = parseInt(pb[1], 16);
+  const channel = (shift: number) => Math.round(((na >> shift) & 255) * (1 - t) + ((nb >> shift) & 255) * t);
+  return `#${((channel(16) << 16) | (channel(8) << 8) | channel(0)).toString(16).padStart(6, '0')}`;
 }
 
 /** The colour with an alpha (for fills), from #rrggbb. */

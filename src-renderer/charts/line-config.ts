@@ -5,9 +5,9 @@
 import type { ChartConfiguration, TooltipItem } from 'chart.js';
 import type { AxisSpec, LineMarker, LineSeries, PointMarker } from './chart-data.ts';
 import { axisTitle, formatValue } from './chart-format.ts';
-import { baseOptions, numericScale, surfacePlugin } from './chart-kit.ts';
+import { baseOptions, largestOf, numericScale, surfacePlugin } from './chart-kit.ts';
 import { toneColour, withAlpha, type ChartPalette } from './chart-theme.svelte.ts';
-import { along, edgeShift, labelRows } from './label-rows.ts';
+import { markerLabelsPlugin, type MarkerLabelOptions } from './marker-labels.ts';
 
 export interface LineChartData {
   x: AxisSpec;
@@ -22,42 +22,9 @@ export interface LineChartData {
 
 function annotations(data: LineChartData, palette: ChartPalette): Record<string, object> {
   const out: Record<string, object> = {};
-  const xs = data.xValues;
-  const lo = data.x.min ?? Math.min(...xs);
-  const hi = data.x.max ?? Math.max(...xs);
-  const vertical = (data.markers ?? []).filter((m) => m.axis === 'x');
-  const spots = vertical.map((m) => along(m.value, lo, hi, data.x.scale === 'log'));
-  const rows = labelRows(spots);
-  // Horizontal markers close in value take turns along the line (left, middle, right).
-  const horizontal = (data.markers ?? []).filter((m) => m.axis === 'y');
-  const ys = [...data.series.flatMap((s) => s.values.filter((v): v is number => v !== null)), ...horizontal.map((m) => m.value)];
-  const yLo = data.y.min ?? Math.min(...ys);
-  const yHi = data.y.max ?? Math.max(...ys);
-  const lanes = labelRows(horizontal.map((m) => along(m.value, yLo, yHi, data.y.scale === 'log')), 0.08);
-  const LANE = ['start', 'center', 'end'] as const;
   (data.markers ?? []).forEach((m) => {
-    const colour = toneColour(palette, m.tone);
-    const row = m.axis === 'x' ? rows[vertical.indexOf(m)] : lanes[horizontal.indexOf(m)];
     const span = m.axis === 'x' ? { xMin: m.value, xMax: m.value } : { yMin: m.value, yMax: m.value };
-    out[`line-${m.key}`] = {
-      type: 'line',
-      ...span,
-      borderColor: colour,
-      borderWidth: 1.4,
-      borderDash: m.dashed ? [5, 4] : undefined,
-      label: {
-        display: m.label !== '',
-        content: m.label,
-        position: m.axis === 'x' ? 'end' : LANE[row % 3],
-        backgroundColor: withAlpha(palette.surface, 0.85),
-        color: colour,
-        font: { size: 10, weight: 'bold' },
-        padding: 2,
-        yAdjust: m.axis === 'x' ? 2 + 15 * row : 0,
-        // Near either end of the x axis the label sits beside its line instead of across the edge.
-        xAdjust: m.axis === 'x' ? edgeShift(spots[vertical.indexOf(m)], m.label) : 0,
-      },
-    };
+    out[`line-${m.key}`] = { type: 'line', ...span, borderColor: toneColour(palette, m.tone), borderWidth: 1.4, borderDash: m.dashed ? [5, 4] : undefined };
   });
   (data.points ?? []).forEach((p) => {
     const colour = toneColour(palette, p.tone);
@@ -66,15 +33,34 @@ function annotations(data: LineChartData, palette: ChartPalette): Record<string,
   return out;
 }
 
+/** The marker labels, placed clear of each other and of the points after layout (marker-labels.ts). */
+function markerLabels(data: LineChartData, palette: ChartPalette): MarkerLabelOptions {
+  return {
+    labels: (data.markers ?? []).filter((m) => m.label !== '').map((m) => ({ axis: m.axis, value: m.value, text: m.label, colour: toneColour(palette, m.tone) })),
+    points: (data.points ?? []).map((p) => ({ x: p.x, y: p.y })),
+    halo: withAlpha(palette.surface, 0.85),
+  };
+}
+
+/** The largest magnitude the y axis shows: the top of the stack, or every series and horizontal marker. */
+function yLargest(data: LineChartData): number {
+  const marks = (data.markers ?? []).filter((m) => m.axis === 'y').map((m) => m.value);
+  if (!data.stacked) return largestOf(marks, ...data.series.map((s) => s.values));
+  const tops = data.xValues.map((_, i) => data.series.reduce((sum, s) => sum + (s.values[i] ?? 0), 0));
+  return largestOf(tops, marks);
+}
+
 export function lineConfig(data: LineChartData, palette: ChartPalette): ChartConfiguration<'line'> {
   const datasets = data.series.map((s) => {
     const colour = toneColour(palette, s.tone);
+    // A stacked band of a part is outlined in the part's own hue, so shades of one part stay apart.
+    const edge = data.stacked && typeof s.tone === 'object' ? toneColour(palette, { part: s.tone.part }) : colour;
     return {
       label: s.label,
       data: data.xValues.map((x, i) => ({ x, y: s.values[i] ?? null })) as { x: number; y: number }[],
-      borderColor: colour,
-      backgroundColor: data.stacked ? withAlpha(colour, 0.55) : colour,
-      borderWidth: s.thin ? 1 : 2,
+      borderColor: edge,
+      backgroundColor: data.stacked ? withAlpha(colour, 0.8) : colour,
+      borderWidth: s.thin || data.stacked ? 1 : 2,
       borderDash: s.dashed ? [6, 4] : [],
       pointRadius: 0,
       pointHoverRadius: 3,
@@ -87,13 +73,13 @@ export function lineConfig(data: LineChartData, palette: ChartPalette): ChartCon
   return {
     type: 'line',
     data: { datasets },
-    plugins: [surfacePlugin],
+    plugins: [surfacePlugin, markerLabelsPlugin],
     options: {
       ...base,
       parsing: false,
       scales: {
-        x: numericScale(data.x, palette),
-        y: numericScale(data.y, palette, data.stacked ? { stacked: true, beginAtZero: true } : { grace: '8%' }),
+        x: numericScale(data.x, palette, largestOf(data.xValues)),
+        y: numericScale(data.y, palette, yLargest(data), data.stacked ? { stacked: true, beginAtZero: true } : { grace: '8%' }),
       },
       plugins: {
         ...base.plugins,
@@ -106,6 +92,7 @@ export function lineConfig(data: LineChartData, palette: ChartPalette): ChartCon
           },
         },
         annotation: { annotations: annotations(data, palette) },
+        wattledgerMarkerLabels: markerLabels(data, palette),
       },
     },
   } as ChartConfiguration<'line'>;

@@ -63,6 +63,19 @@ export function createBrowserFileAccess(): FileAccess {
     async save(request) {
       return download(request.suggestedName, new Blob([request.text], { type: 'application/json' }));
     },
+    async openLibrary() {
+      const file = await pickFile();
+      return file ? readFile(file) : null;
+    },
+    async openRecentLibrary(path) {
+      return { error: `A browser cannot reopen ${path} by its path; open the file again.` };
+    },
+    async listRecentLibraries() {
+      return [];
+    },
+    async saveLibrary(request) {
+      return download(request.suggestedName, new Blob([request.text], { type: 'application/json' }));
+    },
     async exportFile(request) {
       return download(request.suggestedName, exportBlob(request));
     },

@@ -27,6 +27,12 @@ export interface FileAccess {
   openSpreadsheet(): Promise<OpenedFile | null>;
   /** Saves to request.path (Electron, atomically) or asks / downloads. */
   save(request: SaveRequest): Promise<SaveOutcome>;
+  /** Part library files: open with a dialog (browser: a file input), reopen a recent one, save (browser: a download). */
+  openLibrary(): Promise<OpenedFile | null>;
+  openRecentLibrary(path: string): Promise<OpenedFile | { error: string }>;
+  /** Recently used library files, newest first (always empty in a browser, which cannot reopen a path). */
+  listRecentLibraries(): Promise<string[]>;
+  saveLibrary(request: SaveRequest): Promise<SaveOutcome>;
   exportFile(request: ExportRequest): Promise<SaveOutcome>;
   readRecovery(): Promise<RecoverySnapshot | null>;
   writeRecovery(text: string): Promise<void>;
@@ -44,6 +50,10 @@ export function createFileAccess(): FileAccess {
     open: () => api.openDesign(),
     openSpreadsheet: () => api.openSpreadsheet(),
     save: (request) => api.saveDesign(request),
+    openLibrary: () => api.openLibrary(),
+    openRecentLibrary: (path) => api.openRecentLibrary(path),
+    listRecentLibraries: () => api.listRecentLibraries(),
+    saveLibrary: (request) => api.saveLibrary(request),
     exportFile: (request) => api.exportFile(request),
     readRecovery: () => api.readRecovery(),
     writeRecovery: (text) => api.writeRecovery(text),

@@ -104,24 +104,72 @@ export function efficiencyCurves(
   return { xValues, series, markers, points, note };
 }
 
-/** Loss against load, one stacked series per mechanism or per part, largest at the heaviest load first. */
+/** A mechanism below this share of the total loss at every load joins its part's "other" band. */
+export const SMALL_SHARE = 0.02;
+
+interface Band {
+  key: string;
+  part: Role;
+  mechanism: string;
+  label: string;
+  values: number[];
+}
+
+const lastOf = (values: readonly number[]) => values[values.length - 1] ?? 0;
+
+/**
+ * Loss against load as stacked bands. By part: one band per part. By mechanism: one band per part and
+ * mechanism, grouped by part (largest part at the heaviest load at the bottom), each part in its own
+ * hue and its mechanisms in shades of it; the mechanisms of a part that stay below SMALL_SHARE of the
+ * total loss at every load are one band "other (…)" naming them.
+ */
 export function lossStack(sweep: LoadSweep, by: 'mechanism' | 'part', labelOf: (role: Role) => string): CurveChart {
-  const groups = new Map<string, { label: string; columns: number[] }>();
+  const sum = (columns: readonly number[]) => sweep.points.map((p) => columns.reduce((s, i) => s + (p.losses[i] ?? 0), 0));
+  const byPart = new Map<Role, Map<string, number[]>>();
   sweep.columns.losses.forEach((col, i) => {
-    const key = by === 'part' ? col.part : col.mechanism;
-    const group = groups.get(key) ?? { label: by === 'part' ? labelOf(col.part) : col.mechanism, columns: [] };
-    group.columns.push(i);
-    groups.set(key, group);
+    const mechanisms = byPart.get(col.part) ?? new Map<string, number[]>();
+    mechanisms.set(col.mechanism, [...(mechanisms.get(col.mechanism) ?? []), i]);
+    byPart.set(col.part, mechanisms);
   });
-  const last = sweep.points[sweep.points.length - 1];
-  const ordered = [...groups.entries()]
-    .map(([key, g]) => ({ key, label: g.label, values: sweep.points.map((p) => g.columns.reduce((s, i) => s + (p.losses[i] ?? 0), 0)) }))
-    .filter((g) => g.values.some((v) => v > 0))
-    .sort((a, b) => (last ? b.values[b.values.length - 1] - a.values[a.values.length - 1] : 0));
-  return {
-    xValues: sweep.points.map((p) => p.loadA),
-    series: ordered.map((g, k) => ({ key: g.key, label: g.label, values: g.values, tone: k })),
-    markers: [],
-    points: [],
-  };
+  const small = (values: readonly number[]) => values.every((v, i) => v < SMALL_SHARE * sweep.points[i].totalLoss);
+  const parts = [...byPart.entries()]
+    .map(([part, mechanisms]) => {
+      const bands: Band[] = [...mechanisms.entries()]
+        .map(([mechanism, columns]) => ({ key: `${part}:${mechanism}`, part, label: `${labelOf(part)}: ${mechanism}`, mechanism, values: sum(columns) }))
+        .filter((b) => b.values.some((v) => v > 0))
+        .sort((a, b) => lastOf(b.values) - lastOf(a.values));
+      const minor = bands.filter((b) => small(b.values));
+      const kept: Band[] = minor.length > 1 ? bands.filter((b) => !minor.includes(b)) : bands;
+      if (minor.length > 1)
+        kept.push({
+          key: `${part}:other`,
+          part,
+          mechanism: 'other',
+          label: `${labelOf(part)}: other (${minor.map((b) => b.mechanism).join(', ')})`,
+          values: sweep.points.map((_, i) => minor.reduce((s, b) => s + b.values[i], 0)),
+        });
+      return { part, bands: kept, total: sum([...mechanisms.values()].flat()) };
+    })
+    .filter((p) => p.bands.length > 0)
+    .sort((a, b) => lastOf(b.total) - lastOf(a.total));
+  const series: LineSeries[] =
+    by === 'part'
+      ? parts.map((p) => ({ key: p.part, label: labelOf(p.part), values: p.total, tone: { part: p.part } }))
+      : parts.flatMap((p) => p.bands.map((b, k) => ({ key: b.key, label: b.label, values: b.values, tone: { part: p.part, shade: p.bands.length > 1 ? (0.6 * k) / (p.bands.length - 1) : 0 } })));
+  return { xValues: sweep.points.map((p) => p.loadA), series, markers: [], points: [] };
+}
+
+/** Points (percentage points) below the peak that the "near the peak" efficiency axis shows. */
+export const NEAR_PEAK_POINTS = 20;
+
+/**
+ * The lower end of the efficiency axis: none (fit to the curve) for the whole curve; near the peak,
+ * NEAR_PEAK_POINTS below the highest efficiency plotted, rounded down to a whole percent, never below 0.
+ */
+export function efficiencyFloor(series: readonly LineSeries[], range: 'whole' | 'near-peak'): number | undefined {
+  if (range === 'whole') return undefined;
+  let peak = -Infinity;
+  for (const s of series) for (const v of s.values) if (v !== null && v > peak) peak = v;
+  if (!Number.isFinite(peak)) return undefined;
+  return Math.max(0, Math.floor((peak - NEAR_PEAK_POINTS / 100) * 100) / 100);
 }

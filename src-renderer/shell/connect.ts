@@ -1,6 +1,6 @@
 /**
  * Wires the shell to the outside: keyboard shortcuts (browser build), menu commands and files opened
- * from outside (Electron), dropped files, recovery snapshots and the offer to restore them, the system
+ * from outside (Electron), dropped files (a part library opens beside the others), recovery snapshots and the offer to restore them, the system
  * theme, and the browser's own leave-page warning while there are unsaved changes.
  * Returns one function that undoes all of it.
  */
@@ -34,8 +34,8 @@ export function connectShell(ws: Workspace, isMac: boolean, onDragState: (draggi
     listenForDroppedFiles(async (file) => {
       const opened = await readFile(file);
       if (isLibraryFile(opened.text)) {
-        const result = ws.library.importText(opened.text, opened.name);
-        if (result.ok) ws.messages.success(result.message, result.details);
+        const result = ws.library.openText(opened.text, opened);
+        if (result.ok) ws.messages.success(result.message);
         else ws.messages.error(result.message, result.details);
         ws.screen = 'library';
         return;

@@ -2,7 +2,7 @@
  * Design edits that touch several fields at once, each recorded as one undo step: rectifier and
  * sense-resistor switches, picking a part from the library, heatsinks.
  */
-import { partInRole, ROLE_LABELS } from '../../shared-model/index.ts';
+import { partInRole, ROLE_LABELS, takeLibraryPart, unlinkPart, updateFromLibrary } from '../../shared-model/index.ts';
 import type { Design, Heatsink, Part, Role, ThermalPath } from '../../shared-model/index.ts';
 import { uniqueId } from './library-data.ts';
 import { stashRemoved, withRectifier, withSenseLocation } from './topology-edits.ts';
@@ -32,7 +32,7 @@ export function setRectifier(ws: Workspace, rectifier: Design['topology']['recti
   try {
     const { design, removed } = withRectifier(ws.doc.design, rectifier, ws.stash, ws.library.parts);
     ws.stash = stashRemoved(ws.stash, removed);
-    ws.doc.commit(design, rectifier === 'synchronous' ? 'Use a synchronous rectifier' : 'Use a diode rectifier');
+    ws.doc.commit(unlinkPart(design, 'rectifier'), rectifier === 'synchronous' ? 'Use a synchronous rectifier' : 'Use a diode rectifier');
   } catch (error) {
     ws.messages.error((error as Error).message);
   }
@@ -53,27 +53,47 @@ export function setSenseLocation(ws: Workspace, location: Design['topology']['se
   try {
     const { design, removed } = withSenseLocation(ws.doc.design, location, ws.stash, ws.library.parts);
     ws.stash = stashRemoved(ws.stash, removed);
-    ws.doc.commit(design, 'Move the current-sense resistor');
+    ws.doc.commit(location === 'none' ? unlinkPart(design, 'senseResistor') : design, 'Move the current-sense resistor');
   } catch (error) {
     ws.messages.error((error as Error).message);
   }
 }
 
-/** Copies a library part into the design for `role`. */
-export function usePart(ws: Workspace, role: Role, partId: string): void {
-  const part = ws.library.find(partId);
-  if (!part) return;
+/** The picker's value for part `partId` of library `libraryId` (library ids never hold "/"). */
+export function choiceValue(libraryId: string, partId: string): string {
+  return `${libraryId}/${partId}`;
+}
+
+/** Copies a library part into the design for `role` and links the role to it (engine takeLibraryPart); `choice` from choiceValue. */
+export function usePart(ws: Workspace, role: Role, choice: string): void {
+  const cut = choice.indexOf('/');
+  const library = ws.library.book(choice.slice(0, cut))?.library;
+  const part = library?.parts.find((p) => p.id === choice.slice(cut + 1));
+  if (!library || !part) return;
   const design = ws.doc.design;
   if (part.kind !== kindForRole(design, role)) {
     ws.messages.error(`${part.name} is a ${part.kind} and cannot be the ${ROLE_LABELS[role].toLowerCase()}.`);
     return;
   }
-  const copy = structuredClone(part);
-  const parts =
-    role === 'inputCapacitor' || role === 'outputCapacitor'
-      ? { ...design.parts, [role]: { ...design.parts[role], part: copy } }
-      : { ...design.parts, [role]: copy };
-  ws.doc.commit({ ...design, parts } as Design, `Use ${part.name} as ${ROLE_LABELS[role].toLowerCase()}`);
+  const linked = takeLibraryPart(design, role, library, part.id);
+  if (linked) ws.doc.commit(linked, `Use ${part.name} from “${library.name}” as ${ROLE_LABELS[role].toLowerCase()}`);
+}
+
+/** Replaces the linked part of `role` by its library entry's current values (one undo step). */
+export function updatePartFromLibrary(ws: Workspace, role: Role): void {
+  const source = ws.doc.design.sources?.[role];
+  const library = source ? ws.library.book(source.libraryId)?.library : undefined;
+  const updated = library ? updateFromLibrary(ws.doc.design, role, library) : undefined;
+  if (!library || !updated) {
+    ws.messages.error(`The ${ROLE_LABELS[role].toLowerCase()} cannot be updated: its library entry is not open.`);
+    return;
+  }
+  ws.doc.commit(updated, `Update the ${ROLE_LABELS[role].toLowerCase()} from “${library.name}”`);
+}
+
+/** Forgets where the part of `role` came from; its values stay (one undo step). */
+export function unlinkRole(ws: Workspace, role: Role): void {
+  ws.doc.commit(unlinkPart(ws.doc.design, role), `Unlink the ${ROLE_LABELS[role].toLowerCase()} from its library`);
 }
 
 export function partPath(role: Role): string[] {

@@ -53,22 +53,25 @@ export function readLibraryText(text: string, fileName: string): LibraryRead {
   return { ok: true, parts, skipped };
 }
 
-/** The library as a parts-library document (shared-model/design/parts-library.ts). */
-export function libraryFileText(parts: readonly Part[]): string {
-  const file: PartsLibrary = {
-    format: LIBRARY_FORMAT,
-    version: LIBRARY_VERSION,
-    id: 'my-wattledger-parts',
-    name: 'My WattLedger parts',
-    notes: 'Exported from the WattLedger part library. Parts marked invented describe no real product.',
-    parts: [...parts],
-  };
+/** The app's own library (kept in this app's storage): its id, name and notes; designs link to it by this id. */
+export const APP_LIBRARY: PartsLibrary = {
+  format: LIBRARY_FORMAT,
+  version: LIBRARY_VERSION,
+  id: 'my-wattledger-parts',
+  name: 'My WattLedger parts',
+  notes: 'Exported from the WattLedger part library. Parts marked invented describe no real product.',
+  parts: [],
+};
+
+/** The parts as a parts-library document (shared-model/design/parts-library.ts), under the app library's id and name unless `header` gives others. */
+export function libraryFileText(parts: readonly Part[], header: Pick<PartsLibrary, 'id' | 'name' | 'notes'> = APP_LIBRARY): string {
+  const file: PartsLibrary = { ...APP_LIBRARY, id: header.id, name: header.name, notes: header.notes, parts: [...parts] };
   return `${JSON.stringify(file, null, 2)}\n`;
 }
 
-/** The ids of `parts`. */
-export function idsOf(parts: readonly Part[]): ReadonlySet<string> {
-  return new Set(parts.map((p) => p.id));
+/** The ids of `items` (parts or libraries). */
+export function idsOf(items: readonly { id: string }[]): ReadonlySet<string> {
+  return new Set(items.map((p) => p.id));
 }
 
 /** An id not yet used in `taken`: base, base-2, base-3, ... (the engine's freeId, shared with the import). */

@@ -3,10 +3,11 @@
  * loss ledger — every watt by part and mechanism, temperatures, heatsinks, burn hazards, rating checks,
  * warnings. JSON: the engine's Evaluation record unchanged at the top level (efficiency, inputPower,
  * outputPower, totalLoss, dutyCycle, conductionMode, losses, temperatures, hazards, warnings, converged,
- * ...) plus command, design, designNotices and cautions (README.md, "evaluate"). A point with no
+ * ...) plus command, design, designChecks (the design checks of `size`, at the design's own corners),
+ * designNotices and cautions (README.md, "evaluate"). A point with no
  * steady state (thermal runaway) exits 0 with converged false and a warning naming the part.
  */
-import { evaluateDesign, phaseSummary } from '../../../shared-model/index.ts';
+import { evaluateDesign, phaseSummary, reviewDesign } from '../../../shared-model/index.ts';
 import { CAUTIONS } from '../cautions.ts';
 import type { Command } from '../command.ts';
 import { loadDesign } from '../design-file.ts';
@@ -33,10 +34,12 @@ export const evaluateCommand: Command = {
     if (!overridesFit(loaded.design, overrides, io, 'wattledger evaluate')) return EXIT.usage;
     const { evaluation: result, phased } = evaluateDesign(loaded.design, overrides);
     if (args.switches.has('json')) {
+      // The design checks are the design's own (its corners at rated load), whatever point was asked for.
+      const designChecks = reviewDesign(loaded.design).checks;
       const record = {
         command: 'evaluate', design: loaded.design.name, ...result,
         ...(phased ? { phases: phaseSummary(phased) } : {}),
-        designNotices: loaded.notices, cautions: CAUTIONS,
+        designChecks, designNotices: loaded.notices, cautions: CAUTIONS,
       };
       io.out(JSON.stringify(record, null, 2));
     } else io.out(renderEvaluation(loaded.design, result, loaded.notices));

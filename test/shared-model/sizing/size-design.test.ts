@@ -4,24 +4,12 @@
  * differ from it exactly as its efficiency does. Sources on each check line.
  */
 import { describe, expect, test } from 'vitest';
-import type { Design } from '../../../shared-model/index.ts';
 import { chargeAboveMean, cornerVoltages, evaluate, handSizing, sizeDesign } from '../../../shared-model/index.ts';
 import { closeTo } from '../../helpers/close-to.ts';
 import { makeDesign, type DesignSketch } from '../../helpers/designs.ts';
+import { nearIdealDesign } from '../../helpers/near-ideal.ts';
 
-/** Losses pushed to the bottom of every range (the sizing must then meet the ideal formulas). */
-function nearIdeal(sketch: DesignSketch): Design {
-  const d = makeDesign({ ...sketch, rectifier: 'synchronous', switchOhm: 1e-5, rectifierOhm: 1e-5, dcr20Ohm: 1e-5, outputEsrOhm: 0, inputEsrOhm: 0 });
-  d.topology.deadTimeBeforeOnS = 0;
-  d.topology.deadTimeAfterOffS = 0;
-  for (const fet of [d.parts.switch, d.parts.rectifier]) {
-    if (fet.kind !== 'mosfet') continue;
-    Object.assign(fet, { qgC: 1e-11, qgs2C: 1e-12, qgdC: 1e-12, bodyDiodeQrrC: 0, outputCapacitance: { kind: 'capacitance', cossF: 0, atV: 12 } });
-  }
-  d.parts.inductor.coreLoss = { kind: 'steinmetz', k: 1e-6, alpha: 1.4, beta: 2.7 };
-  d.parts.controller.quiescentA = 0;
-  return d;
-}
+const nearIdeal = nearIdealDesign;
 
 const seedSketch: DesignSketch = { kind: 'boost', rectifier: 'diode', vinV: 5, voutV: 12, loadA: 2, fsHz: 120e3, inductanceH: 15.4e-6, outputCapacitanceF: 100e-6, senseLocation: 'switch', senseOhm: 0.01 };
 

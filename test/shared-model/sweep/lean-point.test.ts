@@ -131,7 +131,7 @@ describe('the parts of the lean path', () => {
     for (const d of designs) {
       const s = ledgerContext(d).slots;
       for (const slot of s.all) slot.watts = NaN;
-      slotWatts(s, false);
+      slotWatts(s);
       const missed = s.all.filter((slot) => slot !== s.driver && Number.isNaN(slot.watts)).map((slot) => `${slot.role}/${slot.model.mechanism}`);
       expect(missed).toEqual([]); // every loss model returns a finite number for any finite input (losses/model.ts): NaN means the slot was skipped
     }

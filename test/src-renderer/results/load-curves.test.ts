@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { findLandmarks, sweepLoad } from '../../../shared-model/index.ts';
-import { efficiencyCurves, lossStack } from '../../../src-renderer/results/load-curves.ts';
-import { temperatureCurves } from '../../../src-renderer/results/temperature-curves.ts';
+import { efficiencyCurves, efficiencyFloor, lossStack } from '../../../src-renderer/results/load-curves.ts';
+import { SHORT_ROLE, temperatureCurves } from '../../../src-renderer/results/temperature-curves.ts';
 import { closeTo } from '../../helpers/close-to.ts';
 import { labelOf } from './demo.ts';
 import { demoDesign } from '../../helpers/demo.ts';
@@ -39,5 +39,23 @@ describe('load-curve chart data of the demo design', () => {
     expect(one.markers.find((m) => m.key === 'derated')?.value).toBe(column?.deratedLimitC); // engine column: limit less the design margin
     const touch = sweep.columns.hazards.find((h) => h.part === 'switch');
     expect(one.markers.find((m) => m.key === 'touch')?.value).toBe(touch?.limitC); // engine column: touch limit of the surface
+  });
+
+  it('names the owner of every limit line when every part is shown', () => {
+    const all = temperatureCurves(sweep, landmarks, null, labelOf);
+    for (const c of sweep.columns.temperatures) {
+      const line = all.markers.find((m) => m.axis === 'y' && m.value === c.deratedLimitC && !m.dashed);
+      expect(line?.label, c.part).toContain(SHORT_ROLE[c.part]); // issue 16 §4: each limit says whose it is (engine column: limit less the design margin)
+    }
+    for (const h of sweep.columns.hazards) {
+      const line = all.markers.find((m) => m.axis === 'y' && m.value === h.limitC && m.dashed);
+      expect(line?.label, h.part).toContain(SHORT_ROLE[h.part]); // issue 16 §4: each touch limit names its surface's part (engine hazard column)
+    }
+  });
+
+  it('zooms the efficiency axis to 20 points below the highest efficiency plotted', () => {
+    const series = [{ key: 'e', label: 'e', values: [0.5, 0.93, 0.9551, null], tone: 0 }];
+    expect(efficiencyFloor(series, 'whole')).toBeUndefined(); // the whole curve: Chart.js fits the axis to the data
+    closeTo(efficiencyFloor(series, 'near-peak') ?? NaN, 0.75, 1e-12); // 95.51 % − 20 points = 75.51 %, rounded down to 75 % (our rule)
   });
 });

@@ -3,22 +3,20 @@
  * unsaved mark describes the file on disk, and a read-only file leads to Save As.
  */
 import { describe, expect, it } from 'vitest';
-import type { OpenedFile, SaveOutcome, SaveRequest } from '../../../shared-model/index.ts';
+import type { SaveOutcome, SaveRequest } from '../../../shared-model/index.ts';
 import type { FileAccess } from '../../../src-renderer/desktop/file-access.ts';
 import { saveDesign } from '../../../src-renderer/state/file-actions.ts';
 import { Workspace } from '../../../src-renderer/state/workspace.svelte.ts';
 import { demoDesign, demoParts } from '../../helpers/demo.ts';
+import { stubFiles } from '../../helpers/stub-files.ts';
 
 /** A desktop adapter whose saves finish only when the test says so, newest first if it could. */
 function slowFiles(): FileAccess & { requests: SaveRequest[]; finish(index: number, outcome?: SaveOutcome): void; inFlight: number; maxInFlight: number } {
   const pending: ((outcome: SaveOutcome) => void)[] = [];
-  const files = {
-    kind: 'electron' as const,
+  const files = stubFiles({
     requests: [] as SaveRequest[],
     inFlight: 0,
     maxInFlight: 0,
-    open: async (): Promise<OpenedFile | null> => null,
-    openSpreadsheet: async (): Promise<OpenedFile | null> => null,
     save(request: SaveRequest): Promise<SaveOutcome> {
       files.requests.push(request);
       files.inFlight += 1;
@@ -31,14 +29,7 @@ function slowFiles(): FileAccess & { requests: SaveRequest[]; finish(index: numb
     finish(index: number, outcome: SaveOutcome = { ok: true, path: '/d/buck.json', name: 'buck.json' }) {
       pending[index]?.(outcome);
     },
-    exportFile: async (): Promise<SaveOutcome> => ({ ok: false, cancelled: true, message: '' }),
-    readRecovery: async () => null,
-    writeRecovery: async () => undefined,
-    clearRecovery: async () => undefined,
-    setDocumentState: () => undefined,
-    onMenuCommand: () => () => undefined,
-    onOpenFile: () => () => undefined,
-  };
+  });
   return files;
 }
 
