@@ -23,7 +23,7 @@ import { burnHazards, touchPicks, type TouchPick } from './hazards.ts';
 import { ratingChecks } from './checks.ts';
 import { modelNotes, runawayWarning } from './notes.ts';
 import { pulseSkippingNotes } from '../light-load/notes.ts';
-import type { PointSummary } from './point-view.ts';
+import type { PointSummary } from '../operating-point/lean-point.ts';
 import type { PartTemperature } from './types.ts';
 import type { Keeper } from './keep.ts';
 
