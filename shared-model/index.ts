@@ -23,6 +23,20 @@ export type { NumberRange } from './design/number-range.ts';
 export { inRange, rangeText } from './design/number-range.ts';
 export type { ConditionKey, ConditionOverrides, FieldRange } from './design/overrides.ts';
 export { checkConditionOverrides, CONDITION_RANGES } from './design/overrides.ts';
+export {
+  CONDITION_LABELS,
+  CONTACT_LABEL,
+  designFieldLabel,
+  HEATSINK_LABELS,
+  IDENTITY_LABELS,
+  MARGIN_LABELS,
+  PULSE_SKIPPING_LABELS,
+  SPEC_LABELS,
+  TARGET_LABELS,
+  THERMAL_PATH_LABELS,
+  TOPOLOGY_LABELS,
+} from './design/field-labels.ts';
+export { pathMessage } from './design/labelled-problems.ts';
 
 export type { DesignValidation } from './design/validate.ts';
 export { validateDesign } from './design/validate.ts';
@@ -219,6 +233,16 @@ export type { SizingOptions } from './sizing/size-design.ts';
 export { sizeDesign, sizeFromCorners } from './sizing/size-design.ts';
 export type { HandInput, HandSizing } from './sizing/hand-method.ts';
 export { handSizing } from './sizing/hand-method.ts';
+
+// --- mission profile (issue 11 §4) ---
+export type { MissionProfile, MissionRow } from './mission/schema.ts';
+export { MAX_MISSION_ROWS, missionProfileSchema } from './mission/schema.ts';
+export type { WeightingId, WeightingSet } from './mission/weightings.ts';
+export { profileFromWeighting, ratedPointProfile, WEIGHTING_SETS, weightingSet } from './mission/weightings.ts';
+export { FRACTION_SUM_TOLERANCE } from './mission/rules.ts';
+export type * from './mission/types.ts';
+export type { MissionOptions } from './mission/evaluate-mission.ts';
+export { evaluateMission } from './mission/evaluate-mission.ts';
 
 // --- design checks: the chosen parts and the targets against the sizing ---
 export type * from './design-checks/types.ts';

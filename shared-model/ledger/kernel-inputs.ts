@@ -149,6 +149,9 @@ export function fillRectifierInputs(ctx: LedgerContext, op: PointView, T: Float6
     f.iavgA = op.stats.rectifier.averageA;
     f.irmsA = op.stats.rectifier.rmsA;
     f.temperatureC = tR;
+    f.segments = op.waveforms.inductor.segments;
+    f.periodS = op.periodS;
+    f.fraction = op.rectifierFraction;
     const l = s.diodeLeakage!.inputs;
     l.leakageA = leakageAt(rect, tR);
     l.reverseV = op.stress.rectifierV;

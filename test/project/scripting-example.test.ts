@@ -1,6 +1,6 @@
 /**
  * The engine as a package for scripts (issue 17 §3): the README's example, examples/sweep-folder.js,
- * runs as a real Node process against the built package entry (`import … from 'wattledger'` resolves to
+ * runs as a real Node process (and so does the evaluate example of docs/scripting.md) against the built package entry (`import … from 'wattledger'` resolves to
  * out/lib/wattledger.js through package.json "exports"), and a strict TypeScript consumer type-checks
  * against the published declarations.
  */
@@ -11,7 +11,7 @@ import nodePath from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { promisify } from 'node:util';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_DESIGNS, readCsv, sweepLoad, validateDesign } from '../../shared-model/index.ts';
+import { DEMO_DESIGNS, evaluate, readCsv, sweepLoad, validateDesign } from '../../shared-model/index.ts';
 
 const run = promisify(execFile);
 const ROOT = nodePath.resolve(import.meta.dirname, '../..');
@@ -61,6 +61,18 @@ describe('scripting with the engine package', () => {
     await run(process.execPath, ['readme-example.js'], { cwd: folder });
     const table = readCsv(await nodeFs.readFile(nodePath.join(folder, 'sweeps.csv'), 'utf8'));
     expect(table.rows).toHaveLength(61); // header + 3 demos × 20 points
+  });
+
+  it("docs/scripting.md's evaluate example runs as printed and prints the engine's efficiency", async () => {
+    const page = await nodeFs.readFile(nodePath.join(ROOT, 'docs', 'scripting.md'), 'utf8');
+    const code = /## Evaluate one design[\s\S]*?```js\n([\s\S]*?)```/.exec(page)?.[1];
+    expect(code).toBeDefined();
+    const file = nodePath.join(work, 'evaluate-example.js');
+    await nodeFs.writeFile(file, code ?? '');
+    const { stdout } = await run(process.execPath, [file], { cwd: ROOT });
+    const checked = validateDesign(DEMO_DESIGNS.find((d) => d.id === 'synchronous-buck')?.json);
+    if (!checked.ok) throw new Error('demo invalid');
+    expect(Number(stdout.split(' ')[0])).toBe(evaluate(checked.design).efficiency); // the built package against the sources
   });
 
   it('a bad design in the folder is reported by field and the script exits 1', async () => {

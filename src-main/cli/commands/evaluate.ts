@@ -3,10 +3,11 @@
  * loss ledger — every watt by part and mechanism, temperatures, heatsinks, burn hazards, rating checks,
  * warnings. JSON: the engine's Evaluation record unchanged at the top level (efficiency, inputPower,
  * outputPower, totalLoss, dutyCycle, conductionMode, losses, temperatures, hazards, warnings, converged,
- * ...) plus command, design, designNotices and cautions (README.md, "evaluate"). A point with no
+ * ...) plus command, design, designChecks (the design checks of `size`, at the design's own corners),
+ * designNotices and cautions (README.md, "evaluate"). A point with no
  * steady state (thermal runaway) exits 0 with converged false and a warning naming the part.
  */
-import { evaluate } from '../../../shared-model/index.ts';
+import { evaluate, reviewDesign } from '../../../shared-model/index.ts';
 import { CAUTIONS } from '../cautions.ts';
 import type { Command } from '../command.ts';
 import { loadDesign } from '../design-file.ts';
@@ -30,7 +31,9 @@ export const evaluateCommand: Command = {
     if (!overridesFit(loaded.design, overrides, io, 'wattledger evaluate')) return EXIT.usage;
     const result = evaluate(loaded.design, overrides);
     if (args.switches.has('json')) {
-      const record = { command: 'evaluate', design: loaded.design.name, ...result, designNotices: loaded.notices, cautions: CAUTIONS };
+      // The design checks are the design's own (its corners at rated load), whatever point was asked for.
+      const designChecks = reviewDesign(loaded.design).checks;
+      const record = { command: 'evaluate', design: loaded.design.name, ...result, designChecks, designNotices: loaded.notices, cautions: CAUTIONS };
       io.out(JSON.stringify(record, null, 2));
     } else io.out(renderEvaluation(loaded.design, result, loaded.notices));
     return EXIT.ok;
