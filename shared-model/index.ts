@@ -23,6 +23,20 @@ export type { NumberRange } from './design/number-range.ts';
 export { inRange, rangeText } from './design/number-range.ts';
 export type { ConditionKey, ConditionOverrides, FieldRange } from './design/overrides.ts';
 export { checkConditionOverrides, CONDITION_RANGES } from './design/overrides.ts';
+export {
+  CONDITION_LABELS,
+  CONTACT_LABEL,
+  designFieldLabel,
+  HEATSINK_LABELS,
+  IDENTITY_LABELS,
+  MARGIN_LABELS,
+  PULSE_SKIPPING_LABELS,
+  SPEC_LABELS,
+  TARGET_LABELS,
+  THERMAL_PATH_LABELS,
+  TOPOLOGY_LABELS,
+} from './design/field-labels.ts';
+export { pathMessage } from './design/labelled-problems.ts';
 
 export type { DesignValidation } from './design/validate.ts';
 export { validateDesign } from './design/validate.ts';
