@@ -181,10 +181,8 @@ export type {
   ComparisonOutcome,
 } from './compare/compare-parts.ts';
 export { compareParts } from './compare/compare-parts.ts';
-export type { RoleStress } from './compare/role-fit.ts';
-export { DEFAULT_CURRENT_DERATING, ratingShortfalls, stressOf } from './compare/role-fit.ts';
-export type { RankCriterion, RankedPart, RankOptions, Ranking, RejectedPart } from './compare/rank-parts.ts';
-export { RANK_CRITERIA, rankParts } from './compare/rank-parts.ts';
+export type { RatingLimit, RoleStress } from './compare/role-fit.ts';
+export { DEFAULT_CURRENT_DERATING, ratingLimits, ratingShortfalls, stressOf } from './compare/role-fit.ts';
 export type { RandomSource } from './tolerance/prng.ts';
 export { createRandom, isValidSeed, MT19937_DEFAULT_SEED } from './tolerance/prng.ts';
 export type { SampleHistogram, SampleSummary } from './tolerance/statistics.ts';
@@ -250,6 +248,11 @@ export { FRACTION_SUM_TOLERANCE } from './mission/rules.ts';
 export type * from './mission/types.ts';
 export type { MissionOptions } from './mission/evaluate-mission.ts';
 export { evaluateMission } from './mission/evaluate-mission.ts';
+
+// --- the library ranked for a role (issue 11 §3) ---
+export type * from './ranking/types.ts';
+export { RANK_SCORES } from './ranking/types.ts';
+export { assembleRanking, checkRankOptions, DEFAULT_RANK_SCORE, judgeChunk, libraryChunks, rankLibrary } from './ranking/rank-library.ts';
 
 // --- design checks: the chosen parts and the targets against the sizing ---
 export type * from './design-checks/types.ts';
