@@ -107,6 +107,10 @@ export const mosfetSchema = z.object({
   thetaJcKPerW: q('thetaPartKPerW'),
 });
 
+/** One point of a diode's forward curve at one junction temperature: VF at IF and Tj. */
+export const vfPointSchema = z.object({ tjC: q('statedC'), ifA: q('curveA'), vfV: q('curveForwardV') });
+export type VfPoint = z.infer<typeof vfPointSchema>;
+
 export const diodeSchema = z.object({
   kind: z.literal('diode'),
   ...partIdentity,
@@ -115,6 +119,15 @@ export const diodeSchema = z.object({
   rdOhm: q('seriesOhm'),
   /** dVF0/dT, usually negative (about −1 to −2 mV/K). */
   vfTempCoVPerK: q('vfTempCoVPerK'),
+  /** The datasheet's VF(IF) curves at two or more junction temperatures (curves/forward-table.ts). */
+  vfCurves: z
+    .object({
+      points: z.array(vfPointSchema).min(4).max(CURVE_POINTS.max),
+    })
+    .optional()
+    .describe(
+      'Forward curves VF(IF) digitised from the datasheet at two or more junction temperatures, 4 to 200 points: rows grouped by Tj (Tj never falling), each curve with at least 2 points, IF strictly rising and VF never falling within a curve. When given, the forward-drop loss is (1/T)·∫VF(i, Tj)·i dt over the rectifier current, straight lines in IF and in Tj between the curves; vf0V, rdOhm and vfTempCoVPerK are then not used for that loss. Beyond the last point of a curve VF follows its last segment; outside the temperatures the nearest curve is held (the result warns).',
+    ),
   /** Reverse-recovery charge (PN diodes). */
   qrrC: q('recoveryChargeC'),
   /** Forward current at which qrrC is stated; Qrr is scaled by IF / this. Rated load current when absent. */

@@ -89,6 +89,39 @@ function mosfet(doc: unknown, role: string, out: Problem[]): void {
       `${p}.rdsTemperatureLaw.hotC (${inUnit(hot, 'hotC')}) must be above 25 °C: it is the hot datasheet point compared with RDS(on) at 25 °C.`));
 }
 
+/**
+ * A diode's VF(IF, Tj) table: rows grouped by Tj (never falling), at least two temperatures, each curve at
+ * least two points with IF strictly rising and VF never falling (a junction's forward current grows with
+ * its voltage: Sze & Ng, Physics of Semiconductor Devices, 3rd ed., §2.3 [memory]).
+ */
+function forwardCurves(doc: unknown, p: string, out: Problem[]): void {
+  const points = at(doc, p);
+  if (!Array.isArray(points)) return;
+  const t = points.map((point) => num(point, 'tjC') ?? Number.NaN);
+  const x = points.map((point) => num(point, 'ifA') ?? Number.NaN);
+  const y = points.map((point) => num(point, 'vfV') ?? Number.NaN);
+  if ([...t, ...x, ...y].some((v) => !Number.isFinite(v))) return; // the schema reports these
+  const pt = (k: number) => `(${inUnit(t[k]!, 'tjC')}, ${inUnit(x[k]!, 'ifA')}, ${inUnit(y[k]!, 'vfV')})`;
+  const say = (i: number, key: string, value: number, allowed: string, reason: string): void => {
+    out.push(problem(`${p}[${i}].${key}`, value, allowed, `Point ${i + 1} ${pt(i)}${i > 0 ? ` after ${pt(i - 1)}` : ''} of the VF(IF, Tj) table ${p}: ${reason}.`));
+  };
+  let start = 0;
+  let curves = 0;
+  for (let i = 1; i <= points.length; i++) {
+    if (i < points.length && t[i] === t[start]) {
+      if (!(x[i]! > x[i - 1]!)) return say(i, 'ifA', x[i]!, `ifA > ${inUnit(x[i - 1]!, 'ifA')}`, `within one temperature each point must lie at a higher IF than the one before it (sort each curve's rows by IF)`);
+      if (y[i]! < y[i - 1]!) return say(i, 'vfV', y[i]!, `vfV ≥ ${inUnit(y[i - 1]!, 'vfV')}`, `VF must not fall as IF rises (the forward current of a junction grows with its voltage; check the columns are Tj, IF then VF)`);
+      continue;
+    }
+    // A curve ends at i − 1.
+    if (i - start < 2) return say(start, 'tjC', t[start]!, 'at least 2 points at each Tj', `the curve at ${inUnit(t[start]!, 'tjC')} has a single point; each temperature needs at least two (IF, VF) points`);
+    curves++;
+    if (i < points.length && t[i]! < t[start]!) return say(i, 'tjC', t[i]!, `tjC ≥ ${inUnit(t[start]!, 'tjC')}`, `the rows must be grouped by Tj from the coldest curve to the hottest`);
+    start = i;
+  }
+  if (curves < 2) out.push(problem(p, `${points.length} points`, 'curves at 2 or more Tj', `The VF(IF, Tj) table ${p} has one temperature only (${inUnit(t[0]!, 'tjC')}); give the datasheet curves at two or more junction temperatures.`));
+}
+
 function inductor(doc: unknown, out: Problem[]): void {
   const p = 'parts.inductor';
   const l = num(doc, `${p}.inductanceH`);
@@ -146,6 +179,7 @@ export function partRules(doc: unknown): Problem[] {
   const out: Problem[] = [];
   mosfet(doc, 'switch', out);
   if (str(doc, 'parts.rectifier.kind') === 'mosfet') mosfet(doc, 'rectifier', out);
+  if (str(doc, 'parts.rectifier.kind') === 'diode') forwardCurves(doc, 'parts.rectifier.vfCurves.points', out);
   inductor(doc, out);
   resistorAndController(doc, out);
   limitsAboveAmbient(doc, out);

@@ -70,6 +70,8 @@ export class LiveResults {
   loadScale: 'log' | 'linear' = $state('log');
   kneeThresholdPoints = $state(DEFAULT_KNEE_THRESHOLD_POINTS);
   vinFamily = $state(false);
+  /** The efficiency axis: the whole curve, or zoomed to the points near the peak. */
+  efficiencyRange: 'whole' | 'near-peak' = $state('whole');
   stackBy: 'mechanism' | 'part' = $state('mechanism');
   temperaturePart: Role | null = $state(null);
   gridAxis: GridAxis = $state('vin');
