@@ -79,9 +79,10 @@ describe('editing the design', () => {
       await expect(field(page, 'spec.voutV').getAttribute('aria-invalid')).resolves.toBe('true');
       await expect(page.getByTestId('stale-note').isVisible()).resolves.toBe(true);
       await expectTableOf(page, demoDesign()); // still the last valid design
-      // Typed key by key, "2" is a valid design on the way to "20": the results follow each keystroke.
+      // Typed key by key, "2" is only a preview on the way to "20" (issue 16 §3): it never enters the
+      // document, so with "20" invalid the results show the last valid design, not Vout = 2 V.
       await typeInto(page, 'spec.voutV', '20');
-      await expectTableOf(page, { ...demoDesign(), spec: { ...demoDesign().spec, voutV: 2 } });
+      await expectTableOf(page, demoDesign());
       await app.screenshot('design-invalid');
       // The problem list moves the focus to the field.
       await page.getByRole('button', { name: note }).click();
