@@ -3,7 +3,7 @@
  * component only renders and the numbers can be checked against the engine in tests. Values are the
  * engine's own numbers; nothing is recomputed here except the share of a rating.
  */
-import type { Design, OperatingPoint } from '../../shared-model/index.ts';
+import { CONDITION_LABELS, type Design, type OperatingPoint } from '../../shared-model/index.ts';
 
 export interface OperatingPointRow {
   /** Stable key for tests and the data table ("inductor.rmsA"). */
@@ -26,9 +26,9 @@ export function operatingPointRows(op: OperatingPoint, design: Design): Operatin
   const vUse = design.margins.voltageDerating;
   const rippleUse = design.margins.rippleCurrentDerating;
 
-  add('Conditions', 'conditions.vinV', 'Input voltage', op.conditions.vinV, 'V');
-  add('Conditions', 'conditions.loadA', 'Load current', op.conditions.loadA, 'A');
-  add('Conditions', 'conditions.switchingFrequencyHz', 'Switching frequency', op.conditions.switchingFrequencyHz, 'Hz');
+  add('Conditions', 'conditions.vinV', CONDITION_LABELS.vinV, op.conditions.vinV, 'V');
+  add('Conditions', 'conditions.loadA', CONDITION_LABELS.loadA, op.conditions.loadA, 'A');
+  add('Conditions', 'conditions.switchingFrequencyHz', CONDITION_LABELS.switchingFrequencyHz, op.conditions.switchingFrequencyHz, 'Hz');
   add('Conditions', 'voutV', 'Output voltage', op.voutV, 'V');
   add('Conditions', 'outputPowerW', 'Output power', op.outputPowerW, 'W');
   add('Timing', 'dutyCycle', 'Duty cycle', op.dutyCycle, '%');
