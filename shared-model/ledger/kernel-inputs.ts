@@ -6,7 +6,7 @@
  */
 import type { Mosfet } from '../design/parts.ts';
 import type { ConductionParameters } from '../operating-point/types.ts';
-import type { PointView } from './point-view.ts';
+import type { PointView } from '../operating-point/lean-point.ts';
 import { esrAt, leakageAt } from '../physics/temperature-laws.ts';
 import { eossAt, qossAt } from '../losses/output-capacitance.ts';
 import { dowellRippleFactor } from '../losses/dowell.ts';

@@ -24,7 +24,7 @@ import { ratingChecks } from './checks.ts';
 import { modelNotes, runawayWarning } from './notes.ts';
 import { curveNotes } from '../curves/notes.ts';
 import { pulseSkippingNotes } from '../light-load/notes.ts';
-import type { PointSummary } from './point-view.ts';
+import type { PointSummary } from '../operating-point/lean-point.ts';
 import type { PartTemperature } from './types.ts';
 import type { Keeper } from './keep.ts';
 
