@@ -15,6 +15,7 @@ import { thermalRules } from './rules-thermal.ts';
 import { validityRules } from './rules-validity.ts';
 import { missionRules } from '../mission/rules.ts';
 import { problemsFromZod } from './zod-problems.ts';
+import { labelProblems } from './labelled-problems.ts';
 
 export type DesignValidation =
   | { ok: true; design: Design; warnings?: DesignNotice[] }
@@ -69,7 +70,7 @@ export function validateDesign(json: unknown): DesignValidation {
   const problems = parsed.success ? [] : problemsFromZod(parsed.error.issues, designSchema, doc);
   const refused = parsed.success ? [] : parsed.error.issues.map((issue) => issue.path);
   problems.push(...crossFieldProblems(withoutRefused(doc, refused)));
-  if (problems.length > 0 || !parsed.success) return { ok: false, problems: unique(problems) };
+  if (problems.length > 0 || !parsed.success) return { ok: false, problems: labelProblems(unique(problems), doc) };
   const warnings = [...migrated.notes, ...ignoredKeys(doc, parsed.data), ...designNotices(parsed.data)];
   return warnings.length > 0 ? { ok: true, design: parsed.data, warnings } : { ok: true, design: parsed.data };
 }

@@ -38,7 +38,7 @@ export function evaluateMission(design: Design, options: MissionOptions = {}): M
   let energyIn = 0;
   let energyOut = 0;
   let loss = 0;
-  let worstTouch: number | null = null;
+  let worstTouch: MissionResult['worstTouch'] = null;
   profile.rows.forEach((row, index) => {
     const conditions = conditionsFor(design, { vinV: row.vinV, loadA: row.loadA, ...(row.ambientC === undefined ? {} : { ambientC: row.ambientC }) });
     // The lean record is refilled by the next call: everything is read from it here.
@@ -62,7 +62,9 @@ export function evaluateMission(design: Design, options: MissionOptions = {}): M
       }
       temps.set(t.part, acc);
     }
-    for (const h of e.hazards) if (worstTouch === null || h.marginK < worstTouch) worstTouch = h.marginK;
+    for (const h of e.hazards) {
+      if (worstTouch === null || h.marginK < worstTouch.marginK) worstTouch = { part: h.part, marginK: h.marginK, limitC: h.row.limitC, row: index };
+    }
     const usable = isUsablePoint(e);
     rows.push({
       label: row.label ?? `row ${index + 1}`,
@@ -105,7 +107,7 @@ export function evaluateMission(design: Design, options: MissionOptions = {}): M
     energyLostPerDayWh,
     battery: profile.batteryWh === undefined ? null : { capacityWh: profile.batteryWh, shareLostPerDay: energyLostPerDayWh / profile.batteryWh },
     temperatures: [...temps.values()],
-    worstTouchMarginK: worstTouch,
+    worstTouch,
     usable: rows.every((r) => r.usable),
   };
 }

@@ -54,8 +54,8 @@ export interface MissionResult {
   /** With a battery capacity: the share of it the converter wastes per day (energyLostPerDayWh / capacity). */
   battery: { capacityWh: number; shareLostPerDay: number } | null;
   temperatures: MissionPartTemperature[];
-  /** The smallest touch margin over rows and touchable parts, K (null: nothing touchable). */
-  worstTouchMarginK: number | null;
+  /** The smallest touch margin over rows and touchable parts (null: nothing touchable): the part, its margin, K, the limit applied, °C, and the row. */
+  worstTouch: { part: Role; marginK: number; limitC: number; row: number } | null;
   /** Every row regulated and converged: only then do the weighted figures describe the design. */
   usable: boolean;
 }

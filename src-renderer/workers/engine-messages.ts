@@ -17,8 +17,8 @@ import type {
   MonteCarlo,
   MonteCarloOptions,
   OptionProblem,
-  Ranking,
-  RankOptions,
+  PartVerdict,
+  RankLibraryOptions,
   ReportInput,
   ReportModel,
   SweepFamilies,
@@ -41,7 +41,8 @@ export interface EngineJobs {
   grid: { input: { design: Design; options?: Plain<GridOptions> }; output: LoadGrid };
   figures: { input: { design: Design }; output: FiguresOfMerit };
   compare: { input: { design: Design; options: Plain<CompareOptions> }; output: Comparison };
-  rank: { input: { design: Design; options: Plain<RankOptions> }; output: Ranking };
+  /** Library parts [from, to) judged for a role; the pool assembles the chunks (ranking/rank-library.ts). */
+  'rank-chunk': { input: { design: Design; options: Plain<RankLibraryOptions>; from: number; to: number }; output: PartVerdict[] };
   'worst-case': { input: { design: Design; options?: Plain<WorstCaseOptions> }; output: WorstCase };
   'monte-carlo': { input: { design: Design; options: Plain<MonteCarloOptions> }; output: MonteCarlo };
   /** The review report's model (a few hundred electro-thermal evaluations). */

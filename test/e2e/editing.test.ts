@@ -4,7 +4,7 @@
  * edit (buttons and keyboard), and the unsaved marker follows the saved state.
  */
 import { describe, expect, it } from 'vitest';
-import { validateDesign } from '../../shared-model/index.ts';
+import { findLandmarks, sweepLoad, validateDesign } from '../../shared-model/index.ts';
 import type { Design } from '../../shared-model/index.ts';
 import { closeTo } from '../helpers/close-to.ts';
 import { field, fieldNote, pasteInto, readOperatingPoint, typeInto, valueAtKey } from './helpers/app-page.ts';
@@ -46,6 +46,26 @@ describe('editing the design', () => {
       const edited: Design = { ...demoDesign(), spec: { ...demoDesign().spec, loadKind: 'resistive' } };
       await expectTableOf(page, edited); // engine in Node, the same design
       expect(await readOperatingPoint(page)).not.toEqual(before); // a resistor takes part of the output ripple current
+    }));
+
+  it('offers pulse skipping at light load: its two parameters appear, the results and the mode-change landmark follow, one undo step', () =>
+    suite.run(async (app) => {
+      const { page } = app;
+      expect(demoDesign().topology.lightLoad).not.toBe('pulse-skipping');
+      await expect(field(page, 'topology.pulseSkipping.minPeakCurrentA').count()).resolves.toBe(0); // no parameters before the choice
+      await field(page, 'topology.lightLoad').selectOption('pulse-skipping');
+      await expect(field(page, 'topology.pulseSkipping.minPeakCurrentA').inputValue()).resolves.toBe('500 mA'); // the starting values the choice brings
+      const edited = validateDesign({ ...demoDesign(), topology: { ...demoDesign().topology, lightLoad: 'pulse-skipping', pulseSkipping: { minPeakCurrentA: 0.5, sleepCurrentA: 20e-6 } } });
+      if (!edited.ok) throw new Error(edited.problems.map((p) => p.message).join(' '));
+      await expectTableOf(page, edited.design); // engine in Node, the same design
+      await page.waitForFunction(() => document.querySelector('[data-testid="results"]')?.getAttribute('data-settled') === 'true', null, { timeout: 60_000 });
+      const mark = page.locator('[data-testid="landmarks"] [data-landmark="pulseSkipping"]');
+      const shown = Number(await mark.getAttribute('data-load'));
+      const expected = findLandmarks(sweepLoad(edited.design, { spacing: 'log', conditions: { vinV: edited.design.spec.vinNomV } }), { design: edited.design }).pulseSkipping.load;
+      closeTo(shown, expected ?? NaN, 1e-6, 0, { shown }); // engine findLandmarks in Node: the mode-change load Q·fs (docs/methods.md §14)
+      await page.getByRole('button', { name: 'Undo' }).click();
+      await expect(field(page, 'topology.lightLoad').inputValue()).resolves.toBe(demoDesign().topology.lightLoad); // one step back
+      await expect(field(page, 'topology.pulseSkipping.minPeakCurrentA').count()).resolves.toBe(0);
     }));
 
   it('marks text that is not a number in place and keeps the last valid results', () =>
