@@ -99,7 +99,7 @@ export class LiveResults {
   readonly monteCarlo = new JobSlot<MonteCarlo>();
   readonly comparison = new JobSlot<Comparison>();
 
-  design: Design = $derived(this.#workspace().doc.lastValid);
+  design: Design = $derived(this.#workspace().doc.shown);
   conditions = $derived(conditionsFor(this.design, { loadA: this.#workspace().results.loadA, vinV: this.#workspace().results.vinV }));
   /** The chosen load as a number: charts that mark it redraw only when it moves, not on every edit. */
   chosenLoadA = $derived(this.conditions.loadA);
