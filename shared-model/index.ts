@@ -22,6 +22,20 @@ export type { NumberRange } from './design/number-range.ts';
 export { inRange, rangeText } from './design/number-range.ts';
 export type { ConditionKey, ConditionOverrides, FieldRange } from './design/overrides.ts';
 export { checkConditionOverrides, CONDITION_RANGES } from './design/overrides.ts';
+export {
+  CONDITION_LABELS,
+  CONTACT_LABEL,
+  designFieldLabel,
+  HEATSINK_LABELS,
+  IDENTITY_LABELS,
+  MARGIN_LABELS,
+  PULSE_SKIPPING_LABELS,
+  SPEC_LABELS,
+  TARGET_LABELS,
+  THERMAL_PATH_LABELS,
+  TOPOLOGY_LABELS,
+} from './design/field-labels.ts';
+export { pathMessage } from './design/labelled-problems.ts';
 
 export type { DesignValidation } from './design/validate.ts';
 export { validateDesign } from './design/validate.ts';
@@ -161,10 +175,8 @@ export type {
   ComparisonOutcome,
 } from './compare/compare-parts.ts';
 export { compareParts } from './compare/compare-parts.ts';
-export type { RoleStress } from './compare/role-fit.ts';
-export { DEFAULT_CURRENT_DERATING, ratingShortfalls, stressOf } from './compare/role-fit.ts';
-export type { RankCriterion, RankedPart, RankOptions, Ranking, RejectedPart } from './compare/rank-parts.ts';
-export { RANK_CRITERIA, rankParts } from './compare/rank-parts.ts';
+export type { RatingLimit, RoleStress } from './compare/role-fit.ts';
+export { DEFAULT_CURRENT_DERATING, ratingLimits, ratingShortfalls, stressOf } from './compare/role-fit.ts';
 export type { RandomSource } from './tolerance/prng.ts';
 export type { SampleHistogram, SampleSummary } from './tolerance/statistics.ts';
 export type { ResolvedTolerances, SpreadKey, ToleranceRange, Tolerances, Variation } from './tolerance/variation.ts';
@@ -186,6 +198,13 @@ export type { PhaseOptions } from './interleave/evaluate-phases.ts';
 export { evaluatePhases } from './interleave/evaluate-phases.ts';
 export { delayWaveform, interleavedSum, sumWaveforms } from './interleave/phase-shift.ts';
 export { phaseCount, phaseDesign, phaseLoads } from './interleave/phase-design.ts';
+export { asEvaluation } from './interleave/as-evaluation.ts';
+export type { PhaseSelection } from './interleave/phase-evaluator.ts';
+export { designPointEvaluator, designSelection, evaluateDesign, optimalPhases, phasedEvaluator } from './interleave/phase-evaluator.ts';
+export type { PhaseSummary, SharedCurrentSummary } from './interleave/summary.ts';
+export { phaseSummary } from './interleave/summary.ts';
+export type { PhaseCurve, PhaseCurvePoint, PhaseShedding, SheddingOptions, ShedLandmark } from './interleave/shedding.ts';
+export { findCrossover, phaseShedding, SHEDDING_DEFINITION, SUGGESTED_HYSTERESIS } from './interleave/shedding.ts';
 
 // --- sizing from the specification ---
 export type * from './sizing/types.ts';
@@ -197,6 +216,23 @@ export type { SizingOptions } from './sizing/size-design.ts';
 export { sizeDesign, sizeFromCorners } from './sizing/size-design.ts';
 export type { HandInput, HandSizing } from './sizing/hand-method.ts';
 export { handSizing } from './sizing/hand-method.ts';
+export type { SizingRow } from './sizing/rows.ts';
+export { sizingRows } from './sizing/rows.ts';
+
+// --- mission profile (issue 11 §4) ---
+export type { MissionProfile, MissionRow } from './mission/schema.ts';
+export { MAX_MISSION_ROWS, missionProfileSchema } from './mission/schema.ts';
+export type { WeightingId, WeightingSet } from './mission/weightings.ts';
+export { profileFromWeighting, ratedPointProfile, WEIGHTING_SETS, weightingSet } from './mission/weightings.ts';
+export { FRACTION_SUM_TOLERANCE } from './mission/rules.ts';
+export type * from './mission/types.ts';
+export type { MissionOptions } from './mission/evaluate-mission.ts';
+export { evaluateMission } from './mission/evaluate-mission.ts';
+
+// --- the library ranked for a role (issue 11 §3) ---
+export type * from './ranking/types.ts';
+export { RANK_SCORES } from './ranking/types.ts';
+export { assembleRanking, checkRankOptions, DEFAULT_RANK_SCORE, judgeChunk, libraryChunks, rankLibrary } from './ranking/rank-library.ts';
 
 // --- design checks: the chosen parts and the targets against the sizing ---
 export type * from './design-checks/types.ts';

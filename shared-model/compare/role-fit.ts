@@ -62,13 +62,19 @@ export function stressOf(evaluations: readonly Evaluation[]): RoleStress {
   return s;
 }
 
-/** Reasons the part does not fit (empty: it fits). */
-export function ratingShortfalls(design: Design, role: Role, part: Part, s: RoleStress, currentDerating = DEFAULT_CURRENT_DERATING): string[] {
+/** One rating of a part against the role's stress: the compared value and its derated limit. */
+export interface RatingLimit {
+  what: string;
+  value: number;
+  limit: number;
+  unit: string;
+}
+
+/** Every rating the part has for the role, each against the stress (value) and its derated limit. */
+export function ratingLimits(design: Design, role: Role, part: Part, s: RoleStress, currentDerating = DEFAULT_CURRENT_DERATING): RatingLimit[] {
   const m = design.margins;
-  const out: string[] = [];
-  const need = (value: number, limit: number, what: string, unit: string) => {
-    if (value > limit) out.push(`${what} ${fmt(value)} ${unit} exceeds the allowed ${fmt(limit)} ${unit}.`);
-  };
+  const out: RatingLimit[] = [];
+  const need = (value: number, limit: number, what: string, unit: string) => out.push({ what, value, limit, unit });
   const [v, pk, avg] = role === 'switch' ? [s.switchV, s.switchPeakA, 0] : [s.rectifierV, s.rectifierPeakA, s.rectifierAverageA];
   switch (part.kind) {
     case 'mosfet':
@@ -99,6 +105,13 @@ export function ratingShortfalls(design: Design, role: Role, part: Part, s: Role
       break;
   }
   return out;
+}
+
+/** Reasons the part does not fit (empty: it fits). */
+export function ratingShortfalls(design: Design, role: Role, part: Part, s: RoleStress, currentDerating = DEFAULT_CURRENT_DERATING): string[] {
+  return ratingLimits(design, role, part, s, currentDerating)
+    .filter((r) => r.value > r.limit)
+    .map((r) => `${r.what} ${fmt(r.value)} ${r.unit} exceeds the allowed ${fmt(r.limit)} ${r.unit}.`);
 }
 
 function fmt(x: number): string {

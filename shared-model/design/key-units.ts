@@ -36,6 +36,7 @@ const SUFFIXES: readonly (readonly [RegExp, string])[] = [
   [/Hz$/, 'Hz'],
   [/Ohm$/, 'Ω'],
   [/Hours$/, 'h'],
+  [/[a-z0-9]Wh$/, 'Wh'],
   [/^q[a-z0-9]*C$|QrrC$/, 'C'],
   [/C$/, '°C'],
   [/[a-z0-9]K$/, 'K'],

@@ -11,7 +11,8 @@
  * added within version 1: absent, they mean one phase, no mismatch and no shedding, exactly the converter
  * an older file described, so they need no migration step (and its canonical text, and hash, are unchanged).
  * The optional `measurements` and `calibration` sections (issue 12) were added within version 1: a document
- * without them is unchanged, so they need no migration step.
+ * without them is unchanged, so they need no migration step; likewise the optional `missionProfile`
+ * (issue 11 §4): a version-1 document without it reads as before and is evaluated at its rated point.
  * Migration does not validate: validateDesign() checks the result. It never modifies its input.
  */
 import { DESIGN_FORMAT, DESIGN_VERSION } from './schema.ts';

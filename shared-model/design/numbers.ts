@@ -48,11 +48,13 @@ export const RANGES = {
   curveV: { min: 0, max: 10_000, why: `Voltage of a point on a datasheet curve, 0 V … 10 kV (${OURS}): curves start at 0 V; no discrete part reaches 10 kV.` },
   gateV: { min: 0.1, max: 30, why: `Gate threshold or plateau, 0.1 V … 30 V (${TRADE}: thresholds of GaN, silicon and SiC parts lie between about 0.5 V and 6 V, gate ratings below 30 V).` },
   driveV: { min: 1, max: 30, why: `Gate-drive voltage, 1 V … 30 V (${TRADE}: logic-level drives from 2.5 V, SiC drives up to 20 V; 30 V leaves margin).` },
+  curveForwardV: { min: 0, max: 10, why: `Forward voltage of a point on a datasheet VF(IF) curve, 0 V … 10 V (${TRADE}: silicon, Schottky and SiC diodes stay below about 5 V at their rated current).` },
   forwardV: { min: 0.05, max: 5, why: `Forward drop, 50 mV … 5 V (${TRADE}: Schottky knees from about 0.15 V, SiC body diodes and GaN reverse conduction up to about 4 V).` },
   rippleTargetV: { min: 1e-6, max: 2000, why: `Output ripple target, 1 µV … 2 kV (${OURS}); it must also be below the output voltage.` },
   // --- currents ---
   loadA: { min: 1e-3, max: 1000, why: `Rated load, 1 mA … 1 kA (${OURS}): from a bias rail of a few mA to multiphase rails of a few hundred A with margin.` },
   ratingA: { min: 1e-3, max: 2000, why: `Current rating or stated-at current, 1 mA … 2 kA (${OURS}): the largest discrete power packages carry a few hundred A.` },
+  curveA: { min: 0, max: 2000, why: `Current of a point on a datasheet curve, 0 A … 2 kA (${OURS}: the ratings' range; curves may start at 0 A).` },
   leakageA: { min: 0, max: 1, why: `Reverse leakage at its stated temperature, 0 … 1 A (${OURS}: large Schottky diodes leak tens of mA when hot).` },
   quiescentA: { min: 0, max: 0.1, why: `Controller quiescent current, 0 … 100 mA (${TRADE}: µA to a few mA).` },
   // --- resistances ---
@@ -124,6 +126,11 @@ export const RANGES = {
   measuredPercent: { min: 0, minExclusive: true, max: 100, maxExclusive: true, why: 'Efficiency in percent, strictly between 0 % and 100 %.' },
   fittedValue: { min: -1e12, max: 1e12, why: `A fitted parameter or its interval bound, in the parameter's own unit (${OURS}: multipliers of order one, currents in A).` },
   lifeHours: { min: 1, max: 1e7, why: `Life in hours, 1 h … 10 million h (${OURS}).` },
+  // --- mission profile (shared-model/mission) ---
+  timeFraction: { min: 0, max: 1, why: 'Share of the operating time spent at a row, 0 … 1 (by definition a fraction; the rows add up to 1).' },
+  missionLoadA: { min: 0, max: 1000, why: `Load of a mission-profile row, 0 (standby) … 1 kA (${OURS}: the rated-load range, from no load up).` },
+  hoursPerDay: { min: 0, minExclusive: true, max: 24, why: `Operating hours per day, above 0 up to 24 (a day has 24 h; refusing 0 is ${OURS}).` },
+  batteryWh: { min: 1e-3, max: 1e6, why: `Battery capacity, 1 mWh … 1 MWh (${OURS}: from a coin cell to a stationary storage bank).` },
 } as const satisfies Record<string, QuantityRange>;
 
 export type QuantityName = keyof typeof RANGES;

@@ -10,7 +10,8 @@
  *      (the result says the converter cannot regulate), so only the validity rules apply, not the order or
  *      direction of the specified inputs. Where a rule refuses, the valid range of the override is found by
  *      bisection between the design's own value (valid) and the override (refused).
- * Every problem names the override (conditions.vinV...), its value and the range that would be valid.
+ * Every problem names the override by its on-screen label and path ("Input voltage (conditions.vinV)"), its
+ * value and the range that would be valid.
  */
 import type { Problem } from './problems.ts';
 import { describeValue, inUnit, problem } from './problems.ts';
@@ -19,6 +20,8 @@ import { inRange, numberRangeOf, rangeText } from './number-range.ts';
 import { unitOfKey } from './key-units.ts';
 import { deadTimeRule } from './rules-spec.ts';
 import { validityRules } from './rules-validity.ts';
+import { labelProblems } from './labelled-problems.ts';
+import { CONDITION_LABELS, designFieldLabel } from './field-labels.ts';
 import type { Design } from './schema.ts';
 import { designSchema } from './schema.ts';
 import { schemaAt, unwrap } from './zod-problems.ts';
@@ -37,6 +40,8 @@ export type ConditionKey = keyof ConditionOverrides;
 export interface FieldRange extends NumberRange {
   /** The design-document field whose range this is, e.g. "spec.vinNomV". */
   field: string;
+  /** The on-screen label of what the range is for ("Input voltage, nominal"; an override: "Input voltage"). */
+  label: string;
   unit: string;
 }
 
@@ -46,15 +51,15 @@ export function designFieldRange(path: string): FieldRange {
   const schema = schemaAt(designSchema, keys, undefined);
   const range = schema ? numberRangeOf(unwrap(schema)) : undefined;
   if (!range) throw new Error(`${path} is not a number field of the design document`);
-  return { ...range, field: path, unit: unitOfKey(keys[keys.length - 1] ?? '') };
+  return { ...range, field: path, label: designFieldLabel(path, undefined) ?? path, unit: unitOfKey(keys[keys.length - 1] ?? '') };
 }
 
 /** The allowed range of each override: its design field's range; a load may also be zero (no load). */
 export const CONDITION_RANGES: Readonly<Record<ConditionKey, FieldRange>> = {
-  vinV: designFieldRange('spec.vinNomV'),
-  loadA: { ...designFieldRange('spec.ratedLoadA'), min: 0, minInclusive: true },
-  switchingFrequencyHz: designFieldRange('spec.switchingFrequencyHz'),
-  ambientC: designFieldRange('spec.ambientC'),
+  vinV: { ...designFieldRange('spec.vinNomV'), label: CONDITION_LABELS.vinV },
+  loadA: { ...designFieldRange('spec.ratedLoadA'), label: CONDITION_LABELS.loadA, min: 0, minInclusive: true },
+  switchingFrequencyHz: { ...designFieldRange('spec.switchingFrequencyHz'), label: CONDITION_LABELS.switchingFrequencyHz },
+  ambientC: { ...designFieldRange('spec.ambientC'), label: CONDITION_LABELS.ambientC },
 };
 
 const KEYS: readonly ConditionKey[] = ['vinV', 'loadA', 'switchingFrequencyHz', 'ambientC'];
@@ -104,6 +109,10 @@ function validityOf(design: Design, key: 'vinV' | 'switchingFrequencyHz', value:
  * frequency in range, the validity rules at that value (each override alone, then together).
  */
 export function checkConditionOverrides(design: Design, o: ConditionOverrides): Problem[] {
+  return labelProblems(overrideProblems(design, o), design);
+}
+
+function overrideProblems(design: Design, o: ConditionOverrides): Problem[] {
   const out: Problem[] = [];
   for (const key of KEYS) {
     const value = o[key];

@@ -107,6 +107,10 @@ export const mosfetSchema = z.object({
   thetaJcKPerW: q('thetaPartKPerW'),
 });
 
+/** One point of a diode's forward curve at one junction temperature: VF at IF and Tj. */
+export const vfPointSchema = z.object({ tjC: q('statedC'), ifA: q('curveA'), vfV: q('curveForwardV') });
+export type VfPoint = z.infer<typeof vfPointSchema>;
+
 export const diodeSchema = z.object({
   kind: z.literal('diode'),
   ...partIdentity,
@@ -115,6 +119,15 @@ export const diodeSchema = z.object({
   rdOhm: q('seriesOhm'),
   /** dVF0/dT, usually negative (about −1 to −2 mV/K). */
   vfTempCoVPerK: q('vfTempCoVPerK'),
+  /** The datasheet's VF(IF) curves at two or more junction temperatures (curves/forward-table.ts). */
+  vfCurves: z
+    .object({
+      points: z.array(vfPointSchema).min(4).max(CURVE_POINTS.max),
+    })
+    .optional()
+    .describe(
+      'Forward curves VF(IF) digitised from the datasheet at two or more junction temperatures, 4 to 200 points: rows grouped by Tj (Tj never falling), each curve with at least 2 points, IF strictly rising and VF never falling within a curve. When given, the forward-drop loss is (1/T)·∫VF(i, Tj)·i dt over the rectifier current, straight lines in IF and in Tj between the curves; vf0V, rdOhm and vfTempCoVPerK are then not used for that loss. Beyond the last point of a curve VF follows its last segment; outside the temperatures the nearest curve is held (the result warns).',
+    ),
   /** Reverse-recovery charge (PN diodes). */
   qrrC: q('recoveryChargeC'),
   /** Forward current at which qrrC is stated; Qrr is scaled by IF / this. Rated load current when absent. */
@@ -130,6 +143,10 @@ export const diodeSchema = z.object({
   tjMaxC: q('partLimitC'),
   thetaJcKPerW: q('thetaPartKPerW'),
 });
+
+/** One point of an inductor's L(I) roll-off curve: the incremental inductance at a DC current. */
+export const inductancePointSchema = z.object({ currentA: q('curveA'), inductanceH: q('inductanceH') });
+export type InductancePoint = z.infer<typeof inductancePointSchema>;
 
 export const coreLossSchema = z.discriminatedUnion('kind', [
   /** Steinmetz Pv = k · f^alpha · Bpk^beta in W/m³ with f in Hz and B in T (sine excitation). */
@@ -164,6 +181,13 @@ export const inductorSchema = z.object({
   inductanceH: q('inductanceH'),
   /** Optional roll-off: inductance at a stated current (linear between 0 A and this point). */
   rolloff: z.object({ currentA: q('ratingA'), inductanceH: q('inductanceH') }).optional(),
+  /** The datasheet's L(I) curve (curves/inductance-table.ts); replaces inductanceH and rolloff for the operating point. */
+  inductanceCurve: z
+    .object({ points: z.array(inductancePointSchema).min(CURVE_POINTS.min).max(CURVE_POINTS.max) })
+    .optional()
+    .describe(
+      'Inductance against DC current digitised from the datasheet, 3 to 200 points: current strictly rising from 0 A or more, inductance never rising. When given, the ripple and peak follow the flux linkage λ(i) = ∫L di (λ(peak) − λ(valley) = v·t over each interval) instead of inductanceH and rolloff; straight lines between points, the first inductance held below the first point and the last held above the last point (the result warns when the peak passes the table or L at the peak falls below 70 % of its first value).',
+    ),
   dcr20Ohm: q('conductionOhm'),
   isatA: q('ratingA'),
   isatAtC: q('statedC'),

@@ -14,8 +14,10 @@ export interface Problem {
   value: unknown;
   /** The allowed values, e.g. "0 V < vinMaxV ≤ 10 kV", "one of "buck", "boost"". */
   allowed: string;
-  /** One plain sentence naming the field, the value and the allowed range. */
+  /** One plain sentence naming the field (by its on-screen label where it has one), the value and the allowed range. */
   message: string;
+  /** The on-screen label of each field the sentence names (by path), as added by labelProblem. */
+  fieldLabels?: Readonly<Record<string, string>>;
   /** Where in the text a JSON syntax error is (1-based), for problems found while reading a file. */
   line?: number;
   column?: number;

@@ -34,6 +34,9 @@ const COSS_CURVE: CurveRule = { x: 'vdsV', y: 'cossF', xName: 'VDS', yName: 'Cos
 /** RDS(on) of a silicon MOSFET rises with Tj: carrier mobility falls (Baliga, Fundamentals of Power Semiconductor Devices, §6 [memory]). */
 const RDS_CURVE: CurveRule = { x: 'tjC', y: 'ratio', xName: 'Tj', yName: 'RDS(on) ratio', curve: 'RDS(on)(Tj) table', monotonic: 'non-decreasing', why: 'the RDS(on) ratio must not fall as Tj rises (a silicon MOSFET\'s channel resistance grows with temperature; check the columns are Tj then the ratio)' };
 
+/** Inductance falls as the DC current rises: the core's permeability falls towards saturation (common practice). */
+const L_CURVE: CurveRule = { x: 'currentA', y: 'inductanceH', xName: 'current', yName: 'inductance', curve: 'L(I) table', monotonic: 'non-increasing', why: 'the inductance must not rise with current (the core\'s permeability falls towards saturation; check the columns are current then inductance)' };
+
 /** The first point of the curve at `p` that breaks its rule, as a problem naming the point. */
 function curveTable(doc: unknown, p: string, rule: CurveRule, out: Problem[]): void {
   const points = at(doc, p);
@@ -89,6 +92,39 @@ function mosfet(doc: unknown, role: string, out: Problem[]): void {
       `${p}.rdsTemperatureLaw.hotC (${inUnit(hot, 'hotC')}) must be above 25 °C: it is the hot datasheet point compared with RDS(on) at 25 °C.`));
 }
 
+/**
+ * A diode's VF(IF, Tj) table: rows grouped by Tj (never falling), at least two temperatures, each curve at
+ * least two points with IF strictly rising and VF never falling (a junction's forward current grows with
+ * its voltage: Sze & Ng, Physics of Semiconductor Devices, 3rd ed., §2.3 [memory]).
+ */
+function forwardCurves(doc: unknown, p: string, out: Problem[]): void {
+  const points = at(doc, p);
+  if (!Array.isArray(points)) return;
+  const t = points.map((point) => num(point, 'tjC') ?? Number.NaN);
+  const x = points.map((point) => num(point, 'ifA') ?? Number.NaN);
+  const y = points.map((point) => num(point, 'vfV') ?? Number.NaN);
+  if ([...t, ...x, ...y].some((v) => !Number.isFinite(v))) return; // the schema reports these
+  const pt = (k: number) => `(${inUnit(t[k]!, 'tjC')}, ${inUnit(x[k]!, 'ifA')}, ${inUnit(y[k]!, 'vfV')})`;
+  const say = (i: number, key: string, value: number, allowed: string, reason: string): void => {
+    out.push(problem(`${p}[${i}].${key}`, value, allowed, `Point ${i + 1} ${pt(i)}${i > 0 ? ` after ${pt(i - 1)}` : ''} of the VF(IF, Tj) table ${p}: ${reason}.`));
+  };
+  let start = 0;
+  let curves = 0;
+  for (let i = 1; i <= points.length; i++) {
+    if (i < points.length && t[i] === t[start]) {
+      if (!(x[i]! > x[i - 1]!)) return say(i, 'ifA', x[i]!, `ifA > ${inUnit(x[i - 1]!, 'ifA')}`, `within one temperature each point must lie at a higher IF than the one before it (sort each curve's rows by IF)`);
+      if (y[i]! < y[i - 1]!) return say(i, 'vfV', y[i]!, `vfV ≥ ${inUnit(y[i - 1]!, 'vfV')}`, `VF must not fall as IF rises (the forward current of a junction grows with its voltage; check the columns are Tj, IF then VF)`);
+      continue;
+    }
+    // A curve ends at i − 1.
+    if (i - start < 2) return say(start, 'tjC', t[start]!, 'at least 2 points at each Tj', `the curve at ${inUnit(t[start]!, 'tjC')} has a single point; each temperature needs at least two (IF, VF) points`);
+    curves++;
+    if (i < points.length && t[i]! < t[start]!) return say(i, 'tjC', t[i]!, `tjC ≥ ${inUnit(t[start]!, 'tjC')}`, `the rows must be grouped by Tj from the coldest curve to the hottest`);
+    start = i;
+  }
+  if (curves < 2) out.push(problem(p, `${points.length} points`, 'curves at 2 or more Tj', `The VF(IF, Tj) table ${p} has one temperature only (${inUnit(t[0]!, 'tjC')}); give the datasheet curves at two or more junction temperatures.`));
+}
+
 function inductor(doc: unknown, out: Problem[]): void {
   const p = 'parts.inductor';
   const l = num(doc, `${p}.inductanceH`);
@@ -96,6 +132,7 @@ function inductor(doc: unknown, out: Problem[]): void {
   if (l !== undefined && lr !== undefined && lr > l)
     out.push(problem(`${p}.rolloff.inductanceH`, lr, `rolloff.inductanceH ≤ ${p}.inductanceH (${inUnit(l, 'inductanceH')})`,
       `${p}.rolloff.inductanceH (${inUnit(lr, 'inductanceH')}) must not exceed the zero-current inductance ${inUnit(l, 'inductanceH')}: inductance falls with current.`));
+  if (Array.isArray(at(doc, `${p}.inductanceCurve.points`))) curveTable(doc, `${p}.inductanceCurve.points`, L_CURVE, out);
   const ae = num(doc, `${p}.aeM2`);
   const ve = num(doc, `${p}.veM3`);
   if (ae !== undefined && ve !== undefined && ae > 0) {
@@ -146,6 +183,7 @@ export function partRules(doc: unknown): Problem[] {
   const out: Problem[] = [];
   mosfet(doc, 'switch', out);
   if (str(doc, 'parts.rectifier.kind') === 'mosfet') mosfet(doc, 'rectifier', out);
+  if (str(doc, 'parts.rectifier.kind') === 'diode') forwardCurves(doc, 'parts.rectifier.vfCurves.points', out);
   inductor(doc, out);
   resistorAndController(doc, out);
   limitsAboveAmbient(doc, out);

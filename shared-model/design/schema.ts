@@ -8,6 +8,7 @@ import { z } from 'zod';
 import { capacitorSchema, controllerSchema, diodeSchema, inductorSchema, mosfetSchema, resistorSchema } from './parts.ts';
 import { quantity as q } from './numbers.ts';
 import { calibrationSchema, measurementSchema } from '../measurement/schema.ts';
+import { missionProfileSchema } from '../mission/schema.ts';
 
 export const DESIGN_FORMAT = 'wattledger.design';
 export const DESIGN_VERSION = 1;
@@ -217,6 +218,8 @@ export const designSchema = z.object({
   measurements: measurementSchema.optional(),
   /** Set when fitted values were adopted: the measurement's hash and the values (shared-model/fit). */
   calibration: calibrationSchema.optional(),
+  /** How the product is used: rows of (Vin, load, ambient, fraction of time) (optional; shared-model/mission). */
+  missionProfile: missionProfileSchema.optional(),
 });
 
 export type Specification = z.infer<typeof specificationSchema>;

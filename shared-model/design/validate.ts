@@ -1,7 +1,7 @@
 /**
  * validateDesign: the one gate every design passes before the engine sees it.
  * Steps: format and version (migrating older documents), the zod schema (types and ranges of every
- * field), then the cross-field rules (rules-spec, rules-parts, rules-thermal, and rules-validity: where
+ * field), then the cross-field rules (rules-spec, rules-parts, rules-thermal, mission/rules.ts, and rules-validity: where
  * the models stop meaning anything) on the same input, so one call reports every problem. Never throws, whatever the input (NaN, Infinity, wrong types, null...).
  */
 import { designSchema } from './schema.ts';
@@ -13,7 +13,9 @@ import { partRules } from './rules-parts.ts';
 import { specificationRules } from './rules-spec.ts';
 import { thermalRules } from './rules-thermal.ts';
 import { validityRules } from './rules-validity.ts';
+import { missionRules } from '../mission/rules.ts';
 import { problemsFromZod } from './zod-problems.ts';
+import { labelProblems } from './labelled-problems.ts';
 
 export type DesignValidation =
   | { ok: true; design: Design; warnings?: DesignNotice[] }
@@ -21,7 +23,7 @@ export type DesignValidation =
 
 /** Cross-field problems of a (possibly invalid) document at the current version. */
 export function crossFieldProblems(doc: unknown): Problem[] {
-  return [...specificationRules(doc), ...partRules(doc), ...thermalRules(doc), ...validityRules(doc)];
+  return [...specificationRules(doc), ...partRules(doc), ...thermalRules(doc), ...validityRules(doc), ...missionRules(doc)];
 }
 
 /** Stands in for a value the schema refused: present (not "missing"), but of no usable type. */
@@ -68,7 +70,7 @@ export function validateDesign(json: unknown): DesignValidation {
   const problems = parsed.success ? [] : problemsFromZod(parsed.error.issues, designSchema, doc);
   const refused = parsed.success ? [] : parsed.error.issues.map((issue) => issue.path);
   problems.push(...crossFieldProblems(withoutRefused(doc, refused)));
-  if (problems.length > 0 || !parsed.success) return { ok: false, problems: unique(problems) };
+  if (problems.length > 0 || !parsed.success) return { ok: false, problems: labelProblems(unique(problems), doc) };
   const warnings = [...migrated.notes, ...ignoredKeys(doc, parsed.data), ...designNotices(parsed.data)];
   return warnings.length > 0 ? { ok: true, design: parsed.data, warnings } : { ok: true, design: parsed.data };
 }

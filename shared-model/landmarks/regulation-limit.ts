@@ -7,6 +7,7 @@
  */
 import type { SweepPoint } from '../sweep/types.ts';
 import type { WarningCode } from '../warnings.ts';
+import { formatEngineering } from '../units/engineering.ts';
 import { findEdge } from './search.ts';
 import type { RegulationLandmark } from './types.ts';
 
@@ -32,7 +33,7 @@ export function findRegulationLimit(points: readonly SweepPoint[], probe?: (load
       load: null,
       value: null,
       reason: last
-        ? `The converter regulates up to the heaviest swept load (${last.loadA.toPrecision(4)} A, duty cycle ${last.dutyCycle.toFixed(3)}).`
+        ? `The converter regulates up to the heaviest swept load (${last.loadA.toPrecision(4)} A, duty cycle ${formatEngineering(last.dutyCycle, '%', 4, 'table')}).`
         : 'The sweep has no points.',
       note: null,
       method: 'none',

@@ -21,7 +21,7 @@ import {
   voltageCheck,
 } from '../hazards/ratings.ts';
 import type { PartTemperature } from './types.ts';
-import type { PointSummary } from './point-view.ts';
+import type { PointSummary } from '../operating-point/lean-point.ts';
 import type { Keeper } from './keep.ts';
 
 const f3 = (x: number) => (Number.isFinite(x) ? Number(x.toPrecision(3)).toString() : String(x));

@@ -9,7 +9,8 @@
  */
 import type { Design } from '../design/schema.ts';
 import type { ConductionParameters } from '../operating-point/types.ts';
-import { newLeanPoint, newRippleSquares, type LeanPoint, type PointSummary, type RippleSquares } from './point-view.ts';
+import { newLeanPoint, type LeanPoint, type PointSummary } from '../operating-point/lean-point.ts';
+import { newRippleSquares, type RippleSquares } from './ripple-squares.ts';
 import { newShape, type Shape } from '../operating-point/shape.ts';
 import { conductionParametersInto, type PartTempIndex } from '../operating-point/conditions.ts';
 import { isSynchronous, newCircuit, type Circuit } from '../operating-point/circuit.ts';
@@ -88,7 +89,7 @@ export interface LoopWork {
   shape: Shape;
   probe: Shape;
   lean: LeanPoint;
-  /** The final point of a sweep evaluation, filled as the record would be (point-view.ts); made on first use. */
+  /** The final point of a sweep evaluation, filled as the record would be (operating-point/lean-point.ts); made on first use. */
   summary: LeanPoint | undefined;
   ambient: Float64Array;
   cp: ConductionParameters;

@@ -9,11 +9,11 @@
  *      a single step while the temperatures are still more than 1 K from their fixed point);
  *   3. per-part losses from the kernel on a reused LeanPoint; the tangents ∂P_i/∂T_i exact, from the
  *      filled slots and the laws' slopes with the electrical point held (kernel-slopes.ts), no further pass.
- * `finalPoint(T)` then builds the solver's OperatingPoint record once at the converged duty, exactly as
- * solveOperatingPoint(design, conditions, conduction(T), { lossOf, sourceLossOf }) would (test:
+ * `finalSummary(T)` fills the final point once at the converged duty, as the context's reused summary
+ * (operating-point/lean-point.ts) with its warnings and the kernel filled on it; `finalPoint(T)` is that
+ * same point with the solver's record built on its numbers (operating-point/assemble.ts), exactly as
+ * solveOperatingPoint(design, conditions, conduction(T), { lossOf, sourceLossOf }) would build it (test:
  * test/shared-model/ledger/joint-loop.test.ts).
- * `finalSummary(T)` is the same point for a sweep: the record's numbers to the last bit in a reused
- * PointSummary (point-view.ts) with the same warnings, without the record's waveforms.
  * Forced PWM (operating-point/circuit.ts dutyByVoltSeconds): step 2 is the volt-second duty of the circuit
  * at T instead; the losses it does not carry are paid by the source (slots.ts).
  * Slow path: a point the volt-second solution cannot regulate, or whose power balance needs more than
@@ -33,13 +33,8 @@ import type { ConductionParameters } from '../operating-point/types.ts';
 import type { LossAt } from '../thermal/fixed-point.ts';
 import { conductionInto, fillLosses, type LedgerContext } from './kernel.ts';
 import { nodeSlopesInto } from './kernel-slopes.ts';
-import {
-  leanPointAt,
-  newLeanPoint,
-  rippleSquaresOf,
-  rippleSquaresOfLean,
-  type PointSummary,
-} from './point-view.ts';
+import { leanPointAt, newLeanPoint, type LeanPoint, type PointSummary } from '../operating-point/lean-point.ts';
+import { rippleSquaresOf, rippleSquaresOfLean } from './ripple-squares.ts';
 
 const LOOSE_ABOVE_K = 1;
 
@@ -231,33 +226,38 @@ export class Loop implements JointLoop, BalanceProblem {
   }
 
   finalPoint(T: Float64Array): OperatingPoint {
-    const ctx = this.ctx;
-    const w = ctx.work;
     const c = this.finalCircuit(T);
-    if (!c) return this.slowPoint(T, w.cp);
-    const cp = w.cp;
+    if (!c) return this.slowPoint(T, this.ctx.work.cp);
+    // The record on the summary's numbers (assemble.ts): the final point is computed once.
+    const p = this.summaryAt(c, T);
     const dutyMethod = this.byVoltSeconds ? 'volt-second' : 'power-balance';
-    const op = buildOperatingPoint(c, w.shape, this.cond, { regulated: true, dutyMethod, extraInputA: 0, warnings: [] });
-    addWarnings({ design: ctx.design, circuit: c, limit: 'none', powerBalanceFallback: false }, op);
-    fillLosses(ctx, op, rippleSquaresOf(op, ctx.ripple), T, cp);
-    op.waveforms.inputA += Math.max(this.sourcePaidW(), 0) / this.vin;
-    ctx.op = op;
+    const op = buildOperatingPoint(c, this.ctx.work.shape, this.cond, { regulated: true, dutyMethod, extraInputA: 0, warnings: p.warnings }, p);
+    op.waveforms.inputA = p.waveforms.inputA;
+    this.ctx.op = op;
     return op;
   }
 
   finalSummary(T: Float64Array): PointSummary {
+    const c = this.finalCircuit(T);
+    if (!c) return this.slowPoint(T, this.ctx.work.cp);
+    const p = this.summaryAt(c, T);
+    this.ctx.op = p;
+    return p;
+  }
+
+  /**
+   * The final point as the context's reused summary (a fresh warnings array), the kernel filled on it and
+   * the source-paid losses added to its source current; `c` and the work shape at the loop's duty.
+   */
+  private summaryAt(c: Circuit, T: Float64Array): LeanPoint {
     const ctx = this.ctx;
     const w = ctx.work;
-    const c = this.finalCircuit(T);
-    if (!c) return this.slowPoint(T, w.cp);
-    const cp = w.cp;
     w.summary ??= newLeanPoint();
     const p = leanPointAt(c, w.shape, w.summary, true, this.cond);
     p.warnings = [];
     addWarnings({ design: ctx.design, circuit: c, limit: 'none', powerBalanceFallback: false }, p);
-    fillLosses(ctx, p, rippleSquaresOfLean(p, ctx.ripple), T, cp);
+    fillLosses(ctx, p, rippleSquaresOfLean(p, ctx.ripple), T, w.cp);
     p.waveforms.inputA += Math.max(this.sourcePaidW(), 0) / this.vin;
-    ctx.op = p;
     return p;
   }
 }

@@ -6,7 +6,7 @@
  */
 import type { Mosfet } from '../design/parts.ts';
 import type { ConductionParameters } from '../operating-point/types.ts';
-import type { PointView } from './point-view.ts';
+import type { PointView } from '../operating-point/lean-point.ts';
 import { esrAt, leakageAt } from '../physics/temperature-laws.ts';
 import { eossAt, qossAt } from '../losses/output-capacitance.ts';
 import { dowellRippleFactor } from '../losses/dowell.ts';
@@ -149,6 +149,9 @@ export function fillRectifierInputs(ctx: LedgerContext, op: PointView, T: Float6
     f.iavgA = op.stats.rectifier.averageA;
     f.irmsA = op.stats.rectifier.rmsA;
     f.temperatureC = tR;
+    f.segments = op.waveforms.inductor.segments;
+    f.periodS = op.periodS;
+    f.fraction = op.rectifierFraction;
     const l = s.diodeLeakage!.inputs;
     l.leakageA = leakageAt(rect, tR);
     l.reverseV = op.stress.rectifierV;

@@ -18,7 +18,8 @@
  *     driver's share of the gate drive.
  */
 import type { ConductionParameters } from '../operating-point/types.ts';
-import type { PointView, RippleSquares } from './point-view.ts';
+import type { PointView } from '../operating-point/lean-point.ts';
+import type { RippleSquares } from './ripple-squares.ts';
 import { fillPassiveInputs, fillRectifierInputs, fillSwitchInputs } from './kernel-inputs.ts';
 import { slotWatts } from './slots.ts';
 import type { LedgerContext } from './context.ts';
@@ -27,7 +28,7 @@ export { conductionAt, conductionInto, ledgerContext, type LedgerContext } from 
 
 /**
  * Computes every loss of `op` at node temperatures T into the slots and ctx outputs. `ripple` holds the
- * slope parts of the branch mean squares (point-view.ts): the resistive losses they carry are moved from
+ * slope parts of the branch mean squares (ripple-squares.ts): the resistive losses they carry are moved from
  * the duty-moving sum (pathLossW) to the source sum (sourceLossW), see slots.ts.
  */
 export function fillLosses(

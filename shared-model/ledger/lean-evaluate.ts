@@ -14,7 +14,7 @@ import type { ElectroThermalOptions } from '../thermal/fixed-point.ts';
 import type { Warning } from '../warnings.ts';
 import type { LedgerContext } from './kernel.ts';
 import type { JointLoop } from './joint-loop.ts';
-import { newLeanPoint, type PointSummary } from './point-view.ts';
+import { newLeanPoint, type PointSummary } from '../operating-point/lean-point.ts';
 import { partTemperaturesInto } from './temperatures.ts';
 import { efficiencyOf, picksOf, settlePoint, solvePoint, type Settled } from './solve-point.ts';
 import { keepMargins, type Keeper } from './keep.ts';

@@ -2,11 +2,11 @@
  * The slope part of each branch's mean square: a straight segment of mean ī and swing Δi has mean square
  * ī² + Δi²/12; Σ (t/T)·Δi²/12 over a branch's segments is the part the kernel prices as a loss paid by the
  * source at an unchanged duty (ledger/slots.ts), from the solver's record or from a lean point (which
- * computed it with its statistics, interval-stats.ts).
+ * computed it with its statistics, waveform/interval-stats.ts).
  * Source: elementary integration of a linear function; docs/methods.md §1.
  */
 import type { OperatingPoint, Segment } from '../operating-point/types.ts';
-import type { LeanPoint } from './point-view.ts';
+import type { LeanPoint } from '../operating-point/lean-point.ts';
 
 /**
  * Slope part of each branch's mean square, A² (see rippleSquaresOf). Key names of their own: a record

@@ -29,7 +29,8 @@ import { capacitorEsr, type CapacitorEsrInputs } from '../losses/capacitor-esr.t
 import { conduction, type ConductionInputs } from '../losses/conduction.ts';
 import { coreLoss, type CoreLossInputs } from '../losses/core-loss.ts';
 import { deadTime, type DeadTimeInputs } from '../losses/dead-time.ts';
-import { diodeForward, type DiodeForwardInputs } from '../losses/diode-forward.ts';
+import { diodeForward } from '../losses/diode-forward.ts';
+import { diodeForwardCurve, type DiodeCurveInputs } from '../losses/diode-forward-curve.ts';
 import { driverSupply, type DriverSupplyInputs } from '../losses/driver-supply.ts';
 import { gateDrive, type GateDriveInputs } from '../losses/gate-drive.ts';
 import { junctionCapacitance, type JunctionCapacitanceInputs } from '../losses/junction-capacitance.ts';
@@ -93,7 +94,7 @@ export interface Slots {
   rectConduction?: Slot<ConductionInputs>;
   rectGate?: Slot<GateDriveInputs>;
   rectDeadTime?: Slot<DeadTimeInputs>;
-  diodeForward?: Slot<DiodeForwardInputs>;
+  diodeForward?: Slot<DiodeCurveInputs>;
   diodeLeakage?: Slot<ReverseLeakageInputs>;
   windingDc: Slot<WindingDcInputs>;
   windingAc?: Slot<WindingAcInputs>;
@@ -142,7 +143,10 @@ export function slotsOf(design: Design, synchronous: boolean): Slots {
     } else {
       s.swRecovery = at('switch', reverseRecovery, recoveryIn());
     }
-    s.diodeForward = at('rectifier', diodeForward, { vf0V: 0, rdOhm: 0, iavgA: 0, irmsA: 0, temperatureC: 0 });
+    const curves = rect.kind === 'diode' ? rect.vfCurves?.points : undefined;
+    s.diodeForward = at<DiodeCurveInputs>('rectifier', curves ? diodeForwardCurve : diodeForward, {
+      vf0V: 0, rdOhm: 0, iavgA: 0, irmsA: 0, temperatureC: 0, vfCurves: curves, segments: [], periodS: 0, fraction: 0,
+    });
     s.diodeLeakage = at('rectifier', reverseLeakage, {
       leakageA: 0, reverseV: 0, reverseFraction: 0, idleV: 0, idleFraction: 0, temperatureC: 0,
     });

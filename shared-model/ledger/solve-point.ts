@@ -22,8 +22,9 @@ import { jointLoop, type JointLoop } from './joint-loop.ts';
 import { burnHazards, touchPicks, type TouchPick } from './hazards.ts';
 import { ratingChecks } from './checks.ts';
 import { modelNotes, runawayWarning } from './notes.ts';
+import { curveNotes } from '../curves/notes.ts';
 import { pulseSkippingNotes } from '../light-load/notes.ts';
-import type { PointSummary } from './point-view.ts';
+import type { PointSummary } from '../operating-point/lean-point.ts';
 import type { PartTemperature } from './types.ts';
 import type { Keeper } from './keep.ts';
 
@@ -157,6 +158,7 @@ export function settlePoint(
   ratingChecks(ctx.design, op, temps, warnings, keeper);
   burnHazards(picksOf(ctx), temps, warnings, keeper, sol.runawayNode >= 0);
   modelNotes(ctx, warnings);
+  curveNotes(ctx.design, op, temps, warnings);
   into.totalLoss = totalLoss;
   into.inputPower = inputPower;
 }

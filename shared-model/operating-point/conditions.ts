@@ -5,13 +5,15 @@
  * conductionParameters: RDS(on) of the switch and a synchronous rectifier at their junction
  * temperatures, a diode's VF0(T) and Rd, the winding's DCR(T) (IEC 60028 copper law) and the sense
  * resistor at its temperature (temperature-laws.ts). For a synchronous rectifier the diode fields carry
- * its body diode (VSD, no Rd) for the dead-time models; for a diode rectifier rectifierOnOhm is 0.
+ * its body diode (VSD, no Rd) for the dead-time models; for a diode rectifier rectifierOnOhm is 0; a
+ * diode with VF(IF, Tj) curves gives their tangent at the rated load current (curves/forward-table.ts).
  * Source: docs/methods.md §5, §6, §8.
  */
 import type { Design } from '../design/schema.ts';
 import type { Conditions, ConductionParameters, PartTemps } from './types.ts';
 import { copperResistanceAt, diodeVf0At, rdsOnAt, resistorAt } from '../physics/temperature-laws.ts';
 import { isSynchronous } from './circuit.ts';
+import { forwardTangentAt } from '../curves/forward-table.ts';
 
 /** The design's nominal conditions (Vin nominal, rated load, spec fs and ambient), with overrides. */
 export function nominalConditions(design: Design, overrides?: Partial<Conditions>): Conditions {
@@ -70,6 +72,12 @@ export function conductionParametersInto(
   if (rect.kind === 'mosfet') {
     rectifierOnOhm = sync ? rdsOnAt(rect, temps[at.rectifier]!) : 0;
     diodeVf0V = rect.bodyDiodeVsdV;
+  } else if (rect.vfCurves) {
+    // Datasheet curves: the volt-second equation sees their tangent at the rated load current (the loss
+    // itself integrates the curves over the waveform, losses/diode-forward-curve.ts).
+    const tangent = forwardTangentAt(rect.vfCurves.points, design.spec.ratedLoadA, temps[at.rectifier]!);
+    diodeVf0V = tangent.vf0V;
+    diodeRdOhm = tangent.rdOhm;
   } else {
     diodeVf0V = diodeVf0At(rect, temps[at.rectifier]!);
     diodeRdOhm = rect.rdOhm;

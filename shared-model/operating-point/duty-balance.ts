@@ -10,7 +10,7 @@
  * again at nearby conditions (the next electro-thermal step) starts from it.
  * Infeasible: the balance needs more input than D = Dmax gives (reported, not forced).
  * The problem writes its numbers into the record rather than returning them: a number passed to or
- * returned from a call the engine does not inline is boxed on the heap (ledger/interval-stats.ts).
+ * returned from a call the engine does not inline is boxed on the heap (waveform/interval-stats.ts).
  * Source: conservation of energy over one period; secant and bisection (Press et al., Numerical Recipes
  * 3rd ed. §9.2 [memory for section]).
  */

@@ -25,6 +25,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
       'Steady state only: no control-loop dynamics, start-up or load transients.',
       'Switching edges are instantaneous in the current waveforms (transition times do not enter the RMS currents).',
       'Capacitor ESL is ignored in the output ripple.',
+      'With an L(I) curve from the datasheet, ripple and peak follow Faraday\'s law λ(peak) − λ(valley) = v · t with λ = ∫L di; each interval is drawn as one straight segment between those end points (its curvature is not drawn, so the RMS is that of the chord).',
     ],
   },
   {
@@ -133,9 +134,14 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
   {
     id: 'diode-forward',
     title: 'Diode forward conduction',
-    formula: 'P = Vf0(Tj) · Iavg + Rd · Irms², Vf0(Tj) = Vf0 + (dVf0/dT) · (Tj − 25 °C).',
+    formula:
+      'P = Vf0(Tj) · Iavg + Rd · Irms², Vf0(Tj) = Vf0 + (dVf0/dT) · (Tj − 25 °C); with the datasheet\'s VF(IF, Tj) curves, ' +
+      'P = (1/Ts) · ∫ VF(i, Tj) · i dt over the rectifier current, exact over straight lines between the points and between the curves\' temperatures.',
     source: `WattLedger methods §6; ${EM}, ch. 3 (from memory).`,
-    limits: ['The straight-line forward model holds over the current range; Rd does not change with temperature.'],
+    limits: [
+      'The straight-line forward model holds over the current range; Rd does not change with temperature.',
+      'Curves: beyond a curve\'s last point VF follows its last segment, outside the curves\' temperatures the nearest curve is used (a warning says so); the duty solver sees the curve\'s tangent at the rated load current.',
+    ],
   },
   {
     id: 'junction-capacitance',

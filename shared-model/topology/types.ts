@@ -8,7 +8,7 @@
  *   on  (control switch conducts, D·T)    and   off (rectifier conducts, D'·T or D2·T).
  * For each interval the record says which part carries the inductor current, whether that current is
  * drawn from the input node and whether it is delivered to the output node. From these the engine
- * derives, with no further case analysis (operating-point/shape.ts, assemble.ts, ledger/point-view.ts):
+ * derives, with no further case analysis (operating-point/shape.ts, branch-table.ts, lean-point.ts):
  *   - the inductor voltage of the interval (the volt-second equation with its drops):
  *       vL = [from input] · Vin' − [to output] · (Vo' − ESR·Io) − [rectifier] · VF0 − R_interval · ī
  *     where R_interval holds the conducting part, DCR, an inductor or switch sense resistor and, when the

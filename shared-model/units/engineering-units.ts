@@ -37,6 +37,7 @@ export const UNITS: Readonly<Record<string, UnitInfo>> = {
   s: { quantity: 'time', spellings: same('s', 'sec'), prefixes: true, megaIsNormal: false },
   C: { quantity: 'charge', spellings: same('C'), prefixes: true, megaIsNormal: false },
   J: { quantity: 'energy', spellings: same('J'), prefixes: true, megaIsNormal: false },
+  Wh: { quantity: 'energy in watt-hours', spellings: same('Wh'), prefixes: true, megaIsNormal: true },
   T: { quantity: 'flux density', spellings: same('T'), prefixes: true, megaIsNormal: false },
   'W/m³': {
     quantity: 'loss density',

@@ -11,7 +11,8 @@ export type LoadedDesign = { ok: true; design: Design; notices: DesignNotice[]; 
 
 export function formatProblem(p: Problem): string {
   const where = p.line === undefined ? '' : ` | line ${p.line}, column ${p.column ?? '?'}`;
-  return `  - ${p.message}\n    path: ${p.path || '(whole document)'} | value: ${describeValue(p.value, unitOfPath(p.path))} | allowed: ${p.allowed}${where}`;
+  const label = p.fieldLabels?.[p.path];
+  return `  - ${p.message}\n    ${label === undefined ? '' : `field: ${label} | `}path: ${p.path || '(whole document)'} | value: ${describeValue(p.value, unitOfPath(p.path))} | allowed: ${p.allowed}${where}`;
 }
 
 export async function loadDesign(path: string, io: CliIo, prefix: string): Promise<LoadedDesign> {

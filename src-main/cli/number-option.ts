@@ -4,7 +4,8 @@
  * for a design field (--vin, --load, --fs, --ambient, --from, --to) take their range from the design
  * schema (shared-model CONDITION_RANGES), so an option can never reach a value a design file could not
  * hold; the others (--points, --samples, --seed, --knee-points) state theirs here. A refusal is one
- * sentence naming the option, the value and the allowed range.
+ * sentence naming the option (and, where it sets a condition, its on-screen label), the value and the
+ * allowed range.
  */
 import type { FieldRange, NumberRange } from '../../shared-model/index.ts';
 import {
@@ -17,8 +18,11 @@ import {
   rangeText,
 } from '../../shared-model/index.ts';
 
-/** The range of a numeric option; `field` names the design field it mirrors, if any. */
-export type OptionRange = NumberRange & { field?: string };
+/**
+ * The range of a numeric option; `field` names the design field it mirrors, if any, and `label` what the
+ * option sets as the app's screen names it (the engine's label table, shared-model design/field-labels.ts).
+ */
+export type OptionRange = NumberRange & { field?: string; label?: string };
 
 const whole = (min: number, max: number): OptionRange => ({ min, minInclusive: true, max, maxInclusive: true, integer: true });
 
@@ -50,8 +54,9 @@ export function readNumberOption(name: string, unit: string, range: OptionRange,
   if (!parsed.ok) return { ok: false, message: `Option "--${name}": ${parsed.message}` };
   if (inRange(parsed.value, range)) return { ok: true, value: parsed.value };
   const same = range.field === undefined ? '' : ` (the range of ${range.field} in a design file)`;
+  const label = range.label === undefined ? '' : ` (${range.label})`;
   return {
     ok: false,
-    message: `Option "--${name}" is ${describeValue(parsed.value, unit)}; allowed: ${optionRangeText(name, unit, range)}${same}.`,
+    message: `Option "--${name}"${label} is ${describeValue(parsed.value, unit)}; allowed: ${optionRangeText(name, unit, range)}${same}.`,
   };
 }

@@ -5,7 +5,7 @@
 import type { ChartConfiguration, TooltipItem } from 'chart.js';
 import type { AxisSpec, BarCategory, BarSeries } from './chart-data.ts';
 import { formatValue } from './chart-format.ts';
-import { baseOptions, numericScale, surfacePlugin } from './chart-kit.ts';
+import { baseOptions, largestOf, numericScale, surfacePlugin } from './chart-kit.ts';
 import { toneColour, type ChartPalette } from './chart-theme.svelte.ts';
 
 export interface BarChartData {
@@ -15,6 +15,8 @@ export interface BarChartData {
   value: AxisSpec;
   horizontal?: boolean;
   stacked?: boolean;
+  /** Title of the category axis (the Monte Carlo histogram's bins); none when the labels say it. */
+  categoryTitle?: string;
 }
 
 export function barConfig(data: BarChartData, palette: ChartPalette): ChartConfiguration<'bar'> {
@@ -24,6 +26,7 @@ export function barConfig(data: BarChartData, palette: ChartPalette): ChartConfi
   const categoryScale = {
     type: 'category',
     stacked: data.stacked,
+    title: { display: data.categoryTitle !== undefined, text: data.categoryTitle ?? '', color: palette.text },
     ticks: { color: palette.text, autoSkip: !data.horizontal, maxRotation: 0 },
     grid: { display: false },
     border: { color: palette.grid },
@@ -47,7 +50,7 @@ export function barConfig(data: BarChartData, palette: ChartPalette): ChartConfi
       indexAxis: data.horizontal ? 'y' : 'x',
       interaction: { mode: 'index', intersect: false, axis: categoryKey },
       scales: {
-        [valueKey]: numericScale(data.value, palette, { stacked: data.stacked, beginAtZero: true }),
+        [valueKey]: numericScale(data.value, palette, largestOf(data.stacked ? data.categories.map((_, i) => data.series.reduce((s, x) => s + (x.values[i] ?? 0), 0)) : data.series.flatMap((x) => x.values)), { stacked: data.stacked, beginAtZero: true }),
         [categoryKey]: categoryScale,
       },
       plugins: {

@@ -24,6 +24,8 @@ export interface AxisSpec {
   scale?: 'linear' | 'log';
   min?: number;
   max?: number;
+  /** Values that always get a labelled tick on a log axis (the rated load). */
+  marks?: readonly number[];
 }
 
 export interface LineSeries {

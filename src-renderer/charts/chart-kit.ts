@@ -25,7 +25,7 @@ import {
 import type { ChartConfiguration, ChartType, Plugin, ScaleOptionsByType } from 'chart.js';
 import annotationPlugin from 'chartjs-plugin-annotation';
 import type { AxisSpec } from './chart-data.ts';
-import { axisTitle, tickText } from './chart-format.ts';
+import { axisTitle, axisUnit, tickText } from './chart-format.ts';
 import type { ChartPalette } from './chart-theme.svelte.ts';
 
 Chart.register(
@@ -92,20 +92,40 @@ export function releaseChart(chart: Chart | { destroy(): void }): void {
   chart.destroy();
 }
 
-/** Scale options for a numeric axis in our style (title with unit, engineering ticks, theme colours). */
-export function numericScale(axis: AxisSpec, palette: ChartPalette, extra: Record<string, unknown> = {}, tickAtBounds = true): ScaleOptionsByType<'linear'> {
+/**
+ * Scale options for a numeric axis in our style: the title names the quantity and the one unit the
+ * ticks are in (prefix chosen from `largest`, the largest magnitude plotted on it), theme colours. A log
+ * axis shows every tick it makes (1…9 of each decade, labelled 1, 2, 5 and the marks) plus a tick at
+ * each mark.
+ */
+export function numericScale(axis: AxisSpec, palette: ChartPalette, largest: number, extra: Record<string, unknown> = {}, tickAtBounds = true): ScaleOptionsByType<'linear'> {
+  const unit = axisUnit(axis, Math.max(Math.abs(axis.max ?? 0), Math.abs(axis.min ?? 0), largest));
+  const log = axis.scale === 'log';
   return {
-    type: axis.scale === 'log' ? 'logarithmic' : 'linear',
+    type: log ? 'logarithmic' : 'linear',
     min: axis.min,
     max: axis.max,
-    title: { display: true, text: axisTitle(axis), color: palette.text },
+    title: { display: true, text: axisTitle(axis, unit), color: palette.text },
     // sampleSize: label sizes are measured on 8 ticks, not all of them (a log axis has ~25); the labels
     // are short numbers of similar width, and measuring all of them was a third of each chart update.
-    ticks: { color: palette.muted, maxRotation: 0, autoSkipPadding: 8, sampleSize: 8, includeBounds: tickAtBounds, callback: (v: number | string) => tickText(Number(v), axis) },
+    ticks: { color: palette.muted, maxRotation: 0, autoSkip: !log, autoSkipPadding: 8, sampleSize: 8, includeBounds: tickAtBounds, callback: (v: number | string) => tickText(Number(v), axis, unit) },
+    afterBuildTicks: log && axis.marks?.length ? (scale: { ticks: { value: number }[]; min: number; max: number }) => addMarks(scale, axis.marks ?? []) : undefined,
     grid: { color: palette.grid, lineWidth: 0.6 },
     border: { color: palette.grid },
     ...extra,
   } as unknown as ScaleOptionsByType<'linear'>;
+}
+
+function addMarks(scale: { ticks: { value: number }[]; min: number; max: number }, marks: readonly number[]): void {
+  const extra = marks.filter((m) => m >= scale.min && m <= scale.max && !scale.ticks.some((t) => Math.abs(t.value - m) <= 1e-9 * m));
+  if (extra.length > 0) scale.ticks = [...scale.ticks, ...extra.map((value) => ({ value }))].sort((a, b) => a.value - b.value);
+}
+
+/** The largest magnitude among numbers (nulls and non-finite values left out); 0 when there is none. */
+export function largestOf(...lists: readonly (readonly (number | null)[])[]): number {
+  let max = 0;
+  for (const list of lists) for (const v of list) if (v !== null && Number.isFinite(v) && Math.abs(v) > max) max = Math.abs(v);
+  return max;
 }
 
 /** Options every chart shares: fill the box, no animation, themed legend and tooltip. */

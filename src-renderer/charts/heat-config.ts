@@ -5,7 +5,7 @@
 import type { Chart, ChartConfiguration, Plugin, TooltipItem } from 'chart.js';
 import type { AxisSpec, HeatGrid } from './chart-data.ts';
 import { formatValue } from './chart-format.ts';
-import { baseOptions, numericScale, surfacePlugin } from './chart-kit.ts';
+import { baseOptions, largestOf, numericScale, surfacePlugin } from './chart-kit.ts';
 import type { ChartPalette } from './chart-theme.svelte.ts';
 import { cellEdges, rampColour, valueRange } from './heat-scale.ts';
 
@@ -66,8 +66,8 @@ export function heatConfig(data: HeatMapData, palette: ChartPalette): ChartConfi
       parsing: false,
       interaction: { mode: 'nearest', intersect: false },
       scales: {
-        x: numericScale({ ...data.x, min: xEdges[0], max: xEdges[xEdges.length - 1] }, palette, { grid: { display: false } }, false),
-        y: numericScale({ ...data.y, min: yEdges[0], max: yEdges[yEdges.length - 1] }, palette, { grid: { display: false } }, false),
+        x: numericScale({ ...data.x, min: xEdges[0], max: xEdges[xEdges.length - 1] }, palette, largestOf(xEdges), { grid: { display: false } }, false),
+        y: numericScale({ ...data.y, min: yEdges[0], max: yEdges[yEdges.length - 1] }, palette, largestOf(yEdges), { grid: { display: false } }, false),
       },
       plugins: {
         ...base.plugins,

@@ -5,7 +5,7 @@
 import type { ChartConfiguration, TooltipItem } from 'chart.js';
 import type { AxisSpec, LineMarker, LineSeries, PointMarker } from './chart-data.ts';
 import { axisTitle, formatValue } from './chart-format.ts';
-import { baseOptions, numericScale, surfacePlugin } from './chart-kit.ts';
+import { baseOptions, largestOf, numericScale, surfacePlugin } from './chart-kit.ts';
 import { toneColour, withAlpha, type ChartPalette } from './chart-theme.svelte.ts';
 import { markerLabelsPlugin, type MarkerLabelOptions } from './marker-labels.ts';
 
@@ -42,6 +42,14 @@ function markerLabels(data: LineChartData, palette: ChartPalette): MarkerLabelOp
   };
 }
 
+/** The largest magnitude the y axis shows: the top of the stack, or every series and horizontal marker. */
+function yLargest(data: LineChartData): number {
+  const marks = (data.markers ?? []).filter((m) => m.axis === 'y').map((m) => m.value);
+  if (!data.stacked) return largestOf(marks, ...data.series.map((s) => s.values));
+  const tops = data.xValues.map((_, i) => data.series.reduce((sum, s) => sum + (s.values[i] ?? 0), 0));
+  return largestOf(tops, marks);
+}
+
 export function lineConfig(data: LineChartData, palette: ChartPalette): ChartConfiguration<'line'> {
   const datasets = data.series.map((s) => {
     const colour = toneColour(palette, s.tone);
@@ -70,8 +78,8 @@ export function lineConfig(data: LineChartData, palette: ChartPalette): ChartCon
       ...base,
       parsing: false,
       scales: {
-        x: numericScale(data.x, palette),
-        y: numericScale(data.y, palette, data.stacked ? { stacked: true, beginAtZero: true } : { grace: '8%' }),
+        x: numericScale(data.x, palette, largestOf(data.xValues)),
+        y: numericScale(data.y, palette, yLargest(data), data.stacked ? { stacked: true, beginAtZero: true } : { grace: '8%' }),
       },
       plugins: {
         ...base.plugins,

@@ -81,3 +81,16 @@ export function crossoverSentences(comparison: Comparison): string[] {
     (c) => `At ${formatEngineering(c.load, 'A', 4, 'table')}: below it ${name(c.fromPartId)} loses less, above it ${name(c.toPartId)} does (${c.method === 'refined' ? 'found on the engine' : 'interpolated'}).`,
   );
 }
+
+/** Differences smaller than this share of the total loss are noise of the solver, not of the parts. */
+export const DIFFERENCE_RESOLUTION = 1e-4;
+
+/**
+ * A loss difference as the table prints it: signed with its unit, "≈ 0" when it is smaller than
+ * DIFFERENCE_RESOLUTION of `totalW` (the larger total loss compared), "—" when exactly zero.
+ */
+export function differenceText(w: number, totalW: number): string {
+  if (w === 0) return '—';
+  if (Math.abs(w) < DIFFERENCE_RESOLUTION * Math.abs(totalW)) return '≈ 0';
+  return `${w > 0 ? '+' : ''}${formatEngineering(w, 'W', 3, 'table')}`;
+}

@@ -70,14 +70,41 @@ export function tableText(rows: readonly CurveRow[], columns: readonly CurveColu
 
 /** SVG polyline points of the rows in a width × height box (y on a log scale when asked and positive). */
 export function plotPoints(rows: readonly CurveRow[], x: string, y: string, width: number, height: number, logY: boolean): string {
-  const pts = rows.map((r) => [r[x]!, r[y]!] as const).filter(([a, b]) => Number.isFinite(a) && Number.isFinite(b) && (!logY || b > 0));
-  if (pts.length < 2) return '';
+  return plotSeries(rows, x, y, undefined, width, height, logY)[0]?.points ?? '';
+}
+
+/**
+ * One SVG polyline per curve of a family (rows grouped by consecutive values of `series`; all rows one
+ * curve without it), on axes shared by every curve. Curves of fewer than two plottable points are left out.
+ */
+export function plotSeries(
+  rows: readonly CurveRow[],
+  x: string,
+  y: string,
+  series: string | undefined,
+  width: number,
+  height: number,
+  logY: boolean,
+): { name: number | undefined; points: string }[] {
   const ty = (v: number) => (logY ? Math.log10(v) : v);
-  const xs = pts.map(([a]) => a);
-  const ys = pts.map(([, b]) => ty(b));
+  const usable = rows.filter((r) => Number.isFinite(r[x]) && Number.isFinite(r[y]) && (!logY || r[y]! > 0));
+  const groups: CurveRow[][] = [];
+  for (const r of usable) {
+    const last = groups.at(-1);
+    if (last && series !== undefined && last[0]![series] !== r[series]) groups.push([r]);
+    else if (last) last.push(r);
+    else groups.push([r]);
+  }
+  const xs = usable.map((r) => r[x]!);
+  const ys = usable.map((r) => ty(r[y]!));
   const [x0, x1] = [Math.min(...xs), Math.max(...xs)];
   const [y0, y1] = [Math.min(...ys), Math.max(...ys)];
   const sx = (v: number) => (x1 > x0 ? ((v - x0) / (x1 - x0)) * width : width / 2);
   const sy = (v: number) => (y1 > y0 ? height - ((v - y0) / (y1 - y0)) * height : height / 2);
-  return pts.map(([a, b]) => `${sx(a).toFixed(1)},${sy(ty(b)).toFixed(1)}`).join(' ');
+  return groups
+    .filter((g) => g.length >= 2)
+    .map((g) => ({
+      name: series === undefined ? undefined : g[0]![series],
+      points: g.map((r) => `${sx(r[x]!).toFixed(1)},${sy(ty(r[y]!)).toFixed(1)}`).join(' '),
+    }));
 }

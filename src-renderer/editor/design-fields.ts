@@ -1,30 +1,45 @@
-/** Field descriptions of the design-level sections (specification, topology, margins). */
-import { CONTACT_LABELS, contactSchema, TOPOLOGIES } from '../../shared-model/index.ts';
+/**
+ * Field descriptions of the design-level sections (specification, topology, margins). Labels come from
+ * the engine's one label table (shared-model design/field-labels.ts), which the validator's messages and
+ * the command line use too.
+ */
+import {
+  CONTACT_LABEL,
+  CONTACT_LABELS,
+  contactSchema,
+  IDENTITY_LABELS,
+  MARGIN_LABELS,
+  PULSE_SKIPPING_LABELS,
+  SPEC_LABELS,
+  TARGET_LABELS,
+  TOPOLOGIES,
+  TOPOLOGY_LABELS,
+} from '../../shared-model/index.ts';
 import { num, type ChoiceSpec, type FieldSpec } from './field-spec.ts';
 
 export const IDENTITY_FIELDS: FieldSpec[] = [
-  { type: 'text', key: 'name', label: 'Design name' },
-  { type: 'text', key: 'project', label: 'Project', optional: true },
-  { type: 'text', key: 'revision', label: 'Revision' },
-  { type: 'text', key: 'author', label: 'Author' },
-  { type: 'text', key: 'notes', label: 'Notes', multiline: true },
+  { type: 'text', key: 'name', label: IDENTITY_LABELS.name },
+  { type: 'text', key: 'project', label: IDENTITY_LABELS.project, optional: true },
+  { type: 'text', key: 'revision', label: IDENTITY_LABELS.revision },
+  { type: 'text', key: 'author', label: IDENTITY_LABELS.author },
+  { type: 'text', key: 'notes', label: IDENTITY_LABELS.notes, multiline: true },
 ];
 
 export const SPEC_FIELDS: FieldSpec[] = [
-  num('vinMinV', 'Input voltage, lowest', 'V'),
-  num('vinNomV', 'Input voltage, nominal', 'V'),
-  num('vinMaxV', 'Input voltage, highest', 'V'),
-  num('voutV', 'Output voltage', 'V'),
-  num('ratedLoadA', 'Rated load current', 'A'),
-  num('switchingFrequencyHz', 'Switching frequency', 'Hz'),
-  num('ambientC', 'Ambient temperature', '°C'),
-  num('maxDuty', 'Largest duty cycle', '', { help: 'A fraction below 1 ("0.9" or "90 %").' }),
+  num('vinMinV', SPEC_LABELS.vinMinV, 'V'),
+  num('vinNomV', SPEC_LABELS.vinNomV, 'V'),
+  num('vinMaxV', SPEC_LABELS.vinMaxV, 'V'),
+  num('voutV', SPEC_LABELS.voutV, 'V'),
+  num('ratedLoadA', SPEC_LABELS.ratedLoadA, 'A'),
+  num('switchingFrequencyHz', SPEC_LABELS.switchingFrequencyHz, 'Hz'),
+  num('ambientC', SPEC_LABELS.ambientC, '°C'),
+  num('maxDuty', SPEC_LABELS.maxDuty, '', { help: 'A fraction below 1 ("0.9" or "90 %").' }),
 ];
 
 export const LOAD_KIND_CHOICE: ChoiceSpec = {
   type: 'choice',
   key: 'loadKind',
-  label: 'The load is',
+  label: SPEC_LABELS.loadKind,
   options: [
     { value: 'constant-current', label: 'A constant current' },
     { value: 'resistive', label: 'A resistor (Vout / load current)' },
@@ -37,15 +52,15 @@ export const LOAD_KIND_HELP =
   'Sets how the output ripple current divides between the output capacitors and the load: a resistor takes a share, a constant-power load pushes more into the capacitors.';
 
 export const TARGET_FIELDS: FieldSpec[] = [
-  num('efficiencyAtRated', 'Efficiency at rated load', '', { optional: true, help: 'The report says whether the rated point meets it; the Monte Carlo counts the samples that do.' }),
-  num('outputRippleV', 'Output ripple, peak to peak', 'V', { optional: true, help: 'Kept with the design; not yet checked against the results.' }),
-  num('inductorRippleRatio', 'Inductor ripple / rated current', '', { optional: true, help: 'Kept with the design; not yet checked against the results.' }),
+  num('efficiencyAtRated', TARGET_LABELS.efficiencyAtRated, '', { optional: true, help: 'Checked at nominal input and rated load (Results → Sizing and checks); the Monte Carlo counts the samples that meet it.' }),
+  num('outputRippleV', TARGET_LABELS.outputRippleV, 'V', { optional: true, help: 'Sizes the output capacitors and is checked at every input-voltage corner (Results → Sizing and checks).' }),
+  num('inductorRippleRatio', TARGET_LABELS.inductorRippleRatio, '', { optional: true, help: 'Sizes the inductor and is checked at every input-voltage corner (empty: 0.3, common practice; Results → Sizing and checks).' }),
 ];
 
 export const KIND_CHOICE: ChoiceSpec = {
   type: 'choice',
   key: 'kind',
-  label: 'Converter',
+  label: TOPOLOGY_LABELS.kind,
   // One option per topology record, named by the record (shared-model/topology/).
   options: Object.values(TOPOLOGIES).map((t) => ({ value: t.kind, label: `${t.title[0]!.toUpperCase()}${t.title.slice(1)}` })),
 };
@@ -53,7 +68,7 @@ export const KIND_CHOICE: ChoiceSpec = {
 export const RECTIFIER_CHOICE: ChoiceSpec = {
   type: 'choice',
   key: 'rectifier',
-  label: 'Rectifier',
+  label: TOPOLOGY_LABELS.rectifier,
   options: [
     { value: 'diode', label: 'Diode' },
     { value: 'synchronous', label: 'Synchronous MOSFET' },
@@ -63,7 +78,7 @@ export const RECTIFIER_CHOICE: ChoiceSpec = {
 export const LIGHT_LOAD_CHOICE: ChoiceSpec = {
   type: 'choice',
   key: 'lightLoad',
-  label: 'At light load',
+  label: TOPOLOGY_LABELS.lightLoad,
   options: [
     { value: 'forced-pwm', label: 'Keep switching (current may reverse)' },
     { value: 'diode-emulation', label: 'Stop the rectifier at zero current (DCM)' },
@@ -72,14 +87,14 @@ export const LIGHT_LOAD_CHOICE: ChoiceSpec = {
 };
 
 export const PULSE_SKIPPING_FIELDS: FieldSpec[] = [
-  num('minPeakCurrentA', 'Minimum peak current of a pulse', 'A'),
-  num('sleepCurrentA', 'Controller current while asleep', 'A'),
+  num('minPeakCurrentA', PULSE_SKIPPING_LABELS.minPeakCurrentA, 'A'),
+  num('sleepCurrentA', PULSE_SKIPPING_LABELS.sleepCurrentA, 'A'),
 ];
 
 export const SENSE_CHOICE: ChoiceSpec = {
   type: 'choice',
   key: 'senseLocation',
-  label: 'Current-sense resistor',
+  label: TOPOLOGY_LABELS.senseLocation,
   options: [
     { value: 'none', label: 'None' },
     { value: 'input', label: 'In the input line' },
@@ -90,16 +105,16 @@ export const SENSE_CHOICE: ChoiceSpec = {
 };
 
 export const DEAD_TIME_FIELDS: FieldSpec[] = [
-  num('deadTimeBeforeOnS', 'Dead time before switch turn-on', 's'),
-  num('deadTimeAfterOffS', 'Dead time after switch turn-off', 's'),
+  num('deadTimeBeforeOnS', TOPOLOGY_LABELS.deadTimeBeforeOnS, 's'),
+  num('deadTimeAfterOffS', TOPOLOGY_LABELS.deadTimeAfterOffS, 's'),
 ];
 
 export const MARGIN_FIELDS: FieldSpec[] = [
-  num('temperatureMarginK', 'Keep below each temperature limit by', 'K'),
-  num('rippleCurrentDerating', 'Usable share of capacitor ripple rating', ''),
-  num('resistorPowerDerating', 'Usable share of resistor power rating', ''),
-  num('voltageDerating', 'Usable share of voltage ratings', ''),
-  num('requiredLifeHours', 'Required capacitor life', 'h', { optional: true }),
+  num('temperatureMarginK', MARGIN_LABELS.temperatureMarginK, 'K'),
+  num('rippleCurrentDerating', MARGIN_LABELS.rippleCurrentDerating, ''),
+  num('resistorPowerDerating', MARGIN_LABELS.resistorPowerDerating, ''),
+  num('voltageDerating', MARGIN_LABELS.voltageDerating, ''),
+  num('requiredLifeHours', MARGIN_LABELS.requiredLifeHours, 'h', { optional: true }),
 ];
 
 export const SURFACE_OPTIONS = [
@@ -115,7 +130,7 @@ export const CONTACT_HELP =
 export const CONTACT_CHOICE: ChoiceSpec = {
   type: 'choice',
   key: 'contact',
-  label: 'How a person may touch it',
+  label: CONTACT_LABEL,
   // The engine's wording, also printed in the report: the label says what the applied limit is for.
   options: contactSchema.options.map((value) => ({ value, label: CONTACT_LABELS[value] })),
 };

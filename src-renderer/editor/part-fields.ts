@@ -130,6 +130,39 @@ const diode: FieldSpec[] = [
   num('vf0V', 'Forward voltage VF0', 'V'),
   num('rdOhm', 'Slope resistance Rd', 'Ω'),
   num('vfTempCoVPerK', 'VF0 temperature coefficient', 'V/K'),
+  {
+    type: 'group',
+    key: 'vfCurves',
+    label: 'Forward curves VF(IF) from the datasheet',
+    fields: [
+      {
+        type: 'table',
+        key: 'points',
+        label: 'VF(IF) at each Tj',
+        columns: [
+          { key: 'tjC', label: 'Tj', unit: '°C' },
+          { key: 'ifA', label: 'IF', unit: 'A' },
+          { key: 'vfV', label: 'VF', unit: 'V' },
+        ],
+        series: 'tjC',
+        minRows: 4,
+        maxRows: CURVE_POINTS.max,
+        help: 'Rows grouped by Tj, coldest curve first; within a curve IF rising and VF never falling; two or more temperatures. When given, the forward-drop loss integrates VF·i over the rectifier current and VF0, Rd and their coefficient are not used for it.',
+      },
+    ],
+    // Starting curves from the single-value model, at 25 °C and 125 °C (edit or paste the datasheet's over them).
+    defaults: (part) => {
+      const v0 = Number(part.vf0V) || 0.4;
+      const rd = Number(part.rdOhm) || 0.02;
+      const tc = Number(part.vfTempCoVPerK) || -0.0015;
+      const top = Number(part.ifRatingA) || 5;
+      return {
+        points: [25, 125].flatMap((tjC) =>
+          [0.1, 0.5, 1].map((f) => ({ tjC, ifA: f * top, vfV: Math.max(v0 + tc * (tjC - 25), 0.05) + rd * f * top })),
+        ),
+      };
+    },
+  },
   num('qrrC', 'Reverse-recovery charge Qrr', 'C'),
   num('qrrTestA', 'Qrr measured at forward current (blank: rated load)', 'A', { optional: true }),
   num('cjF', 'Junction capacitance Cj', 'F'),
@@ -194,6 +227,31 @@ const inductor: FieldSpec[] = [
     label: 'Inductance falls with current',
     fields: [num('currentA', 'At current', 'A'), num('inductanceH', 'Inductance there', 'H')],
     defaults: (part) => ({ currentA: Number(part.isatA) || 1, inductanceH: 0.8 * (Number(part.inductanceH) || 1e-6) }),
+  },
+  {
+    type: 'group',
+    key: 'inductanceCurve',
+    label: 'Inductance curve L(I) from the datasheet',
+    fields: [
+      {
+        type: 'table',
+        key: 'points',
+        label: 'L against DC current',
+        columns: [
+          { key: 'currentA', label: 'Current', unit: 'A' },
+          { key: 'inductanceH', label: 'Inductance', unit: 'H' },
+        ],
+        minRows: CURVE_POINTS.min,
+        maxRows: CURVE_POINTS.max,
+        help: 'Current rising, inductance never rising. When given, the ripple and the peak follow the curve (flux linkage ∫L di) instead of the inductance and roll-off above; the last inductance is held beyond the last point (the result warns).',
+      },
+    ],
+    // A starting curve of the usual soft roll-off shape from the values above (invented): edit or paste over it.
+    defaults: (part) => {
+      const l = Number(part.inductanceH) || 10e-6;
+      const isat = Number(part.isatA) || 5;
+      return { points: [0, 0.5, 1, 1.5].map((f, k) => ({ currentA: f * isat, inductanceH: l * [1, 0.95, 0.8, 0.5][k]! })) };
+    },
   },
   num('dcr20Ohm', 'DCR at 20 °C', 'Ω'),
   num('isatA', 'Saturation current Isat', 'A'),

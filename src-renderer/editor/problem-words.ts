@@ -1,7 +1,7 @@
 /**
  * A validation problem in the user's words, on the field the user touched.
  *
- * Wording: the validator's sentence names fields by their document paths ("parts.inductor.inductanceH
+ * Wording: the validator's sentence (taken back to paths by pathMessage) names fields by their document paths ("parts.inductor.inductanceH
  * is -0.0000047 H (-4.7 µH); allowed: 1 nH ≤ inductanceH ≤ 1 H."). On screen a range problem reads
  * "Inductor — Inductance: −4.7 µH; must be at least 1 nH and at most 1 H." (a bound set by another
  * field reads "must be below “Input voltage, lowest” (10.8 V)"); any other sentence keeps
@@ -11,7 +11,7 @@
  * them. When the field the user just edited is among the fields the sentence names, the problem is
  * shown on that field, and the other named fields are marked as related.
  */
-import { formatEngineering, type Design, type PartKind, type Problem } from '../../shared-model/index.ts';
+import { formatEngineering, pathMessage, type Design, type PartKind, type Problem } from '../../shared-model/index.ts';
 import { fieldName, findSpec, pathSegments, type FieldName } from './field-labels.ts';
 import { PART_FIELDS } from './part-fields.ts';
 
@@ -61,14 +61,15 @@ function wordsWith(problem: Problem, name: FieldName | null, relabel: (path: str
     const range = rangeWords(problem.allowed, key, (text) => (paths ? text.replace(paths, relabel) : text));
     if (range !== null) return `${name.label}: ${shownValue(problem.value, name.unit)}; must be ${range}.`;
   }
-  let text = paths ? problem.message.replace(paths, relabel) : problem.message;
+  const message = pathMessage(problem);
+  let text = paths ? message.replace(paths, relabel) : message;
   if (name && key.length > 2) text = text.replaceAll(problem.path, name.label).replaceAll(key, name.label);
   return minus(text);
 }
 
 /** The document paths a problem's sentence names, its own first. */
 export function pathsNamed(problem: Problem): string[] {
-  const named = [problem.path, ...(problem.message.match(PATH) ?? [])];
+  const named = [problem.path, ...(pathMessage(problem).match(PATH) ?? [])];
   return [...new Set(named)];
 }
 

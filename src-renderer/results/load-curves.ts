@@ -158,3 +158,18 @@ export function lossStack(sweep: LoadSweep, by: 'mechanism' | 'part', labelOf: (
       : parts.flatMap((p) => p.bands.map((b, k) => ({ key: b.key, label: b.label, values: b.values, tone: { part: p.part, shade: p.bands.length > 1 ? (0.6 * k) / (p.bands.length - 1) : 0 } })));
   return { xValues: sweep.points.map((p) => p.loadA), series, markers: [], points: [] };
 }
+
+/** Points (percentage points) below the peak that the "near the peak" efficiency axis shows. */
+export const NEAR_PEAK_POINTS = 20;
+
+/**
+ * The lower end of the efficiency axis: none (fit to the curve) for the whole curve; near the peak,
+ * NEAR_PEAK_POINTS below the highest efficiency plotted, rounded down to a whole percent, never below 0.
+ */
+export function efficiencyFloor(series: readonly LineSeries[], range: 'whole' | 'near-peak'): number | undefined {
+  if (range === 'whole') return undefined;
+  let peak = -Infinity;
+  for (const s of series) for (const v of s.values) if (v !== null && v > peak) peak = v;
+  if (!Number.isFinite(peak)) return undefined;
+  return Math.max(0, Math.floor((peak - NEAR_PEAK_POINTS / 100) * 100) / 100);
+}

@@ -11,7 +11,9 @@ import {
   checkTolerances,
   compareParts,
   figuresOfMerit,
-  rankParts,
+  checkRankOptions,
+  judgeChunk,
+  reviewDesign,
   sweepFamilies,
   sweepFrequency,
   sweepGrid,
@@ -61,8 +63,14 @@ export function runJob(request: Extract<EngineRequest, { type: 'run' }>): JobRes
         const outcome = compareParts(request.input.design, request.input.options);
         return outcome.ok ? { ok: true, output: outcome.comparison } : refused(outcome.problems);
       }
-      case 'rank':
-        return { ok: true, output: rankParts(request.input.design, request.input.options) };
+      case 'review':
+        return { ok: true, output: reviewDesign(request.input.design) };
+      case 'rank-chunk': {
+        const { design, options, from, to } = request.input;
+        const problems = checkRankOptions(design, options);
+        if (problems.length > 0) return refused(problems);
+        return { ok: true, output: judgeChunk(design, options, from, to) };
+      }
       case 'worst-case': {
         const { design, options = {} } = request.input;
         const problems = checkTolerances(options.tolerances ?? {});

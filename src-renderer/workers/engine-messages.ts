@@ -7,6 +7,7 @@ import type {
   CompareOptions,
   Comparison,
   Design,
+  DesignReview,
   FamilyOptions,
   FiguresOfMerit,
   FrequencySweep,
@@ -17,8 +18,8 @@ import type {
   MonteCarlo,
   MonteCarloOptions,
   OptionProblem,
-  Ranking,
-  RankOptions,
+  PartVerdict,
+  RankLibraryOptions,
   ReportInput,
   ReportModel,
   SweepFamilies,
@@ -41,9 +42,12 @@ export interface EngineJobs {
   grid: { input: { design: Design; options?: Plain<GridOptions> }; output: LoadGrid };
   figures: { input: { design: Design }; output: FiguresOfMerit };
   compare: { input: { design: Design; options: Plain<CompareOptions> }; output: Comparison };
-  rank: { input: { design: Design; options: Plain<RankOptions> }; output: Ranking };
+  /** Library parts [from, to) judged for a role; the pool assembles the chunks (ranking/rank-library.ts). */
+  'rank-chunk': { input: { design: Design; options: Plain<RankLibraryOptions>; from: number; to: number }; output: PartVerdict[] };
   'worst-case': { input: { design: Design; options?: Plain<WorstCaseOptions> }; output: WorstCase };
   'monte-carlo': { input: { design: Design; options: Plain<MonteCarloOptions> }; output: MonteCarlo };
+  /** Sizing and design checks: the design at its corners of Vin at rated load (a few evaluations). */
+  review: { input: { design: Design }; output: DesignReview };
   /** The review report's model (a few hundred electro-thermal evaluations). */
   report: { input: ReportInput; output: ReportModel };
 }

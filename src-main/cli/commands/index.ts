@@ -10,5 +10,6 @@ import { compareCommand } from './compare.ts';
 import { toleranceCommand } from './tolerance.ts';
 import { reportCommand } from './report.ts';
 import { fitCommand } from './fit.ts';
+import { sizeCommand } from './size.ts';
 
-export const COMMANDS: readonly Command[] = [pointCommand, evaluateCommand, sweepCommand, compareCommand, toleranceCommand, fitCommand, reportCommand];
+export const COMMANDS: readonly Command[] = [pointCommand, evaluateCommand, sweepCommand, compareCommand, toleranceCommand, fitCommand, sizeCommand, reportCommand];

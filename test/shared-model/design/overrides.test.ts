@@ -15,12 +15,12 @@ describe('condition overrides take the range of the design field they stand for'
   });
 
   it.each([
-    [{ vinV: 1e308 }, 'conditions.vinV', 'conditions.vinV is 1e+308 V; allowed: 200 mV ≤ conditions.vinV ≤ 2 kV (the range of spec.vinNomV in a design).'], // issue 10 §6 audit case
-    [{ loadA: 1e300 }, 'conditions.loadA', 'conditions.loadA is 1e+300 A; allowed: 0 A ≤ conditions.loadA ≤ 1 kA (the range of spec.ratedLoadA in a design).'], // issue 10 §6 audit case
-    [{ loadA: -1e-3 }, 'conditions.loadA', 'conditions.loadA is -0.001 A (-1 mA); allowed: 0 A ≤ conditions.loadA ≤ 1 kA (the range of spec.ratedLoadA in a design).'],
-    [{ switchingFrequencyHz: 999 }, 'conditions.switchingFrequencyHz', 'conditions.switchingFrequencyHz is 999 Hz; allowed: 1 kHz ≤ conditions.switchingFrequencyHz ≤ 20 MHz (the range of spec.switchingFrequencyHz in a design).'],
-    [{ ambientC: Number.NaN }, 'conditions.ambientC', 'conditions.ambientC is NaN (not a number); allowed: -100 °C ≤ conditions.ambientC ≤ 200 °C (the range of spec.ambientC in a design).'],
-  ] as [ConditionOverrides, string, string][])('refuses %j naming the override, the value and the range', (o, path, message) => {
+    [{ vinV: 1e308 }, 'conditions.vinV', 'Input voltage (conditions.vinV) is 1e+308 V; allowed: 200 mV ≤ conditions.vinV ≤ 2 kV (the range of Input voltage, nominal (spec.vinNomV) in a design).'], // issue 10 §6 audit case
+    [{ loadA: 1e300 }, 'conditions.loadA', 'Load current (conditions.loadA) is 1e+300 A; allowed: 0 A ≤ conditions.loadA ≤ 1 kA (the range of Rated load current (spec.ratedLoadA) in a design).'], // issue 10 §6 audit case
+    [{ loadA: -1e-3 }, 'conditions.loadA', 'Load current (conditions.loadA) is -0.001 A (-1 mA); allowed: 0 A ≤ conditions.loadA ≤ 1 kA (the range of Rated load current (spec.ratedLoadA) in a design).'],
+    [{ switchingFrequencyHz: 999 }, 'conditions.switchingFrequencyHz', 'Switching frequency (conditions.switchingFrequencyHz) is 999 Hz; allowed: 1 kHz ≤ conditions.switchingFrequencyHz ≤ 20 MHz (the range of Switching frequency (spec.switchingFrequencyHz) in a design).'],
+    [{ ambientC: Number.NaN }, 'conditions.ambientC', 'Ambient temperature (conditions.ambientC) is NaN (not a number); allowed: -100 °C ≤ conditions.ambientC ≤ 200 °C (the range of Ambient temperature (spec.ambientC) in a design).'],
+  ] as [ConditionOverrides, string, string][])('refuses %j naming the override by its on-screen label and path, the value and the range', (o, path, message) => {
     const [p, ...rest] = checkConditionOverrides(buck, o);
     expect(rest).toEqual([]);
     expect(p?.path).toBe(path);
@@ -45,8 +45,8 @@ describe('condition overrides pass the validity rules of the design they are app
 
   it('refuses a frequency far too low for the inductor and the output bank; the stated edge is where they start to fit', () => {
     const [p] = checkConditionOverrides(buck, { switchingFrequencyHz: 1000 });
-    expect(p?.message).toContain('parts.inductor.inductanceH (4.7 µH) is far too small for spec.switchingFrequencyHz (1 kHz)');
-    expect(p?.message).toContain('The output bank parts.outputCapacitor (2 × 150 µF) is far too small');
+    expect(p?.message).toContain('Inductor — Inductance (parts.inductor.inductanceH) (4.7 µH) is far too small for Switching frequency (spec.switchingFrequencyHz) (1 kHz)');
+    expect(p?.message).toContain('The output bank Output capacitors (parts.outputCapacitor) (2 × 150 µF) is far too small');
     const edge = Number(/≥ ([\d.]+) kHz/.exec(p?.allowed ?? '')?.[1]) * 1e3;
     expect(edge).toBeGreaterThan(1000);
     expect(checkConditionOverrides(buck, { switchingFrequencyHz: edge * 1.001 })).toEqual([]); // the edge is valid…
@@ -58,6 +58,6 @@ describe('condition overrides pass the validity rules of the design they are app
     // boost, switch position: at 0.2 V the inductor carries 1 A·12/0.2 = 60 A; 10 mΩ drops 0.6 V > half of 0.2 V
     const [p] = checkConditionOverrides(demoDesign('diode-boost'), { vinV: 0.2 });
     expect(p?.path).toBe('conditions.vinV');
-    expect(p?.message).toContain('parts.senseResistor.resistanceOhm (10 mΩ) would drop');
+    expect(p?.message).toContain('Current-sense resistor — Resistance (parts.senseResistor.resistanceOhm) (10 mΩ) would drop');
   });
 });

@@ -71,9 +71,9 @@ describe('validateDesign checks each field against its range, naming path, value
 
   it('refuses wrong types and missing fields with what was found', () => {
     const doc = demoWith('synchronous-buck', { 'spec.voutV': '3.3', 'topology.kind': 'flyback', 'parts.switch.qgC': undefined });
-    expect(problemAt(doc, 'spec.voutV').message).toBe('spec.voutV is the text "3.3"; allowed: 200 mV ≤ voutV ≤ 2 kV.');
+    expect(problemAt(doc, 'spec.voutV').message).toBe('Output voltage (spec.voutV) is the text "3.3"; allowed: 200 mV ≤ voutV ≤ 2 kV.');
     expect(problemAt(doc, 'topology.kind').allowed).toBe('one of "buck", "boost"');
-    expect(problemAt(doc, 'parts.switch.qgC').message).toBe('parts.switch.qgC is missing; allowed: 10 pC ≤ qgC ≤ 10 µC.');
+    expect(problemAt(doc, 'parts.switch.qgC').message).toBe('Control switch — Total gate charge Qg (parts.switch.qgC) is missing; allowed: 10 pC ≤ qgC ≤ 10 µC.');
   });
 
   it('refuses unknown touch roles and names the allowed ones', () => {
@@ -86,18 +86,18 @@ describe('validateDesign applies the cross-field physics rules', () => {
   it('a buck needs Vout below the lowest input and says so', () => {
     const p = problemAt(demoWith('synchronous-buck', { 'spec.voutV': 11 }), 'spec.voutV'); // buck M = D < 1 (Erickson & Maksimović 2nd ed. ch. 2 [from memory])
     expect(p.message).toContain('A buck only steps down');
-    expect(p.message).toContain('spec.vinMinV (10.8 V)');
+    expect(p.message).toContain('Input voltage, lowest (spec.vinMinV) (10.8 V)');
   });
 
   it('a boost needs Vout above the highest input and says so', () => {
     const p = problemAt(demoWith('diode-boost', { 'spec.voutV': 4 }), 'spec.voutV'); // boost M = 1/(1 − D) > 1 (Erickson & Maksimović 2nd ed. ch. 2 [from memory])
     expect(p.message).toContain('A boost only steps up');
-    expect(p.message).toContain('spec.vinMaxV (4.2 V)');
+    expect(p.message).toContain('Input voltage, highest (spec.vinMaxV) (4.2 V)');
   });
 
   it('orders the input voltages min ≤ nom ≤ max', () => {
     expect(problemAt(demoWith('synchronous-buck', { 'spec.vinNomV': 20 }), 'spec.vinNomV').allowed).toBe('10.8 V ≤ vinNomV ≤ 16.8 V');
-    expect(problemAt(demoWith('synchronous-buck', { 'spec.vinMaxV': 9 }), 'spec.vinMaxV').message).toContain('below spec.vinMinV');
+    expect(problemAt(demoWith('synchronous-buck', { 'spec.vinMaxV': 9 }), 'spec.vinMaxV').message).toContain('below Input voltage, lowest (spec.vinMinV)');
   });
 
   it('requires the rectifier part to match topology.rectifier', () => {
@@ -108,7 +108,7 @@ describe('validateDesign applies the cross-field physics rules', () => {
 
   it('requires a sense resistor and its thermal path when a sense location is set', () => {
     const doc = demoWith('hot-fin-buck', { 'topology.senseLocation': 'input' });
-    expect(problemAt(doc, 'parts.senseResistor').message).toContain('topology.senseLocation is "input"');
+    expect(problemAt(doc, 'parts.senseResistor').message).toContain('Current-sense resistor (topology.senseLocation) is "input"');
     expect(problemAt(doc, 'thermal.paths.senseResistor').allowed).toContain('thermal path');
   });
 
@@ -129,7 +129,7 @@ describe('validateDesign applies the cross-field physics rules', () => {
     const low = problemAt(demoWith('synchronous-buck', { 'parts.switch.qgC': 3e-9 }), 'parts.switch.qgC'); // Qg ≥ Qgs + Qgd: the gate-charge curve is cumulative (docs/methods.md §4, Mohan et al. [from memory])
     expect(low.allowed).toBe('qgC ≥ qgsC + qgdC (3.7 nC)');
     const plateau = problemAt(demoWith('synchronous-buck', { 'parts.switch.plateauV': 5 }), 'parts.switch.plateauV'); // Ig,on = (Vdrv − Vpl)/R must be > 0 (docs/methods.md §4)
-    expect(plateau.message).toContain('parts.controller.driveV (5 V)');
+    expect(plateau.message).toContain('Controller and gate driver — Gate drive voltage (parts.controller.driveV) (5 V)');
     const both = demoWith('synchronous-buck', { 'parts.switch.qgsC': undefined, 'parts.switch.qgs2C': undefined });
     expect(problemAt(both, 'parts.switch.qgs2C').allowed).toBe('qgs2C or qgsC (one of them)');
   });

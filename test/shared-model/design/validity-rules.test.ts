@@ -12,7 +12,7 @@ const at = (json: unknown, path: string): Problem | undefined => problemsOf(json
 describe('the audit cases of issue 10 §6 get a clear refusal', () => {
   it.each([5e-324, 1e-300])('an inductance of %s H is refused, naming the field, the value and the range', (l) => {
     const p = at(demoWith('synchronous-buck', { 'parts.inductor.inductanceH': l, 'parts.inductor.rolloff': undefined }), 'parts.inductor.inductanceH');
-    expect(p?.message).toBe(`parts.inductor.inductanceH is ${l} H; allowed: 1 nH ≤ inductanceH ≤ 1 H.`); // design/numbers.ts: our own rule, 1 nH … 1 H
+    expect(p?.message).toBe(`Inductor — Inductance (parts.inductor.inductanceH) is ${l} H; allowed: 1 nH ≤ inductanceH ≤ 1 H.`); // design/numbers.ts: our own rule, 1 nH … 1 H
     expect(p?.value).toBe(l);
   });
 });
@@ -34,7 +34,7 @@ describe('rule 1: the inductor ripple at nominal input stays within 100 × the r
   it('refuses 11.2 nH with the smallest valid inductance', () => {
     const p = at(buck(11.2e-9), 'parts.inductor.inductanceH');
     expect(p?.allowed).toBe('inductanceH ≥ 11.3056 nH at 450 kHz');
-    expect(p?.message).toContain('parts.inductor.inductanceH (11.2 nH) is far too small for spec.switchingFrequencyHz (450 kHz)');
+    expect(p?.message).toContain('Inductor — Inductance (parts.inductor.inductanceH) (11.2 nH) is far too small for Switching frequency (spec.switchingFrequencyHz) (450 kHz)');
     expect(p?.message).toContain('504.712 A peak to peak'); // 11.1 V · 0.2291667 / (11.2 nH · 450 kHz)
   });
   it('accepts 11.4 nH (a poor design, but the models still mean something)', () => {
@@ -59,7 +59,7 @@ describe('rule 2: the period is longer than the switch edges plus the dead times
     const p = at(slow(460e3), 'spec.switchingFrequencyHz');
     expect(p?.allowed).toBe('switchingFrequencyHz < 453.831 kHz');
     expect(p?.message).toContain('1.125 µs + 1.03846 µs');
-    expect(p?.message).toContain('dead times topology.deadTimeBeforeOnS + topology.deadTimeAfterOffS (40 ns)');
+    expect(p?.message).toContain('dead times Dead time before switch turn-on (topology.deadTimeBeforeOnS) + Dead time after switch turn-off (topology.deadTimeAfterOffS) (40 ns)');
   });
   it('accepts 450 kHz, where the edges leave 19 ns of the period', () => {
     expect(at(slow(450e3), 'spec.switchingFrequencyHz')).toBeUndefined();

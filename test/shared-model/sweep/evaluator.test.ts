@@ -5,7 +5,7 @@
  * frequencies and thermal runaway.
  */
 import { describe, expect, it } from 'vitest';
-import { compareParts, DEMO_DESIGNS, DEMO_PARTS_LIBRARY, evaluate, evaluatorFor, figuresOfMerit, ledgerEvaluator, monteCarlo, rankParts, sweepFamilies, sweepFrequency, sweepGrid, sweepLoad, validatePartsLibrary, worstCase } from '../../../shared-model/index.ts';
+import { compareParts, DEMO_DESIGNS, DEMO_PARTS_LIBRARY, evaluate, evaluatorFor, figuresOfMerit, ledgerEvaluator, monteCarlo, rankLibrary, sweepFamilies, sweepFrequency, sweepGrid, sweepLoad, validatePartsLibrary, worstCase } from '../../../shared-model/index.ts';
 import type { Design, PointEvaluator } from '../../../shared-model/index.ts';
 import { SYNC_BUCK, allDirect, design as sketch, valid } from '../../helpers/ledger-designs.ts';
 import { demoDesign as demo } from '../../helpers/demo.ts';
@@ -69,14 +69,14 @@ describe('sweeps, comparison and tolerance analysis give identical results with 
     expect(figuresOfMerit(boost)).toStrictEqual(figuresOfMerit(boost, { evaluator: fromScratch }));
   });
 
-  it('compareParts and rankParts', () => {
+  it('compareParts and rankLibrary', () => {
     const lib = validatePartsLibrary(DEMO_PARTS_LIBRARY);
     if (!lib.ok) throw new Error('the parts library is invalid');
     const fets = lib.library.parts.filter((p) => p.kind === 'mosfet' && p.vdsRatingV === 30);
     const options = { role: 'rectifier' as const, parts: fets.slice(0, 3), sweep: { points: 30 } };
     expect(compareParts(sync, options)).toStrictEqual(compareParts(sync, { ...options, evaluator: fromScratch }));
-    const rank = { role: 'switch' as const, library: lib.library.parts, criterion: 'average-efficiency' as const };
-    expect(rankParts(sync, rank)).toStrictEqual(rankParts(sync, { ...rank, evaluator: fromScratch }));
+    const rank = { role: 'switch' as const, library: lib.library.parts, by: 'weighted-efficiency' as const };
+    expect(rankLibrary(sync, rank)).toStrictEqual(rankLibrary(sync, { ...rank, evaluator: fromScratch }));
   });
 
   it('worstCase and a zero-tolerance Monte Carlo', () => {

@@ -55,7 +55,7 @@ describe('every numeric option of every command goes through one reader with a b
       const r = parseArgs(c, argv(c, f, v));
       expect(r.ok, `--${f.name} ${v}`).toBe(false);
       if (r.ok) continue;
-      expect(r.message).toContain(`"--${f.name}" is ${describeValue(v, f.unit)}`); // team rules, Tests: the option and the value…
+      expect(r.message).toContain(`"--${f.name}"${f.range.label === undefined ? '' : ` (${f.range.label})`} is ${describeValue(v, f.unit)}`); // team rules, Tests: the option (its on-screen label where it has one) and the value…
       expect(r.message).toContain(`allowed: ${optionRangeText(f.name, f.unit, f.range)}`); // …and the allowed range
     }
   });
@@ -72,10 +72,10 @@ describe('every numeric option of every command goes through one reader with a b
 
 describe('the audit cases of issue 10 §6: overrides from another universe are refused (exit 2), never printed as nulls', () => {
   it.each([
-    [['evaluate', 'd.json', '--json', '--vin', '1e308'], 'wattledger evaluate: Option "--vin" is 1e+308 V; allowed: 200 mV ≤ --vin ≤ 2 kV (the range of spec.vinNomV in a design file).'],
-    [['evaluate', 'd.json', '--json', '--load', '1e300'], 'wattledger evaluate: Option "--load" is 1e+300 A; allowed: 0 A ≤ --load ≤ 1 kA (the range of spec.ratedLoadA in a design file).'],
-    [['sweep', 'd.json', '--json', '--vin', '1e308'], 'wattledger sweep: Option "--vin" is 1e+308 V; allowed: 200 mV ≤ --vin ≤ 2 kV (the range of spec.vinNomV in a design file).'],
-    [['point', 'd.json', '--json', '--load', '1e300'], 'wattledger point: Option "--load" is 1e+300 A; allowed: 0 A ≤ --load ≤ 1 kA (the range of spec.ratedLoadA in a design file).'],
+    [['evaluate', 'd.json', '--json', '--vin', '1e308'], 'wattledger evaluate: Option "--vin" (Input voltage) is 1e+308 V; allowed: 200 mV ≤ --vin ≤ 2 kV (the range of spec.vinNomV in a design file).'],
+    [['evaluate', 'd.json', '--json', '--load', '1e300'], 'wattledger evaluate: Option "--load" (Load current) is 1e+300 A; allowed: 0 A ≤ --load ≤ 1 kA (the range of spec.ratedLoadA in a design file).'],
+    [['sweep', 'd.json', '--json', '--vin', '1e308'], 'wattledger sweep: Option "--vin" (Input voltage) is 1e+308 V; allowed: 200 mV ≤ --vin ≤ 2 kV (the range of spec.vinNomV in a design file).'],
+    [['point', 'd.json', '--json', '--load', '1e300'], 'wattledger point: Option "--load" (Load current) is 1e+300 A; allowed: 0 A ≤ --load ≤ 1 kA (the range of spec.ratedLoadA in a design file).'],
   ])('%j', async (args, first) => {
     const io = memoryIo({ 'd.json': demoText('synchronous-buck') });
     expect(await runCli(args, io)).toBe(EXIT.usage);
@@ -101,7 +101,7 @@ describe('--fs overrides the switching frequency through the design\'s own valid
     expect(await runCli(['evaluate', 'd.json', '--fs', '1k'], io)).toBe(EXIT.usage);
     expect(io.stdout).toBe('');
     expect(io.stderr).toContain('wattledger evaluate: the options do not fit this design:');
-    expect(io.stderr).toContain('--fs (1 kHz) takes this design where the models mean nothing');
+    expect(io.stderr).toContain('Switching frequency (--fs) (1 kHz) takes this design where the models mean nothing');
     expect(io.stderr).toContain('the inductor ripple would be 541.223 A peak to peak'); // 11.1 V·0.2291667/(4.7 µH·1 kHz), docs/methods.md §1
     expect(io.stderr).toMatch(/option: --fs \| value: 1000 Hz \(1 kHz\) \| allowed: --fs ≥ [\d.]+ kHz for this design/);
   });

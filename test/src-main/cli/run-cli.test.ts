@@ -30,9 +30,9 @@ describe('runCli dispatches through the command registry', () => {
     [['point', 'a.json', '--json=yes'], /"--json" takes no value/],
     [['evaluate', 'a.json', '--load'], /"--load" needs a value \(A\)/],
     [['evaluate', 'a.json', '--load', '1', '--load', '2'], /"--load" is given twice/],
-    [['evaluate', 'a.json', '--vin', '-3'], /"--vin" is -3 V; allowed: 200 mV ≤ --vin ≤ 2 kV \(the range of spec\.vinNomV in a design file\)/],
-    [['evaluate', 'a.json', '--load', '-1'], /"--load" is -1 A; allowed: 0 A ≤ --load ≤ 1 kA/],
-    [['evaluate', 'a.json', '--ambient', '500'], /"--ambient" is 500 °C; allowed: -100 °C ≤ --ambient ≤ 200 °C/],
+    [['evaluate', 'a.json', '--vin', '-3'], /"--vin" \(Input voltage\) is -3 V; allowed: 200 mV ≤ --vin ≤ 2 kV \(the range of spec\.vinNomV in a design file\)/],
+    [['evaluate', 'a.json', '--load', '-1'], /"--load" \(Load current\) is -1 A; allowed: 0 A ≤ --load ≤ 1 kA/],
+    [['evaluate', 'a.json', '--ambient', '500'], /"--ambient" \(Ambient temperature\) is 500 °C; allowed: -100 °C ≤ --ambient ≤ 200 °C/],
     [['evaluate', 'a.json', '--ambient', '300 K'], /"--ambient": "300 K": "K" reads as kelvin here/],
     [['evaluate', 'a.json', '--vin', '12 A'], /"--vin": "12 A" is in A \(current\), but this field takes voltage \(V\)/],
   ])('refuses %j with exit 2 and the command usage', async (args, message) => {

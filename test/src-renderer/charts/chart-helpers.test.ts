@@ -1,21 +1,34 @@
 import { describe, expect, it } from 'vitest';
-import { axisTitle, fileNameOf, tickText } from '../../../src-renderer/charts/chart-format.ts';
+import { axisTitle, axisUnit, fileNameOf, tickText } from '../../../src-renderer/charts/chart-format.ts';
 import { cellEdges, rampColour, valueRange } from '../../../src-renderer/charts/heat-scale.ts';
 import { lineTable } from '../../../src-renderer/charts/chart-tables.ts';
 import { overlapArea, placeLabels, type Box } from '../../../src-renderer/charts/label-place.ts';
 import { closeTo } from '../../helpers/close-to.ts';
 
 describe('chart text', () => {
-  it('puts the unit in the axis title and engineering prefixes on the ticks', () => {
-    expect(axisTitle({ title: 'Load current', unit: 'A' })).toBe('Load current (A)'); // house style: every number with its unit
-    expect(tickText(0.25, { title: 'Load', unit: 'A' })).toBe('250 mA'); // SI prefix milli = 1e-3 (BIPM SI Brochure, 9th ed., Table 7)
-    expect(tickText(0.9, { title: 'Efficiency', unit: '%' })).toBe('90 %'); // a fraction shown as a percentage (0.9 = 90 %)
+  it('shows one unit per axis: the title carries the prefix of the largest value and the ticks are plain numbers in it', () => {
+    const loss = { title: 'Loss', unit: 'W' };
+    const unit = axisUnit(loss, 0.8);
+    expect(axisTitle(loss, unit)).toBe('Loss (mW)'); // SI prefix milli = 1e-3 (BIPM SI Brochure, 9th ed., Table 7); issue 16 §4: one unit per axis
+    expect(tickText(0.25, loss, unit)).toBe('250'); // 0.25 W = 250 mW (BIPM SI Brochure, 9th ed., Table 7)
+    expect(tickText(-0.005, loss, unit)).toBe('\u22125'); // minus sign U+2212 (ISO 80000-1, signs for numbers)
+    const efficiency = { title: 'Efficiency', unit: '%' };
+    expect(axisTitle(efficiency, axisUnit(efficiency, 0.95))).toBe('Efficiency (%)'); // a fraction shown as a percentage
+    expect(tickText(0.9, efficiency, axisUnit(efficiency, 0.95))).toBe('90'); // 0.9 = 90 %
+    const temperature = { title: 'Temperature', unit: '°C' };
+    expect(axisTitle(temperature, axisUnit(temperature, 1500))).toBe('Temperature (°C)'); // degree Celsius takes no prefix in practice (common practice)
   });
 
-  it('labels only 1, 2 and 5 of each decade on a log axis', () => {
+  it('labels 1, 2 and 5 of each decade and the marks on a log axis', () => {
     const axis = { title: 'f', unit: 'Hz', scale: 'log' as const };
-    expect(tickText(2e5, axis)).toBe('200 kHz'); // SI prefix kilo = 1e3 (BIPM SI Brochure, 9th ed.)
-    expect(tickText(3e5, axis)).toBe(''); // 1-2-5 tick rule for log axes (common practice)
+    const unit = axisUnit(axis, 2e6);
+    expect(axisTitle(axis, unit)).toBe('f (MHz)'); // SI prefix mega = 1e6 (BIPM SI Brochure, 9th ed.)
+    expect(tickText(2e5, axis, unit)).toBe('0.2'); // 200 kHz = 0.2 MHz
+    expect(tickText(3e5, axis, unit)).toBe(''); // 1-2-5 tick rule for log axes (common practice)
+    const load = { title: 'Load current', unit: 'A', scale: 'log' as const, marks: [4] };
+    expect(tickText(4, load)).toBe('4'); // issue 16 §4: the rated load is labelled on the log axis
+    expect(tickText(5, load)).toBe(''); // 5 A lies 0.097 decade from the 4 A mark: left out so the two do not print over each other (our rule)
+    expect(tickText(1, load)).toBe('1'); // decades stay labelled (issue 16 §4)
   });
 
   it('makes a plain file name from a title', () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { compareParts } from '../../../shared-model/index.ts';
-import { candidatesFor, compareRows, crossoverMarkers, winnerAtLoad } from '../../../src-renderer/compare/compare-data.ts';
+import { candidatesFor, compareRows, crossoverMarkers, differenceText, winnerAtLoad } from '../../../src-renderer/compare/compare-data.ts';
 import { closeTo } from '../../helpers/close-to.ts';
 import { demoDesign, demoParts } from '../../helpers/demo.ts';
 
@@ -30,5 +30,11 @@ describe('comparison tables and curves', () => {
     const losses = comparison.alternatives.map((a) => a.evaluation.totalLoss);
     expect(winnerAtLoad(comparison)).toBe(losses.indexOf(Math.min(...losses))); // the minimum of the engine totals
     expect(crossoverMarkers(comparison).map((m) => m.value)).toEqual(comparison.crossovers.map((c) => c.load)); // engine crossovers, unchanged
+  });
+
+  it('prints a difference below 0.01 % of the total loss as "≈ 0" and a real one with its sign', () => {
+    expect(differenceText(-534e-9, 1.2)).toBe('≈ 0'); // issue 16 §4: −534 nW against a 1.2 W total is solver noise
+    expect(differenceText(0.012, 1.2)).toBe('+12.0 mW'); // 1 % of the total is a real difference (SI prefix milli, BIPM SI Brochure 9th ed.)
+    expect(differenceText(-0.012, 1.2)).toBe('\u221212.0 mW'); // minus sign U+2212 (ISO 80000-1)
   });
 });

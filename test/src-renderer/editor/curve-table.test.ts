@@ -4,7 +4,7 @@
  * (SI prefixes: BIPM SI Brochure, 9th ed., Table 7).
  */
 import { describe, expect, it } from 'vitest';
-import { parsePastedTable, plotPoints, tableText } from '../../../src-renderer/editor/curve-table.ts';
+import { parsePastedTable, plotPoints, plotSeries, tableText } from '../../../src-renderer/editor/curve-table.ts';
 
 const COLUMNS = [
   { key: 'vdsV', label: 'VDS', unit: 'V' },
@@ -67,5 +67,21 @@ describe('plotPoints', () => {
     ];
     expect(plotPoints(rows, 'vdsV', 'cossF', 100, 50, true)).toBe('0.0,0.0 50.0,25.0 100.0,50.0'); // log10 spacing: one decade per half height
     expect(plotPoints(rows.slice(0, 1), 'vdsV', 'cossF', 100, 50, true)).toBe('');
+  });
+});
+
+describe('plotSeries', () => {
+  it('draws one line per temperature of a VF(IF, Tj) family on shared axes', () => {
+    const rows = [
+      { tjC: 25, ifA: 0, vfV: 0.4 },
+      { tjC: 25, ifA: 10, vfV: 0.8 },
+      { tjC: 125, ifA: 0, vfV: 0.2 },
+      { tjC: 125, ifA: 10, vfV: 0.6 },
+    ];
+    // x 0…10 A over 100, y 0.2…0.8 V over 60 (top = highest VF): hand-placed corners.
+    expect(plotSeries(rows, 'ifA', 'vfV', 'tjC', 100, 60, false)).toEqual([
+      { name: 25, points: '0.0,40.0 100.0,0.0' },
+      { name: 125, points: '0.0,60.0 100.0,20.0' },
+    ]);
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { findLandmarks, sweepLoad } from '../../../shared-model/index.ts';
-import { efficiencyCurves, lossStack } from '../../../src-renderer/results/load-curves.ts';
+import { efficiencyCurves, efficiencyFloor, lossStack } from '../../../src-renderer/results/load-curves.ts';
 import { SHORT_ROLE, temperatureCurves } from '../../../src-renderer/results/temperature-curves.ts';
 import { closeTo } from '../../helpers/close-to.ts';
 import { labelOf } from './demo.ts';
@@ -51,5 +51,11 @@ describe('load-curve chart data of the demo design', () => {
       const line = all.markers.find((m) => m.axis === 'y' && m.value === h.limitC && m.dashed);
       expect(line?.label, h.part).toContain(SHORT_ROLE[h.part]); // issue 16 §4: each touch limit names its surface's part (engine hazard column)
     }
+  });
+
+  it('zooms the efficiency axis to 20 points below the highest efficiency plotted', () => {
+    const series = [{ key: 'e', label: 'e', values: [0.5, 0.93, 0.9551, null], tone: 0 }];
+    expect(efficiencyFloor(series, 'whole')).toBeUndefined(); // the whole curve: Chart.js fits the axis to the data
+    closeTo(efficiencyFloor(series, 'near-peak') ?? NaN, 0.75, 1e-12); // 95.51 % − 20 points = 75.51 %, rounded down to 75 % (our rule)
   });
 });

@@ -1,25 +1,24 @@
 /**
  * The part of an operating point the loss kernel reads, and a lean, reusable implementation of it.
  *
- * `PointView` is a structural subset of OperatingPoint: the kernel runs on the solver's full record at
- * the end and on a `LeanPoint` inside the electro-thermal loop. `leanPointAt` fills a LeanPoint from the
- * solver's inductor-current shape with the same branch waveforms as operating-point/assemble.ts
- * (t = 0 at control-switch turn-on; on D·T, rectifier D2·T, idle in DCM) and the same exact
- * straight-segment statistics as waveform/stats.ts, without allocating:
+ * `PointView` is a structural subset of OperatingPoint: the kernel runs on a `LeanPoint` inside the
+ * electro-thermal loop and at the end. `leanPointAt` fills a LeanPoint from the solver's inductor-current
+ * shape, reading every branch from the one table the record's waveforms come from (branch-table.ts;
+ * t = 0 at control-switch turn-on; on D·T, rectifier D2·T, idle in DCM), with the exact straight-segment
+ * statistics of waveform/interval-stats.ts, without allocating:
  *   ∫i dt = (i0 + i1)/2·dt, ∫i² dt = (i0² + i0·i1 + i1²)/3·dt, AC RMS from the segments shifted by the mean.
  * Filled `asRecord` it is also the final point of a sweep (`PointSummary`): the numbers of the solver's
- * OperatingPoint record to the last bit (the record's idle-interval formula, interval-stats.ts), without the
+ * OperatingPoint record to the last bit — the record takes its statistics from it (assemble.ts) — without the
  * record's waveforms. test/shared-model/ledger/joint-loop.test.ts checks both against the solver's record.
  * Source: docs/methods.md §1 (exact RMS of straight-line pieces).
  */
-import type { Circuit } from '../operating-point/circuit.ts';
-import { rectifierStressV, switchStressV, turnOffVoltageV, turnOnVoltageV } from '../operating-point/assemble.ts';
-import type { Shape } from '../operating-point/shape.ts';
-import type { Conditions, ConductionMode, Segment, SwitchingEdge } from '../operating-point/types.ts';
+import type { Circuit } from './circuit.ts';
+import { rectifierStressV, switchStressV, turnOffVoltageV, turnOnVoltageV } from './edges.ts';
+import type { Shape } from './shape.ts';
+import type { Conditions, ConductionMode, Segment, SwitchingEdge } from './types.ts';
 import type { Warning } from '../warnings.ts';
-import { intervalStats, newIntervalStats, type IntervalStats } from './interval-stats.ts';
-
-export { newRippleSquares, rippleSquaresOf, rippleSquaresOfLean, type RippleSquares } from './ripple-squares.ts';
+import { intervalStats, newIntervalStats, type IntervalStats } from '../waveform/interval-stats.ts';
+import { branchIntervals, INDUCTOR, INPUT_CAPACITOR, OUTPUT_CAPACITOR, RECTIFIER, SENSE, SWITCH } from './branch-table.ts';
 
 export interface PointView {
   periodS: number;
@@ -122,12 +121,9 @@ function putSegment(p: LeanPoint, k: number, durationS: number, i0A: number, i1A
 export function leanPointAt(c: Circuit, s: Shape, p: LeanPoint, asRecord = false, conditions?: Conditions): LeanPoint {
   const T = c.periodS;
   const io = c.loadA;
-  const tOn = s.d * T;
-  const tOff = s.d2 * T;
-  const tIdle = s.dcm ? s.idle * T : 0;
+  const iin = s.iin;
   const lo = s.dcm ? 0 : s.iv;
   const hi = s.ipk;
-  const iin = s.iin;
   const r = asRecord;
   p.periodS = T;
   p.dutyCycle = s.d;
@@ -136,47 +132,24 @@ export function leanPointAt(c: Circuit, s: Shape, p: LeanPoint, asRecord = false
   p.mode = s.dcm ? 'DCM' : 'CCM';
   p.voutV = s.vo;
   p.inductanceH = s.inductanceH;
-  let mask = 0;
-  if (tOn > 0) { putSegment(p, 0, tOn, lo, hi); mask |= 1; }
-  if (tOff > 0) { putSegment(p, 1, tOff, hi, lo); mask |= 2; }
-  if (tIdle > 0) { putSegment(p, 2, tIdle, 0, 0); mask |= 4; }
-  p.waveforms.inductor.segments = p.segmentSets[mask]!;
-  // Each branch: v[3..7] = on a0 → a1, off b0 → b1, idle c (numbers passed in the typed array, not as
-  // arguments: see interval-stats.ts).
+  // Every branch from the one table (branch-table.ts), its statistics into the point's own record.
   const v = p.intervals;
-  v[0] = tOn;
-  v[1] = tOff;
-  v[2] = tIdle;
-  v[3] = lo; v[4] = hi; v[5] = hi; v[6] = lo; v[7] = 0;
+  branchIntervals(c, s, INDUCTOR, v);
   intervalStats(p.inductor, v, r);
-  v[3] = lo; v[4] = hi; v[5] = 0; v[6] = 0; v[7] = 0;
+  let mask = 0;
+  if (v[0]! > 0) { putSegment(p, 0, v[0]!, v[3]!, v[4]!); mask |= 1; }
+  if (v[1]! > 0) { putSegment(p, 1, v[1]!, v[5]!, v[6]!); mask |= 2; }
+  if (v[2]! > 0) { putSegment(p, 2, v[2]!, v[7]!, v[7]!); mask |= 4; }
+  p.waveforms.inductor.segments = p.segmentSets[mask]!;
+  branchIntervals(c, s, SWITCH, v);
   intervalStats(p.stats.switch, v, r);
-  v[3] = 0; v[4] = 0; v[5] = hi; v[6] = lo; v[7] = 0;
+  branchIntervals(c, s, RECTIFIER, v);
   intervalStats(p.stats.rectifier, v, r);
-  // Capacitor currents from the topology record's intervals (as assemble.ts).
-  v[3] = lo - iin; v[4] = hi - iin; v[7] = -iin;
-  if (c.offFromInput) { v[5] = hi - iin; v[6] = lo - iin; } else { v[5] = -iin; v[6] = -iin; }
+  branchIntervals(c, s, INPUT_CAPACITOR, v);
   intervalStats(p.stats.inputCapacitor, v, r);
-  // Output bank: its share k of the node current less Io (operating-point/load.ts, as assemble.ts).
-  const k = c.capacitorShare;
-  const nOn0 = c.onToOutput ? lo : 0;
-  const nOn1 = c.onToOutput ? hi : 0;
-  v[3] = k * (nOn0 - io); v[4] = k * (nOn1 - io); v[5] = k * (hi - io); v[6] = k * (lo - io); v[7] = k * -io;
+  branchIntervals(c, s, OUTPUT_CAPACITOR, v);
   intervalStats(p.stats.outputCapacitor, v, r);
-  if (c.senseAt === 'switch') {
-    v[3] = lo; v[4] = hi; v[5] = 0; v[6] = 0; v[7] = 0;
-  } else if (c.senseAt === 'inductor') {
-    v[3] = lo; v[4] = hi; v[5] = hi; v[6] = lo; v[7] = 0;
-  } else if (c.senseAt === 'output' && k !== 1) {
-    // The load current: Io plus the load's share (1 − k) of the node ripple (load.ts).
-    v[3] = io + (1 - k) * (nOn0 - io); v[4] = io + (1 - k) * (nOn1 - io); v[5] = io + (1 - k) * (hi - io);
-    v[6] = io + (1 - k) * (lo - io); v[7] = io + (1 - k) * -io;
-  } else {
-    // At the input or output the sense resistor carries DC over the whole period (none: 0 A).
-    const dc = c.senseAt === 'input' ? iin : c.senseAt === 'output' ? io : 0;
-    v[0] = T; v[1] = 0; v[2] = 0;
-    v[3] = dc; v[4] = dc; v[5] = 0; v[6] = 0; v[7] = 0;
-  }
+  branchIntervals(c, s, SENSE, v);
   intervalStats(p.stats.sense, v, r);
   const vo = s.vo;
   const vo1 = vo + c.rOutputSenseOhm * io;

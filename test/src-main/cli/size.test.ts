@@ -1,0 +1,75 @@
+/**
+ * `wattledger size` and the design checks in `evaluate --json`: the records are the engine's unchanged,
+ * the figures meet the hand calculations of a near-lossless design, and bad input names its field.
+ */
+import { describe, expect, it } from 'vitest';
+import { reviewDesign } from '../../../shared-model/index.ts';
+import { EXIT } from '../../../src-main/cli/io.ts';
+import { runCli } from '../../../src-main/cli/main.ts';
+import { closeTo } from '../../helpers/close-to.ts';
+import { demoDesign, demoText } from '../../helpers/demo.ts';
+import { nearIdealDesign } from '../../helpers/near-ideal.ts';
+import { memoryIo } from './memory-io.ts';
+
+// Buck 8–16 V → 5 V, 3 A, 500 kHz, 4.7 µH with near-zero losses (the ideal formulas then hold).
+const buck = nearIdealDesign({ kind: 'buck', rectifier: 'synchronous', vinV: 12, vinMinV: 8, vinMaxV: 16, voutV: 5, loadA: 3, fsHz: 500e3, inductanceH: 4.7e-6, outputCapacitanceF: 47e-6 });
+buck.spec.targets = { inductorRippleRatio: 0.3, outputRippleV: 0.02 };
+const lNeeded = ((16 - 5) * (5 / 16)) / (0.3 * 3 * 500e3); // L = (Vin − Vo)·D/(r·Io·fs) at Vin max = 7.639 µH, Erickson & Maksimović ch. 2
+
+describe('wattledger size', () => {
+  it('prints the sizing and the checks as JSON, the engine\'s records unchanged', async () => {
+    const io = memoryIo({ 'd.json': demoText('diode-boost') });
+    expect(await runCli(['size', 'd.json', '--json'], io)).toBe(EXIT.ok); // a failed check is a finding, exit 0
+    const out = JSON.parse(io.stdout);
+    const engine = JSON.parse(JSON.stringify(reviewDesign(demoDesign('diode-boost'))));
+    expect(out.sizing).toEqual(engine.sizing); // the CLI adds nothing to the engine
+    expect(out.designChecks).toEqual(engine.checks); // the CLI adds nothing to the engine
+    expect(out.checkCounts.pass + out.checkCounts.warn + out.checkCounts.fail).toBe(out.designChecks.length);
+    expect(out.cautions.join(' ')).toMatch(/Estimates only/); // team rules: cautions
+  });
+
+  it('meets the hand sizing of a buck: the inductance for 30 % ripple, and the check names it', async () => {
+    const io = memoryIo({ 'd.json': JSON.stringify(buck) });
+    expect(await runCli(['size', 'd.json', '--json'], io)).toBe(EXIT.ok);
+    const out = JSON.parse(io.stdout);
+    closeTo(out.sizing.inductor.requiredInductanceH.value, lNeeded, 3e-3); // Erickson & Maksimović ch. 2
+    expect(out.sizing.inductor.requiredInductanceH.corner).toBe('vin-max'); // (Vin − Vo)·D grows with Vin (Erickson & Maksimović ch. 2)
+    const ripple = out.designChecks.find((c: { id: string }) => c.id === 'inductor-ripple-ratio');
+    closeTo(ripple.value, ((16 - 5) * (5 / 16)) / (4.7e-6 * 500e3) / 3, 2e-3); // ΔI/Io at Vin max, Erickson & Maksimović ch. 2
+    expect(ripple.status).toBe('fail'); // 0.488 > 0.3
+  });
+
+  it('prints tables: each result with its corner, the checks with their result, the findings and the cautions', async () => {
+    const io = memoryIo({ 'd.json': JSON.stringify(buck) });
+    expect(await runCli(['size', 'd.json'], io)).toBe(EXIT.ok);
+    expect(io.stdout).toMatch(/Inductance for the ripple target\s+7\.639 µH\s+vin-max/); // hand value above, 4 figures
+    expect(io.stdout).toMatch(/Inductor ripple ratio .*FAIL/);
+    expect(io.stdout).toMatch(/the target 30 % needs 7\.64 µH/); // issue 11 §2 sentence
+    expect(io.stdout).toMatch(/Design checks: \d+ pass, \d+ warn, [1-9]\d* fail/);
+    expect(io.stdout).toMatch(/Caution: Estimates only/); // team rules: cautions
+  });
+
+  it('refuses an invalid design naming the field, the value and the allowed range', async () => {
+    const bad = JSON.parse(JSON.stringify(buck));
+    bad.spec.ratedLoadA = -3;
+    const io = memoryIo({ 'd.json': JSON.stringify(bad) });
+    expect(await runCli(['size', 'd.json'], io)).toBe(EXIT.invalidDesign);
+    expect(io.stderr).toMatch(/spec\.ratedLoadA/); // the field
+    expect(io.stderr).toMatch(/-3/); // the value
+    expect(io.stdout).toBe('');
+  });
+});
+
+describe('wattledger evaluate --json carries the design checks', () => {
+  it('every item has id, value, limit, unit, passed and source (issue 11, done when)', async () => {
+    const io = memoryIo({ 'd.json': demoText('synchronous-buck') });
+    expect(await runCli(['evaluate', 'd.json', '--json'], io)).toBe(EXIT.ok);
+    const out = JSON.parse(io.stdout);
+    expect(out.designChecks.length).toBeGreaterThan(10); // issue 11 §2 lists more than ten kinds
+    for (const c of out.designChecks) {
+      expect(Object.keys(c)).toEqual(expect.arrayContaining(['id', 'value', 'limit', 'unit', 'passed', 'source'])); // issue 11 "Done when"
+    }
+    expect(out.designChecks.map((c: { id: string }) => c.id)).toContain('efficiency-at-rated'); // the demo sets an efficiency target
+    expect(out.checks.length).toBeGreaterThan(0); // the ledger's own rating checks stay as they were
+  });
+});
