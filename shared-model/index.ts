@@ -222,6 +222,13 @@ export type { PhaseOptions } from './interleave/evaluate-phases.ts';
 export { evaluatePhases } from './interleave/evaluate-phases.ts';
 export { delayWaveform, interleavedSum, sumWaveforms } from './interleave/phase-shift.ts';
 export { phaseCount, phaseDesign, phaseLoads } from './interleave/phase-design.ts';
+export { asEvaluation } from './interleave/as-evaluation.ts';
+export type { PhaseSelection } from './interleave/phase-evaluator.ts';
+export { designPointEvaluator, designSelection, evaluateDesign, optimalPhases, phasedEvaluator } from './interleave/phase-evaluator.ts';
+export type { PhaseSummary, SharedCurrentSummary } from './interleave/summary.ts';
+export { phaseSummary } from './interleave/summary.ts';
+export type { PhaseCurve, PhaseCurvePoint, PhaseShedding, SheddingOptions, ShedLandmark } from './interleave/shedding.ts';
+export { findCrossover, phaseShedding, SHEDDING_DEFINITION, SUGGESTED_HYSTERESIS } from './interleave/shedding.ts';
 
 // --- sizing from the specification ---
 export type * from './sizing/types.ts';
@@ -233,6 +240,8 @@ export type { SizingOptions } from './sizing/size-design.ts';
 export { sizeDesign, sizeFromCorners } from './sizing/size-design.ts';
 export type { HandInput, HandSizing } from './sizing/hand-method.ts';
 export { handSizing } from './sizing/hand-method.ts';
+export type { SizingRow } from './sizing/rows.ts';
+export { sizingRows } from './sizing/rows.ts';
 
 // --- mission profile (issue 11 §4) ---
 export type { MissionProfile, MissionRow } from './mission/schema.ts';

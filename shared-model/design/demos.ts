@@ -5,6 +5,7 @@
  */
 import diodeBoost from '../../assets/designs/diode-boost.json';
 import hotFinBuck from '../../assets/designs/hot-fin-buck.json';
+import multiphaseBuck from '../../assets/designs/multiphase-buck.json';
 import synchronousBuck from '../../assets/designs/synchronous-buck.json';
 import partsLibrary from '../../assets/parts/library.json';
 
@@ -35,6 +36,12 @@ export const DEMO_DESIGNS: readonly DemoDesign[] = [
     title: 'Bench accessory 5 V supply with an exposed clip fin',
     purpose: 'Touch-hazard example: every part within its limits, but the exposed fin is too hot to touch.',
     json: hotFinBuck,
+  },
+  {
+    id: 'multiphase-buck',
+    title: 'Motion-controller backplane 1.8 V rail (four-phase buck)',
+    purpose: 'Interleaving: 12 V bus to 1.8 V at 60 A in four phases at 400 kHz with shared banks and fin, ±5 % sharing, phases shed at light load.',
+    json: multiphaseBuck,
   },
 ];
 

@@ -13,7 +13,7 @@
  * Never throws for physics; every number finite (the one-phase records are).
  */
 import type { Design, Role } from '../design/schema.ts';
-import { ledgerEvaluator, type EvaluateOptions } from '../ledger/evaluate.ts';
+import { ledgerEvaluator, type EvaluateOptions, type LedgerEvaluator } from '../ledger/evaluate.ts';
 import type { Evaluation, LossTerm } from '../ledger/types.ts';
 import type { Conditions } from '../operating-point/types.ts';
 import type { Warning, WarningCode } from '../warnings.ts';
@@ -45,12 +45,33 @@ const CHECK_WARNING: Partial<Record<string, WarningCode>> = {
 
 /** Evaluates `design` (any phase count) at `conditions`; `activePhases` below the design's count sheds phases. */
 export function evaluatePhases(design: Design, conditions?: Partial<Conditions>, options?: PhaseOptions): PhasedEvaluation {
+  return evaluatePhasesWith(design, phaseLedgers(design), conditions, options);
+}
+
+/** The one-phase ledger evaluators of a design, one per active-phase count, made when first asked for. */
+export type PhaseLedgers = (activePhases: number) => LedgerEvaluator;
+
+/** One-phase ledger evaluators for `design`, kept for as long as the caller keeps the function. */
+export function phaseLedgers(design: Design): PhaseLedgers {
+  const made = new Map<number, LedgerEvaluator>();
+  return (active) => {
+    let e = made.get(active);
+    if (!e) {
+      e = ledgerEvaluator(phaseDesign(design, active));
+      made.set(active, e);
+    }
+    return e;
+  };
+}
+
+/** evaluatePhases with the caller's one-phase evaluators (sweeps reuse them point after point). */
+export function evaluatePhasesWith(design: Design, ledgers: PhaseLedgers, conditions?: Partial<Conditions>, options?: PhaseOptions): PhasedEvaluation {
   const phases = phaseCount(design);
   const active = Math.min(phases, Math.max(1, Math.round(options?.activePhases ?? phases)));
   if (!Number.isFinite(active)) throw new RangeError(`activePhases must be a whole number from 1 to ${phases}`);
   const totalA = conditions?.loadA ?? design.spec.ratedLoadA;
   const loads = phaseLoads(totalA, active, active > 1 ? (design.topology.phaseMismatch ?? 0) : 0);
-  const evaluator = ledgerEvaluator(phaseDesign(design, active));
+  const evaluator = ledgers(active);
   const worst = evaluator.evaluate({ ...conditions, loadA: loads[0]! }, options);
   const other = active > 1 && loads[1] !== loads[0] ? evaluator.evaluate({ ...conditions, loadA: loads[1]! }, options) : worst;
   const records = loads.map((_, k) => (k === 0 ? worst : other));
@@ -74,11 +95,11 @@ export function evaluatePhases(design: Design, conditions?: Partial<Conditions>,
   const composeShared = (role: Role, terms: LossTerm[], current: SharedCurrent | null): void => {
     const scale = current ? resistiveScale(current) : 1;
     const watts = terms.reduce((a, t) => a + t.watts, 0);
-    for (const t of terms) rows.push({ ...t, phase: null });
+    for (const t of terms) rows.push({ ...t, phase: 'shared' });
     const temp = worst.temperatures.find((t) => t.part === role);
     if (!temp) return;
     const hot = rescaledTemperature(temp, ambientC, watts, marginK);
-    temperatures.push({ ...hot, phase: null });
+    temperatures.push({ ...hot, phase: 'shared' });
     if (current && Math.abs(hot.celsius - temp.celsius) > RESCALE_VALID_K)
       sharedWarnings.push({
         code: 'model-limit', severity: 'info', part: role,
@@ -92,14 +113,14 @@ export function evaluatePhases(design: Design, conditions?: Partial<Conditions>,
         : c.check === 'resistor-power' ? c.value * scale
         : c.value;
       const check = rescaledCheck(c, value);
-      checks.push({ ...check, phase: null });
+      checks.push({ ...check, phase: 'shared' });
       const code = CHECK_WARNING[c.check];
       if (!check.ok && code)
         sharedWarnings.push({ code, severity: code === 'over-temperature' ? 'danger' : 'caution', part: role, message: `${temp.partName} (shared by every phase): ${c.note} — ${check.value.toPrecision(4)} ${c.unit} against ${check.limit.toPrecision(4)} ${c.unit}.` });
     }
     for (const h of worst.hazards.filter((x) => x.part === role)) {
       const hz = rescaledHazard(h, hot.surfaceC);
-      hazards.push({ ...hz, phase: null });
+      hazards.push({ ...hz, phase: 'shared' });
       if (hz.exceeded) sharedWarnings.push({ code: 'burn-hazard', severity: 'danger', part: role, message: `${h.partName} (shared by every phase): surface ${hz.surfaceC.toFixed(1)} °C against the touch limit ${h.row.limitC} °C. ${h.caution}` });
     }
   };
@@ -117,7 +138,7 @@ export function evaluatePhases(design: Design, conditions?: Partial<Conditions>,
   composeShared('controller', controllerTerms(records), null);
 
   const phaseLossW = records.map((_, k) => rows.reduce((a, t) => (t.phase === k + 1 ? a + t.watts : a), 0));
-  const sharedLossW = rows.reduce((a, t) => (t.phase === null ? a + t.watts : a), 0);
+  const sharedLossW = rows.reduce((a, t) => (t.phase === 'shared' ? a + t.watts : a), 0);
   const totalLoss = phaseLossW.reduce((a, b) => a + b, 0) + sharedLossW;
   const outputPower = records.reduce((a, r) => a + r.outputPower, 0);
   const inputPower = outputPower + totalLoss;

@@ -7,8 +7,8 @@ import type { Evaluation, Hazard, LossTerm, PartTemperature, RatingCheck } from 
 import type { Conditions, Waveform } from '../operating-point/types.ts';
 import type { Warning } from '../warnings.ts';
 
-/** Which power stage a row belongs to: 1 … N, or null for a part every phase shares. */
-export type PhaseIndex = number | null;
+/** Which power stage a row belongs to: 1 … N, or "shared" for a part every phase shares. */
+export type PhaseIndex = number | 'shared';
 
 /** One ledger row: a loss term of one phase, or of a shared part. */
 export interface PhaseLossRow extends LossTerm {

@@ -6,7 +6,7 @@ import { readFileSync } from 'node:fs';
 import { DEMO_DESIGNS, validateDesign, validatePartsLibrary } from '../../shared-model/index.ts';
 import type { Design, Part } from '../../shared-model/index.ts';
 
-export type DemoId = 'synchronous-buck' | 'diode-boost' | 'hot-fin-buck';
+export type DemoId = 'synchronous-buck' | 'diode-boost' | 'hot-fin-buck' | 'multiphase-buck';
 
 const asset = (path: string): string => readFileSync(new URL(`../../assets/${path}`, import.meta.url), 'utf8');
 

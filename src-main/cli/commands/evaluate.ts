@@ -7,7 +7,7 @@
  * designNotices and cautions (README.md, "evaluate"). A point with no
  * steady state (thermal runaway) exits 0 with converged false and a warning naming the part.
  */
-import { evaluate, reviewDesign } from '../../../shared-model/index.ts';
+import { evaluateDesign, phaseSummary, reviewDesign } from '../../../shared-model/index.ts';
 import { CAUTIONS } from '../cautions.ts';
 import type { Command } from '../command.ts';
 import { loadDesign } from '../design-file.ts';
@@ -23,17 +23,24 @@ export const evaluateCommand: Command = {
   details: [
     'Losses are in W, temperatures in °C, margins in K. A point with no steady state (thermal runaway)',
     'is reported with converged: false and a warning naming the part; its numbers describe no steady state.',
+    'A multiphase design: the same keys for the whole converter (each term summed over the phases, each part',
+    'at its hottest phase) plus phases: per-phase loads, per-phase ledger rows (phase "shared": a shared part),',
+    'per-phase temperatures and the shared banks\' summed currents against one phase alone.',
   ],
   async run(args, io) {
     const loaded = await loadDesign(args.positionals[0] ?? '', io, 'wattledger evaluate');
     if (!loaded.ok) return EXIT.invalidDesign;
     const overrides = conditionOverrides(args);
     if (!overridesFit(loaded.design, overrides, io, 'wattledger evaluate')) return EXIT.usage;
-    const result = evaluate(loaded.design, overrides);
+    const { evaluation: result, phased } = evaluateDesign(loaded.design, overrides);
     if (args.switches.has('json')) {
       // The design checks are the design's own (its corners at rated load), whatever point was asked for.
       const designChecks = reviewDesign(loaded.design).checks;
-      const record = { command: 'evaluate', design: loaded.design.name, ...result, designChecks, designNotices: loaded.notices, cautions: CAUTIONS };
+      const record = {
+        command: 'evaluate', design: loaded.design.name, ...result,
+        ...(phased ? { phases: phaseSummary(phased) } : {}),
+        designChecks, designNotices: loaded.notices, cautions: CAUTIONS,
+      };
       io.out(JSON.stringify(record, null, 2));
     } else io.out(renderEvaluation(loaded.design, result, loaded.notices));
     return EXIT.ok;

@@ -6,7 +6,7 @@
  * of merit.
  * In CSV mode the cautions go to stderr so the table stays clean.
  */
-import { checkLoadSweepOptions, figuresOfMerit, sweepWithLandmarks } from '../../../shared-model/index.ts';
+import { checkLoadSweepOptions, designPointEvaluator, figuresOfMerit, phaseCount, phaseShedding, sweepWithLandmarks } from '../../../shared-model/index.ts';
 import type { LoadSweepOptions, SweepSpacing } from '../../../shared-model/index.ts';
 import { CAUTION_LINE } from '../cautions.ts';
 import type { Command } from '../command.ts';
@@ -26,6 +26,9 @@ const FLAG_OF_PATH: Record<string, string> = {
   'conditions.switchingFrequencyHz': '--fs',
   'conditions.ambientC': '--ambient',
 };
+
+/** Points per active-phase curve in the JSON's phaseShedding (each is N evaluations of one phase). */
+const SHEDDING_POINTS = 60;
 
 export const sweepCommand: Command = {
   name: 'sweep',
@@ -52,6 +55,9 @@ export const sweepCommand: Command = {
     'and value when found, else found: false with a reason. Peak, knee and figures of merit use regulated, converged points',
     'only; a point past the regulation limit has regulated: false and the output it reaches (voutV). The knee is our own',
     'definition, printed with it.',
+    'A multiphase design (topology.phases > 1) sweeps every phase, or the best phase count at each load when',
+    'it sheds phases (topology.phaseShedding); JSON then adds phaseShedding: the efficiency curve of each',
+    'active-phase count, the crossover loads with suggested hysteresis thresholds, and the envelope.',
   ],
   async run(args, io) {
     if (args.switches.has('csv') && args.switches.has('json')) {
@@ -69,6 +75,7 @@ export const sweepCommand: Command = {
       points: args.numbers.points,
       spacing: args.texts.spacing as SweepSpacing | undefined,
       conditions: { vinV, switchingFrequencyHz, ambientC },
+      evaluator: designPointEvaluator(design),
     };
     const problems = checkLoadSweepOptions(design, options);
     if (problems.length > 0) {
@@ -78,13 +85,20 @@ export const sweepCommand: Command = {
     }
     const { sweep, landmarks } = sweepWithLandmarks(design, options, { kneeThresholdPoints: args.numbers['knee-points'] });
     const fixed = { vinV: sweep.vinV, ambientC: sweep.ambientC };
+    const figures = figuresOfMerit(design, { conditions: fixed, evaluator: options.evaluator });
     if (args.switches.has('csv')) {
       io.out(sweepCsv(sweep));
       io.err(CAUTION_LINE);
     } else if (args.switches.has('json')) {
-      io.out(JSON.stringify(sweepJson(design, sweep, landmarks, figuresOfMerit(design, { conditions: fixed })), null, 2));
+      const json = sweepJson(design, sweep, landmarks, figures) as Record<string, unknown>;
+      if (phaseCount(design) > 1)
+        json.phaseShedding = phaseShedding(design, {
+          fromA: options.fromA, toA: options.toA, spacing: options.spacing, conditions: options.conditions,
+          points: Math.min(options.points ?? SHEDDING_POINTS, SHEDDING_POINTS),
+        });
+      io.out(JSON.stringify(json, null, 2));
     } else {
-      io.out(renderSweep(design, sweep, landmarks, figuresOfMerit(design, { conditions: fixed })));
+      io.out(renderSweep(design, sweep, landmarks, figures));
     }
     return EXIT.ok;
   },

@@ -17,7 +17,7 @@ function ideal(d: Design, vinV: number): { duty: number; meanA: number; rippleA:
   const L = d.parts.inductor.inductanceH;
   if (d.topology.kind === 'buck') {
     const duty = voutV / vinV;
-    return { duty, meanA: ratedLoadA, rippleA: ((vinV - voutV) * duty) / (L * fs) }; // docs/methods.md §1: buck ΔI = (Vin − Vo)·D/(L·fs)
+    return { duty, meanA: ratedLoadA / (d.topology.phases ?? 1), rippleA: ((vinV - voutV) * duty) / (L * fs) }; // docs/methods.md §1: buck ΔI = (Vin − Vo)·D/(L·fs); per phase: I/N (docs/methods.md §15)
   }
   const duty = 1 - vinV / voutV;
   return { duty, meanA: ratedLoadA / (1 - duty), rippleA: (vinV * duty) / (L * fs) }; // docs/methods.md §1: boost ΔI = Vin·D/(L·fs), IL = Io/D'

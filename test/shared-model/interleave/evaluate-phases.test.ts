@@ -53,7 +53,7 @@ describe('evaluatePhases: a 2-phase buck near D = 0.25 (issue 13 "Done when")', 
 
   it('books the output bank ESR loss at the summed RMS: I²rms·ESR/count', () => {
     const esr = d.parts.outputCapacitor.part.esrOhm;
-    const watts = r.rows.filter((t) => t.phase === null && t.part === 'outputCapacitor').reduce((a, t) => a + t.watts, 0);
+    const watts = r.rows.filter((t) => t.phase === 'shared' && t.part === 'outputCapacitor').reduce((a, t) => a + t.watts, 0);
     closeTo(watts, r.shared.outputCapacitor.rmsA ** 2 * esr / d.parts.outputCapacitor.count, 1e-6); // I²R of a parallel bank, common practice (esrTempCo 0)
   });
 });
@@ -62,7 +62,7 @@ describe('evaluatePhases: per-phase ledger, thermal and sharing', () => {
   it('puts one row set per phase and the shared parts once, and the totals add up', () => {
     const r = evaluatePhases(multiphase(3));
     for (const k of [1, 2, 3]) expect(r.rows.filter((t) => t.phase === k && t.part === 'switch').length).toBeGreaterThan(0);
-    expect(r.rows.filter((t) => t.phase === null && t.part === 'controller' && t.mechanism === 'quiescent')).toHaveLength(1);
+    expect(r.rows.filter((t) => t.phase === 'shared' && t.part === 'controller' && t.mechanism === 'quiescent')).toHaveLength(1);
     closeTo(r.totalLoss, r.rows.reduce((a, t) => a + t.watts, 0), 1e-12); // energy bookkeeping (first law)
     closeTo(r.inputPower, r.outputPower + r.totalLoss, 1e-12); // first law
     closeTo(r.outputPower, 3 * 20, 1e-9); // Pout = Vout·Io
@@ -87,7 +87,7 @@ describe('evaluatePhases: per-phase ledger, thermal and sharing', () => {
     expect(tj(1)).toBeGreaterThan(tj(2));
     const cond = (k: number) => r.rows.find((t) => t.phase === k && t.part === 'rectifier' && t.mechanism === 'conduction')!.watts;
     closeTo(cond(1) / cond(2), (11 / 9) ** 2, 0.03); // I²R at nearly equal temperatures (θ 0.5 K/W), textbook
-    expect(r.checks.every((c) => c.phase === 1 || c.phase === null)).toBe(true);
+    expect(r.checks.every((c) => c.phase === 1 || c.phase === 'shared')).toBe(true);
   });
 
   it('collects every phase on a shared heatsink: Ts = Ta + θSA·ΣP (docs/methods.md §10)', () => {
@@ -98,7 +98,7 @@ describe('evaluatePhases: per-phase ledger, thermal and sharing', () => {
       x.thermal.paths.rectifier = sink;
     });
     const r = evaluatePhases(d);
-    const onSink = r.rows.filter((t) => t.phase !== null && (t.part === 'switch' || t.part === 'rectifier')).reduce((a, t) => a + t.watts, 0);
+    const onSink = r.rows.filter((t) => t.phase !== 'shared' && (t.part === 'switch' || t.part === 'rectifier')).reduce((a, t) => a + t.watts, 0);
     const heatsink = r.phaseRecords[0]!.heatsinks[0]!;
     closeTo(heatsink.celsius, 25 + 4 * onSink, 1e-6); // docs/methods.md §10 shared sink
   });
@@ -108,7 +108,7 @@ describe('evaluatePhases: per-phase ledger, thermal and sharing', () => {
       x.thermal.paths.inputCapacitor = { kind: 'direct', thetaJaKPerW: 200 };
     }, { inputEsrOhm: 0.2 });
     const r = evaluatePhases(d, { vinV: 12 });
-    const bank = r.temperatures.find((t) => t.part === 'inputCapacitor' && t.phase === null)!;
+    const bank = r.temperatures.find((t) => t.part === 'inputCapacitor' && t.phase === 'shared')!;
     const one = r.phaseRecords[0]!.temperatures.find((t) => t.part === 'inputCapacitor')!;
     expect(Math.abs(bank.celsius - one.celsius)).toBeGreaterThan(10);
     expect(r.warnings.some((w) => w.code === 'model-limit' && w.part === 'inputCapacitor')).toBe(true);
