@@ -204,7 +204,7 @@ export {
 } from './tolerance/variation.ts';
 export type { CornerTemperature, ToleranceCorner, WorstCase, WorstCaseOptions } from './tolerance/worst-case.ts';
 export { cornerVariations, worstCase } from './tolerance/worst-case.ts';
-export type { MonteCarlo, MonteCarloDistribution, MonteCarloOptions, PartDistribution } from './tolerance/monte-carlo.ts';
+export type { MonteCarlo, MonteCarloDistribution, MonteCarloOptions, MonteCarloSampleChunk, PartDistribution } from './tolerance/monte-carlo.ts';
 export {
   checkMonteCarloOptions,
   DEFAULT_MONTE_CARLO_SAMPLES,
@@ -212,6 +212,8 @@ export {
   drawVariation,
   MAX_MONTE_CARLO_SAMPLES,
   monteCarlo,
+  runMonteCarloSamples,
+  summarizeMonteCarlo,
 } from './tolerance/monte-carlo.ts';
 
 // --- interleaved phases (issue 13 §1) ---
@@ -238,6 +240,8 @@ export type { SizingOptions } from './sizing/size-design.ts';
 export { sizeDesign, sizeFromCorners } from './sizing/size-design.ts';
 export type { HandInput, HandSizing } from './sizing/hand-method.ts';
 export { handSizing } from './sizing/hand-method.ts';
+export type { SizingRow } from './sizing/rows.ts';
+export { sizingRows } from './sizing/rows.ts';
 
 // --- mission profile (issue 11 §4) ---
 export type { MissionProfile, MissionRow } from './mission/schema.ts';

@@ -134,6 +134,19 @@ export function forwardLossW(points: readonly VfPoint[], segments: readonly Segm
   return ((1 - w) * lowerJ + w * upperJ) / periodS;
 }
 
+/**
+ * dP/dT of forwardLossW at tC, W/K: the two bracketing curves' losses differ by (upper − lower) over their
+ * temperature gap (P is linear in T between them); 0 outside the curves' temperatures (the end curve held).
+ */
+export function forwardLossSlopeWPerK(points: readonly VfPoint[], segments: readonly Segment[], periodS: number, tC: number, conducts: (s: Segment) => boolean): number {
+  if (!(periodS > 0)) return 0;
+  const { lower, upper, w } = bracket(forwardCurvesOf(points), tC);
+  if (!(w > 0) || lower === upper) return 0;
+  let diff = 0;
+  for (const s of segments) if (conducts(s)) diff += segmentEnergy(upper, s) - segmentEnergy(lower, s);
+  return diff / periodS / (upper.tjC - lower.tjC);
+}
+
 /** The temperatures the table covers, °C. */
 export function forwardTableSpanC(points: readonly VfPoint[]): { lowC: number; highC: number } {
   const curves = forwardCurvesOf(points);

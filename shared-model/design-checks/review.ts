@@ -5,6 +5,7 @@
  * corner left out is always named by one of them.
  * Source: docs/methods.md §23 (sizing), §24 (checks).
  */
+import { TARGET_LABELS } from '../design/field-labels.ts';
 import type { Design } from '../design/schema.ts';
 import { isUsablePoint } from '../ledger/regulated.ts';
 import { solveCorners } from '../sizing/corners.ts';
@@ -37,9 +38,9 @@ export function reviewDesign(design: Design, options?: SizingOptions): DesignRev
   for (const c of checks) counts[c.status] += 1;
   const notes: string[] = [];
   const targets = design.spec.targets;
-  if (targets?.outputRippleV === undefined) notes.push('No output ripple target ("Output ripple, peak to peak" is empty): the output ripple is not checked.');
-  if (targets?.efficiencyAtRated === undefined) notes.push('No efficiency target ("Efficiency at rated load" is empty): the efficiency is not checked.');
-  if (targets?.inductorRippleRatio === undefined) notes.push('No inductor ripple target ("Inductor ripple / rated current" is empty): the common-practice 30 % is used.');
+  if (targets?.outputRippleV === undefined) notes.push(`No output ripple target ("${TARGET_LABELS.outputRippleV}" is empty): the output ripple is not checked.`);
+  if (targets?.efficiencyAtRated === undefined) notes.push(`No efficiency target ("${TARGET_LABELS.efficiencyAtRated}" is empty): the efficiency is not checked.`);
+  if (targets?.inductorRippleRatio === undefined) notes.push(`No inductor ripple target ("${TARGET_LABELS.inductorRippleRatio}" is empty): the common-practice 30 % is used.`);
   const left = corners.filter((c) => !isUsablePoint(c.evaluation));
   if (left.length > 0) {
     notes.push(`Corners left out of the checks (not regulated or no steady state): ${left.map((c) => c.corner.label).join('; ')}.`);

@@ -10,16 +10,13 @@
  * Estimates only: temperatures must be measured on hardware.
  * Source: docs/methods.md §10, §24.
  */
-import type { Design, Role } from '../design/schema.ts';
+import type { Design } from '../design/schema.ts';
+import { ROLE_LABELS } from '../report/labels.ts';
 import type { SolvedCorner } from '../sizing/corners.ts';
 import type { DesignCheck, DesignCheckId } from './types.ts';
 import { designCheck, worstOf } from './verdict.ts';
 import { eng, plain } from './words.ts';
 
-const LABELS: Record<Role, string> = {
-  switch: 'Switch', rectifier: 'Rectifier', inductor: 'Inductor', inputCapacitor: 'Input capacitor',
-  outputCapacitor: 'Output capacitor', senseResistor: 'Sense resistor', controller: 'Controller',
-};
 
 export function temperatureChecks(design: Design, usable: readonly SolvedCorner[]): DesignCheck[] {
   const first = usable[0];
@@ -33,10 +30,10 @@ export function temperatureChecks(design: Design, usable: readonly SolvedCorner[
     const t = tOf(at)!;
     const kind = t.kind === 'junction' ? 'junction' : 'hot spot';
     out.push(designCheck({
-      id: `temperature-${role}` as DesignCheckId, label: `${LABELS[role]} temperature`, part: role,
+      id: `temperature-${role}` as DesignCheckId, label: `${ROLE_LABELS[role]} temperature`, part: role,
       value: t.celsius, limit: t.limit - margin, unit: '°C', bound: 'max', failAt: t.limit, at,
       source: 'docs/methods.md §10, §24 (estimate: measure on hardware)',
-      message: (s) => `The ${LABELS[role].toLowerCase()} ${kind} reaches about ${eng(t.celsius, '°C')} at ${at.corner.label}` +
+      message: (s) => `The ${ROLE_LABELS[role].toLowerCase()} ${kind} reaches about ${eng(t.celsius, '°C')} at ${at.corner.label}` +
         (s === 'pass'
           ? `, at least ${plain(margin)} K below its ${eng(t.limit, '°C')} limit (estimate: measure on hardware).`
           : s === 'warn'

@@ -55,6 +55,11 @@ export function ignoredKeys(input: unknown, parsed: unknown, path: (string | num
 export function curveNotices(design: Design): DesignNotice[] {
   const swingV = design.topology.kind === 'buck' ? design.spec.vinMaxV : design.spec.voutV;
   const out: DesignNotice[] = [];
+  const ind = design.parts.inductor;
+  if (ind.inductanceCurve && ind.rolloff) {
+    out.push({ path: 'parts.inductor.rolloff', value: ind.rolloff.currentA,
+      message: 'The inductor has both an L(I) curve and a roll-off point: the curve is used for the ripple and peak, the roll-off point is ignored.' });
+  }
   for (const role of ['switch', 'rectifier'] as const) {
     const part = design.parts[role];
     if (part.kind !== 'mosfet') continue;

@@ -144,6 +144,10 @@ export const diodeSchema = z.object({
   thetaJcKPerW: q('thetaPartKPerW'),
 });
 
+/** One point of an inductor's L(I) roll-off curve: the incremental inductance at a DC current. */
+export const inductancePointSchema = z.object({ currentA: q('curveA'), inductanceH: q('inductanceH') });
+export type InductancePoint = z.infer<typeof inductancePointSchema>;
+
 export const coreLossSchema = z.discriminatedUnion('kind', [
   /** Steinmetz Pv = k · f^alpha · Bpk^beta in W/m³ with f in Hz and B in T (sine excitation). */
   z.object({ kind: z.literal('steinmetz'), k: q('steinmetzK'), alpha: q('steinmetzAlpha'), beta: q('steinmetzBeta') }),
@@ -177,6 +181,13 @@ export const inductorSchema = z.object({
   inductanceH: q('inductanceH'),
   /** Optional roll-off: inductance at a stated current (linear between 0 A and this point). */
   rolloff: z.object({ currentA: q('ratingA'), inductanceH: q('inductanceH') }).optional(),
+  /** The datasheet's L(I) curve (curves/inductance-table.ts); replaces inductanceH and rolloff for the operating point. */
+  inductanceCurve: z
+    .object({ points: z.array(inductancePointSchema).min(CURVE_POINTS.min).max(CURVE_POINTS.max) })
+    .optional()
+    .describe(
+      'Inductance against DC current digitised from the datasheet, 3 to 200 points: current strictly rising from 0 A or more, inductance never rising. When given, the ripple and peak follow the flux linkage λ(i) = ∫L di (λ(peak) − λ(valley) = v·t over each interval) instead of inductanceH and rolloff; straight lines between points, the first inductance held below the first point and the last held above the last point (the result warns when the peak passes the table or L at the peak falls below 70 % of its first value).',
+    ),
   dcr20Ohm: q('conductionOhm'),
   isatA: q('ratingA'),
   isatAtC: q('statedC'),

@@ -34,6 +34,9 @@ const COSS_CURVE: CurveRule = { x: 'vdsV', y: 'cossF', xName: 'VDS', yName: 'Cos
 /** RDS(on) of a silicon MOSFET rises with Tj: carrier mobility falls (Baliga, Fundamentals of Power Semiconductor Devices, §6 [memory]). */
 const RDS_CURVE: CurveRule = { x: 'tjC', y: 'ratio', xName: 'Tj', yName: 'RDS(on) ratio', curve: 'RDS(on)(Tj) table', monotonic: 'non-decreasing', why: 'the RDS(on) ratio must not fall as Tj rises (a silicon MOSFET\'s channel resistance grows with temperature; check the columns are Tj then the ratio)' };
 
+/** Inductance falls as the DC current rises: the core's permeability falls towards saturation (common practice). */
+const L_CURVE: CurveRule = { x: 'currentA', y: 'inductanceH', xName: 'current', yName: 'inductance', curve: 'L(I) table', monotonic: 'non-increasing', why: 'the inductance must not rise with current (the core\'s permeability falls towards saturation; check the columns are current then inductance)' };
+
 /** The first point of the curve at `p` that breaks its rule, as a problem naming the point. */
 function curveTable(doc: unknown, p: string, rule: CurveRule, out: Problem[]): void {
   const points = at(doc, p);
@@ -129,6 +132,7 @@ function inductor(doc: unknown, out: Problem[]): void {
   if (l !== undefined && lr !== undefined && lr > l)
     out.push(problem(`${p}.rolloff.inductanceH`, lr, `rolloff.inductanceH ≤ ${p}.inductanceH (${inUnit(l, 'inductanceH')})`,
       `${p}.rolloff.inductanceH (${inUnit(lr, 'inductanceH')}) must not exceed the zero-current inductance ${inUnit(l, 'inductanceH')}: inductance falls with current.`));
+  if (Array.isArray(at(doc, `${p}.inductanceCurve.points`))) curveTable(doc, `${p}.inductanceCurve.points`, L_CURVE, out);
   const ae = num(doc, `${p}.aeM2`);
   const ve = num(doc, `${p}.veM3`);
   if (ae !== undefined && ve !== undefined && ae > 0) {

@@ -33,7 +33,8 @@ export function nodeSlopesInto(ctx: LedgerContext, T: Float64Array, G: Float64Ar
   const rc = s.rectConduction;
   if (rc && rect.kind === 'mosfet') G[idx.rectifier] += rc.model.sensitivity!(rc.inputs) * rdsOnSlopeAt(rect, tR);
   const df = s.diodeForward;
-  if (df && rect.kind === 'diode') G[idx.rectifier] += df.model.sensitivity!(df.inputs) * diodeVf0SlopeAt(rect, tR);
+  // Datasheet VF(IF, Tj) curves: the model's sensitivity is dP/dTj itself (losses/diode-forward-curve.ts).
+  if (df && rect.kind === 'diode') G[idx.rectifier] += df.model.sensitivity!(df.inputs) * (rect.vfCurves ? 1 : diodeVf0SlopeAt(rect, tR));
   const dl = s.diodeLeakage;
   if (dl && rect.kind === 'diode') G[idx.rectifier] += dl.model.sensitivity!(dl.inputs) * leakageSlopeAt(rect, tR);
   const dcrSlope = copperResistanceSlopeAt(parts.inductor.dcr20Ohm, T[idx.inductor]!);

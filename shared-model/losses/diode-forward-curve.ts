@@ -12,7 +12,7 @@
  */
 import type { VfPoint } from '../design/parts.ts';
 import type { Segment } from '../operating-point/types.ts';
-import { forwardLossW, forwardVoltageAt } from '../curves/forward-table.ts';
+import { forwardLossSlopeWPerK, forwardLossW, forwardVoltageAt } from '../curves/forward-table.ts';
 import type { DiodeForwardInputs } from './diode-forward.ts';
 import { input, nonNegativeFinite, safeRatio, type LossModel } from './model.ts';
 
@@ -47,6 +47,12 @@ export const diodeForwardCurve: LossModel<DiodeCurveInputs> = {
   drop: true,
   formula: '(1/Ts) · ∫ VF(i, Tj) · i dt (datasheet VF(IF, Tj) curves)',
   watts: curveWatts,
+  // Unlike the other thermal models this returns dP/dTj itself, W/K (may be negative: VF falls when hot);
+  // ledger/kernel-slopes.ts takes it with a law slope of 1.
+  sensitivity: (x) => {
+    const s = x.vfCurves && x.iavgA > 0 ? forwardLossSlopeWPerK(x.vfCurves, x.segments, x.periodS, x.temperatureC, falling) : 0;
+    return Number.isFinite(s) ? s : 0;
+  },
   describe: (x) => {
     const w = curveWatts(x);
     return [

@@ -4,7 +4,9 @@
  * - DCM (info), reverse inductor current in forced PWM (info), inductance beyond its roll-off point.
  * - Duty limit / conversion-ratio limit / a boost asked to step down: the point is shown at the limit
  *   with the output it reaches, never as regulated.
- * - A resistive or constant-power load outside the load model's validity (load.ts).
+ * - A resistive or constant-power load outside the load model's validity (load.ts); past the regulation
+ *   limit the point holds the load current, which such a load would not draw (flagged, not solved).
+ * - No load in DCM where the power balance cannot be met: the model shows no pulse (flagged).
  * - Inductor peak against Isat at the ambient temperature: Isat(T) = Isat · (1 + tc · (T − T_isat));
  *   the ledger repeats the check at the hot-spot temperature.
  * - Blocking voltage against VDS / VR (beyond the derating margin: caution; beyond the rating: danger);
@@ -72,6 +74,30 @@ function ratingWarnings(design: Design, op: CheckedPoint, out: Warning[]): void 
   }
 }
 
+/**
+ * No load in DCM: the shape sizes each pulse from the load's charge (shape.ts), so with no load there is
+ * no pulse (duty 0) and the standing losses the output side bears are booked as drawn from the source.
+ * A real controller pulses just enough to hold the output; the pulse-skipping mode models that.
+ */
+function noLoadWarning(op: CheckedPoint): Warning {
+  return { code: 'model-limit', severity: 'caution', path: 'topology.lightLoad',
+    message: `No load: in discontinuous conduction this model sizes each pulse from the load current, so with no load it shows no pulse (duty ${f4(op.dutyCycle)}) and books the standing losses as drawn straight from the source at the specified output. A real controller pulses just often enough to hold the output; for a model of that choose pulse skipping under “At light load”.` };
+}
+
+/**
+ * Past the regulation limit the output is lower than specified, but the point holds the load current: a
+ * resistor R = Vout/I would draw less (I·Vout,reached/Vout), a constant-power load more (I·Vout/Vout,reached).
+ */
+function heldLoadWarning(design: Design, c: Circuit, op: CheckedPoint, out: Warning[]): void {
+  const kind = design.spec.loadKind ?? 'constant-current';
+  if (kind === 'constant-current' || !(c.loadA > 0) || !(op.voutV > 0) || op.voutV >= c.targetVoutV) return;
+  const ratio = op.voutV / c.targetVoutV;
+  const drawn = kind === 'resistive' ? c.loadA * ratio : c.loadA / ratio;
+  const what = kind === 'resistive' ? `a resistor of ${f4(c.targetVoutV / c.loadA)} Ω would draw only` : `a constant-power load of ${f4(c.targetVoutV * c.loadA)} W would draw`;
+  out.push({ code: 'model-limit', severity: 'caution', path: 'spec.loadKind',
+    message: `The load current is held at ${f4(c.loadA)} A at this unregulated point, but at the ${f4(op.voutV)} V the output reaches ${what} ${f4(drawn)} A; losses, temperatures and efficiency here are those of ${f4(c.loadA)} A, not of the load as specified.` });
+}
+
 /** Appends the operating point's warnings to op.warnings. */
 export function addWarnings(ctx: CheckContext, op: CheckedPoint): void {
   const { design, circuit: c } = ctx;
@@ -97,9 +123,12 @@ export function addWarnings(ctx: CheckContext, op: CheckedPoint): void {
       break;
   }
   if (ctx.powerBalanceFallback) {
-    out.push({ code: 'model-limit', severity: 'caution',
-      message: `The power balance needs more than the duty limit allows (losses too large for the load current, typical at light load); the duty shown comes from volt-second balance and the input current from the power balance. Near full load this means the converter may not regulate.` });
+    if (c.loadA === 0 && op.mode === 'DCM') out.push(noLoadWarning(op));
+    else
+      out.push({ code: 'model-limit', severity: 'caution',
+        message: `The power balance needs more than the duty limit allows (losses too large for the load current, typical at light load); the duty shown comes from volt-second balance and the input current from the power balance. Near full load this means the converter may not regulate.` });
   }
+  if (ctx.limit !== 'none') heldLoadWarning(design, c, op, out);
   if (op.mode === 'DCM') {
     out.push({ code: 'dcm', severity: 'info', path: c.synchronous ? 'topology.lightLoad' : undefined,
       message: `Discontinuous conduction: the inductor current is zero for ${f4(op.idleFraction * 100)} % of each period.` });

@@ -27,6 +27,7 @@ import { capacitorShare, loadConductanceS, loadKindOf } from './load.ts';
 import { topologyOf } from '../topology/registry.ts';
 import { buck } from '../topology/buck.ts';
 import type { ConverterTopology } from '../topology/types.ts';
+import type { InductancePoint } from '../design/parts.ts';
 
 export type SenseLocation = Design['topology']['senseLocation'];
 
@@ -65,6 +66,8 @@ export interface Circuit {
   /** Roll-off point (0 when the inductance is constant). */
   rolloffA: number;
   rolloffH: number;
+  /** The datasheet's L(I) curve when the part gives one (replaces inductanceH and the roll-off in shape.ts). */
+  inductanceCurve: readonly InductancePoint[] | undefined;
   outputCapacitanceF: number;
   /** The load's incremental conductance seen from the output node, S (load.ts; 0: a current sink). */
   loadConductanceS: number;
@@ -97,7 +100,7 @@ export function newCircuit(): Circuit {
   return {
     topology: buck, onToOutput: true, offFromInput: false, switchIn: 1, switchOut: 0, rectIn: 1, rectOut: 0, blocksReverse: false, synchronous: false, senseAt: 'none', vinV: 0, targetVoutV: 0, loadA: 0,
     periodS: 0, rOnOhm: 0, rOffOhm: 0, esrOhm: 0, vf0V: 0, rRectOhm: 0, rInputSenseOhm: 0, rOutputSenseOhm: 0,
-    inductanceH: 0, rolloffA: 0, rolloffH: 0, outputCapacitanceF: 0, loadConductanceS: 0, capacitorShare: 1,
+    inductanceH: 0, rolloffA: 0, rolloffH: 0, inductanceCurve: undefined, outputCapacitanceF: 0, loadConductanceS: 0, capacitorShare: 1,
   };
 }
 
@@ -140,6 +143,7 @@ export function circuitInto(design: Design, conditions: Conditions, conduction: 
   out.inductanceH = parts.inductor.inductanceH;
   out.rolloffA = rolloff ? rolloff.currentA : 0;
   out.rolloffH = rolloff ? rolloff.inductanceH : 0;
+  out.inductanceCurve = parts.inductor.inductanceCurve?.points;
   out.outputCapacitanceF = bank.part.capacitanceF * bank.count;
   out.loadConductanceS = loadConductanceS(loadKindOf(spec), spec.voutV, conditions.loadA, out.rOutputSenseOhm);
   out.capacitorShare = capacitorShare(out.loadConductanceS, esr);

@@ -12,10 +12,13 @@
  *   a quadratic in Ipk with one positive root. At the boundary (D + D2 = 1) both shapes coincide.
  * residualV = D·vL,on + D2·vL,off (volt-second balance; zero at the solution without lossOf), with the
  *   drops taken at each interval's mean current (exact mean of a straight line).
+ * With an L(I) curve (curves/inductance-table.ts) the ripple is the swing centred on IL whose flux-linkage
+ *   change λ(Ipk) − λ(Iv) equals the interval's volt-seconds, and in DCM L is the chord λ(Ipk)/Ipk.
  * Terms E/R: see circuit.ts. Source: Erickson & Maksimović 2nd ed. ch. 2 and 5 (CCM ripple, DCM charge
  * balance) [memory for chapters]; docs/methods.md §1–2.
  */
 import { inductanceAt, type Circuit } from './circuit.ts';
+import { chordInductance, inductanceOnCurve, swingForFlux } from '../curves/inductance-table.ts';
 
 export interface Shape {
   dcm: boolean;
@@ -76,9 +79,19 @@ export function shapeOfOwn(c: Circuit, s: Shape): Shape {
   let vin1 = c.vinV - rIn * iin;
   let eon = onOut ? vin1 - vo1 + esr * io : vin1;
   let eoff = offIn ? vo1 + c.vf0V - vin1 - esr * io : vo1 + c.vf0V - esr * io;
-  let L = inductanceAt(c, il);
   const vOff = eoff + roff * il;
-  const ripple = (vOff * dp * T) / L;
+  const curve = c.inductanceCurve;
+  let L: number;
+  let ripple: number;
+  if (curve) {
+    // L(I) curve: the swing centred on IL whose flux-linkage change is the off interval's volt-seconds.
+    const flux = vOff * dp * T;
+    ripple = Math.sign(flux) * swingForFlux(curve, il, Math.abs(flux));
+    L = ripple !== 0 ? flux / ripple : inductanceOnCurve(curve, il);
+  } else {
+    L = inductanceAt(c, il);
+    ripple = (vOff * dp * T) / L;
+  }
   const iv = il - ripple / 2;
   if (!(c.blocksReverse && iv < 0)) {
     s.dcm = false;
@@ -113,7 +126,8 @@ export function shapeOfOwn(c: Circuit, s: Shape): Shape {
     ipk = qb > 0 ? (2 * qc) / (qb + root) : (root - qb) / (2 * qa);
     d2 = ipk > 0 ? Math.min(Math.max((2 * io) / ipk - (onOut ? d : 0), 0), dp) : 0;
     il = onOut ? io : (ipk * (d + d2)) / 2;
-    const next = inductanceAt(c, il);
+    // With an L(I) curve, the chord inductance from 0 A to the peak (the flux linkage it takes).
+    const next = curve ? chordInductance(curve, 0, ipk) : inductanceAt(c, il);
     if (Math.abs(next - L) <= 1e-13 * L) break;
     L = next;
   }

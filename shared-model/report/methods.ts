@@ -25,6 +25,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
       'Steady state only: no control-loop dynamics, start-up or load transients.',
       'Switching edges are instantaneous in the current waveforms (transition times do not enter the RMS currents).',
       'Capacitor ESL is ignored in the output ripple.',
+      'With an L(I) curve from the datasheet, ripple and peak follow Faraday\'s law λ(peak) − λ(valley) = v · t with λ = ∫L di; each interval is drawn as one straight segment between those end points (its curvature is not drawn, so the RMS is that of the chord).',
     ],
   },
   {

@@ -37,7 +37,8 @@ export interface RecordSource {
   }[];
   hazards: readonly { part: Role; partName: string; row: Pick<TouchLimitRow, 'limitC' | 'id' | 'standard'>; marginK: number }[];
   heatsinks: readonly { id: string; name: string; celsius: number }[];
-  operatingPoint: { voutV: number; inductor: { peakA: number; rippleA: number } };
+  /** The operating point's conditions carry the rate it was solved at (the pulse rate while pulses skip). */
+  operatingPoint: { voutV: number; conditions: { switchingFrequencyHz: number }; inductor: { peakA: number; rippleA: number } };
   warnings: Warning[];
 }
 
@@ -144,6 +145,7 @@ export class ColumnBook {
       vinV: e.conditions.vinV,
       ambientC: ambient,
       switchingFrequencyHz: e.conditions.switchingFrequencyHz,
+      equivalentSwitchingHz: op.conditions.switchingFrequencyHz,
       efficiency: e.efficiency,
       totalLoss: e.totalLoss,
       inputPower: e.inputPower,

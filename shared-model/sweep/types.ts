@@ -63,6 +63,11 @@ export interface SweepPoint {
   vinV: number;
   ambientC: number;
   switchingFrequencyHz: number;
+  /**
+   * The rate the converter actually switches at, Hz: the pulse rate while pulse skipping (PFM) is active
+   * (light-load/pulse-skipping.ts), else the switching frequency.
+   */
+  equivalentSwitchingHz: number;
   efficiency: number;
   totalLoss: number;
   inputPower: number;

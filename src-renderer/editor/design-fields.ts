@@ -52,9 +52,9 @@ export const LOAD_KIND_HELP =
   'Sets how the output ripple current divides between the output capacitors and the load: a resistor takes a share, a constant-power load pushes more into the capacitors.';
 
 export const TARGET_FIELDS: FieldSpec[] = [
-  num('efficiencyAtRated', TARGET_LABELS.efficiencyAtRated, '', { optional: true, help: 'The report says whether the rated point meets it; the Monte Carlo counts the samples that do.' }),
-  num('outputRippleV', TARGET_LABELS.outputRippleV, 'V', { optional: true, help: 'Kept with the design; not yet checked against the results.' }),
-  num('inductorRippleRatio', TARGET_LABELS.inductorRippleRatio, '', { optional: true, help: 'Kept with the design; not yet checked against the results.' }),
+  num('efficiencyAtRated', TARGET_LABELS.efficiencyAtRated, '', { optional: true, help: 'Checked at nominal input and rated load (Results → Sizing and checks); the Monte Carlo counts the samples that meet it.' }),
+  num('outputRippleV', TARGET_LABELS.outputRippleV, 'V', { optional: true, help: 'Sizes the output capacitors and is checked at every input-voltage corner (Results → Sizing and checks).' }),
+  num('inductorRippleRatio', TARGET_LABELS.inductorRippleRatio, '', { optional: true, help: 'Sizes the inductor and is checked at every input-voltage corner (empty: 0.3, common practice; Results → Sizing and checks).' }),
 ];
 
 export const KIND_CHOICE: ChoiceSpec = {

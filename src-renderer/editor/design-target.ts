@@ -1,4 +1,7 @@
-/** The design document as an edit target: every set is one undo step (keystrokes merge per field). */
+/**
+ * The design document as an edit target: every set is one undo step (keystrokes merge per field); a
+ * number being typed is previewed and enters the history on Enter, on leaving the field or after a pause.
+ */
 import type { DocumentStore } from '../state/document.svelte.ts';
 import { getAt } from '../state/paths.ts';
 import type { EditTarget } from './edit-target.ts';
@@ -9,6 +12,8 @@ export function designTarget(doc: DocumentStore): EditTarget {
     get: (path) => getAt(doc.design, path),
     set: (path, value, label) => doc.edit(path, value, label),
     seal: () => doc.seal(),
+    preview: (path, value, label) => doc.preview(path, value, label),
+    commit: () => doc.commitPreview(),
     problems: (path) => doc.shownAt(path).own,
     related: (path) => doc.shownAt(path).related,
   };

@@ -11,6 +11,13 @@ export interface EditTarget {
   set(path: Path, value: unknown, label: string): void;
   /** The user left a field: the next keystroke starts a new undo step. */
   seal(): void;
+  /**
+   * A half-typed value: shown (draft, problems, results) but not yet in the history; `commit` (or
+   * `seal`, or another edit) takes it. Targets without a preview take every value at once.
+   */
+  preview?(path: Path, value: unknown, label: string): void;
+  /** The user means the previewed value (Enter or a pause): it enters the history. */
+  commit?(): void;
   /** Validation sentences for exactly this field. */
   problems(path: Path): string[];
   /** Labels of fields whose problem concerns this field too (a rule relating two fields). */

@@ -228,6 +228,31 @@ const inductor: FieldSpec[] = [
     fields: [num('currentA', 'At current', 'A'), num('inductanceH', 'Inductance there', 'H')],
     defaults: (part) => ({ currentA: Number(part.isatA) || 1, inductanceH: 0.8 * (Number(part.inductanceH) || 1e-6) }),
   },
+  {
+    type: 'group',
+    key: 'inductanceCurve',
+    label: 'Inductance curve L(I) from the datasheet',
+    fields: [
+      {
+        type: 'table',
+        key: 'points',
+        label: 'L against DC current',
+        columns: [
+          { key: 'currentA', label: 'Current', unit: 'A' },
+          { key: 'inductanceH', label: 'Inductance', unit: 'H' },
+        ],
+        minRows: CURVE_POINTS.min,
+        maxRows: CURVE_POINTS.max,
+        help: 'Current rising, inductance never rising. When given, the ripple and the peak follow the curve (flux linkage ∫L di) instead of the inductance and roll-off above; the last inductance is held beyond the last point (the result warns).',
+      },
+    ],
+    // A starting curve of the usual soft roll-off shape from the values above (invented): edit or paste over it.
+    defaults: (part) => {
+      const l = Number(part.inductanceH) || 10e-6;
+      const isat = Number(part.isatA) || 5;
+      return { points: [0, 0.5, 1, 1.5].map((f, k) => ({ currentA: f * isat, inductanceH: l * [1, 0.95, 0.8, 0.5][k]! })) };
+    },
+  },
   num('dcr20Ohm', 'DCR at 20 °C', 'Ω'),
   num('isatA', 'Saturation current Isat', 'A'),
   num('isatAtC', 'Isat stated at', '°C'),

@@ -22,6 +22,7 @@ import {
 import type {
   Comparison,
   Design,
+  DesignReview,
   Evaluation,
   FiguresOfMerit,
   FrequencySweep,
@@ -94,10 +95,12 @@ export class LiveResults {
   readonly frequency = new JobSlot<FrequencySweep>();
   readonly grid = new JobSlot<LoadGrid>();
   readonly worstCase = new JobSlot<WorstCase>();
+  /** Sizing and design checks of the design (its own corners; the chosen load does not enter). */
+  readonly review = new JobSlot<DesignReview>();
   readonly monteCarlo = new JobSlot<MonteCarlo>();
   readonly comparison = new JobSlot<Comparison>();
 
-  design: Design = $derived(this.#workspace().doc.lastValid);
+  design: Design = $derived(this.#workspace().doc.shown);
   conditions = $derived(conditionsFor(this.design, { loadA: this.#workspace().results.loadA, vinV: this.#workspace().results.vinV }));
   /** The chosen load as a number: charts that mark it redraw only when it moves, not on every edit. */
   chosenLoadA = $derived(this.conditions.loadA);
@@ -216,6 +219,11 @@ export class LiveResults {
     const axis = this.gridAxis;
     const conditions = axis === 'frequency' ? { vinV: this.conditions.vinV } : {};
     void this.grid.run({ design, axis, vinV: conditions.vinV ?? null }, () => this.heavy.run('grid', { design, options: { axis, conditions } }), (o) => o.output);
+  }
+
+  requestReview(): void {
+    const design = this.design;
+    void this.review.run({ design }, () => this.heavy.run('review', { design }), (o) => o.output);
   }
 
   requestWorstCase(): void {

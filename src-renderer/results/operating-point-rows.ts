@@ -3,7 +3,7 @@
  * component only renders and the numbers can be checked against the engine in tests. Values are the
  * engine's own numbers; nothing is recomputed here except the share of a rating.
  */
-import { CONDITION_LABELS, type Design, type OperatingPoint } from '../../shared-model/index.ts';
+import { CONDITION_LABELS, formatEngineering, type Design, type OperatingPoint } from '../../shared-model/index.ts';
 
 export interface OperatingPointRow {
   /** Stable key for tests and the data table ("inductor.rmsA"). */
@@ -17,7 +17,11 @@ export interface OperatingPointRow {
   rating?: { label: string; value: number; usable: number };
 }
 
-export function operatingPointRows(op: OperatingPoint, design: Design): OperatingPointRow[] {
+/**
+ * `evaluatedHz`: the switching frequency the evaluation was asked at. Where the point was solved at
+ * another rate (pulse skipping: the pulse rate), the frequency row says it is the equivalent one.
+ */
+export function operatingPointRows(op: OperatingPoint, design: Design, evaluatedHz?: number): OperatingPointRow[] {
   const rows: OperatingPointRow[] = [];
   const add = (group: string, key: string, label: string, value: number, unit: string, rating?: OperatingPointRow['rating']) =>
     rows.push({ group, key, label, value, unit, ...(rating ? { rating } : {}) });
@@ -28,7 +32,9 @@ export function operatingPointRows(op: OperatingPoint, design: Design): Operatin
 
   add('Conditions', 'conditions.vinV', CONDITION_LABELS.vinV, op.conditions.vinV, 'V');
   add('Conditions', 'conditions.loadA', CONDITION_LABELS.loadA, op.conditions.loadA, 'A');
-  add('Conditions', 'conditions.switchingFrequencyHz', CONDITION_LABELS.switchingFrequencyHz, op.conditions.switchingFrequencyHz, 'Hz');
+  const skipping = evaluatedHz !== undefined && op.conditions.switchingFrequencyHz !== evaluatedHz;
+  const fsLabel = skipping ? `Equivalent switching frequency (pulse skipping; ${CONDITION_LABELS.switchingFrequencyHz.toLowerCase()} while awake: ${formatEngineering(evaluatedHz, 'Hz', 4)})` : CONDITION_LABELS.switchingFrequencyHz;
+  add('Conditions', 'conditions.switchingFrequencyHz', fsLabel, op.conditions.switchingFrequencyHz, 'Hz');
   add('Conditions', 'voutV', 'Output voltage', op.voutV, 'V');
   add('Conditions', 'outputPowerW', 'Output power', op.outputPowerW, 'W');
   add('Timing', 'dutyCycle', 'Duty cycle', op.dutyCycle, '%');

@@ -6,6 +6,7 @@ export const RESULT_SECTIONS = [
   { id: 'loss-curves', label: 'Loss vs load' },
   { id: 'temperatures', label: 'Temperatures' },
   { id: 'operating', label: 'Operating point' },
+  { id: 'sizing', label: 'Sizing and checks' },
   { id: 'frequency', label: 'Frequency and grid' },
   { id: 'tolerance', label: 'Tolerance' },
   { id: 'compare', label: 'Compare parts' },

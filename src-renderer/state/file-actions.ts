@@ -77,6 +77,8 @@ export function saveDesign(ws: Workspace, asNew: boolean): Promise<boolean> {
 
 async function saveNow(ws: Workspace, asNew: boolean): Promise<boolean> {
   const doc = ws.doc;
+  // Saving is intent: a value still being typed is kept first.
+  doc.commitPreview();
   if (!doc.valid) {
     // One message, replaced by the next refusal and gone once the draft is valid (MessageList).
     ws.messages.show(
@@ -138,7 +140,7 @@ export async function runCommand(ws: Workspace, command: MenuCommand): Promise<v
 
 export async function writeRecovery(ws: Workspace): Promise<void> {
   const doc = ws.doc;
-  await ws.files.writeRecovery(recoveryText({ fileName: doc.fileName, filePath: doc.filePath, design: doc.design }));
+  await ws.files.writeRecovery(recoveryText({ fileName: doc.fileName, filePath: doc.filePath, design: doc.committed }));
 }
 
 async function clearRecovery(ws: Workspace): Promise<void> {

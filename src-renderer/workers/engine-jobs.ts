@@ -13,6 +13,7 @@ import {
   figuresOfMerit,
   checkRankOptions,
   judgeChunk,
+  reviewDesign,
   sweepFamilies,
   sweepFrequency,
   sweepGrid,
@@ -63,6 +64,8 @@ export function runJob(request: Extract<EngineRequest, { type: 'run' }>): JobRes
         const outcome = compareParts(request.input.design, request.input.options);
         return outcome.ok ? { ok: true, output: outcome.comparison } : refused(outcome.problems);
       }
+      case 'review':
+        return { ok: true, output: reviewDesign(request.input.design) };
       case 'rank-chunk': {
         const { design, options, from, to } = request.input;
         const problems = checkRankOptions(design, options);

@@ -7,6 +7,7 @@ import type {
   CompareOptions,
   Comparison,
   Design,
+  DesignReview,
   FamilyOptions,
   FiguresOfMerit,
   FrequencySweep,
@@ -45,6 +46,8 @@ export interface EngineJobs {
   'rank-chunk': { input: { design: Design; options: Plain<RankLibraryOptions>; from: number; to: number }; output: PartVerdict[] };
   'worst-case': { input: { design: Design; options?: Plain<WorstCaseOptions> }; output: WorstCase };
   'monte-carlo': { input: { design: Design; options: Plain<MonteCarloOptions> }; output: MonteCarlo };
+  /** Sizing and design checks: the design at its corners of Vin at rated load (a few evaluations). */
+  review: { input: { design: Design }; output: DesignReview };
   /** The review report's model (a few hundred electro-thermal evaluations). */
   report: { input: ReportInput; output: ReportModel };
 }

@@ -3,45 +3,18 @@
  * (value, corner, why), the crossover sentence, the checks (value, limit, result, margin, corner), the
  * sentences of the checks that do not pass, the notes and the cautions.
  */
-import type { DesignCheck, DesignNotice, DesignReview, SizedValue } from '../../../shared-model/index.ts';
-import { formatEngineering as fmt } from '../../../shared-model/index.ts';
+import type { DesignCheck, DesignNotice, DesignReview } from '../../../shared-model/index.ts';
+import { formatEngineering as fmt, sizingRows } from '../../../shared-model/index.ts';
 import { CAUTION_LINE } from '../cautions.ts';
 import { formatNotices } from '../design-file.ts';
 import { renderTable, section } from '../table.ts';
-
-const row = (name: string, v: SizedValue | undefined): string[] =>
-  v ? [name, fmt(v.value, v.unit, 4), v.corner, v.reason] : [name, '—', '', 'not sized (see the notes)'];
 
 const RESULT: Record<DesignCheck['status'], string> = { pass: 'pass', warn: 'WARN', fail: 'FAIL' };
 
 function sizingTable(review: DesignReview): string {
   const s = review.sizing;
-  const c = s.outputCapacitor;
-  const rows = [
-    row('Duty, smallest', s.duty.min),
-    row('Duty, largest', s.duty.max),
-    row('Rated inductor current', s.inductor.ratedCurrentA),
-    row('Inductance for the ripple target', s.inductor.requiredInductanceH),
-    row('Isat needed (hot)', s.inductor.requiredIsatA),
-    row('Inductor RMS current', s.inductor.requiredRmsA),
-    row('Output charge per period', c.chargeC),
-    row('Output capacitor current swing', c.currentSwingA),
-    row('Output capacitance, zero ESR', c.minCapacitanceF),
-    row('Largest ESR, unlimited C', c.maxEsrOhm),
-    row('Capacitance with the bank ESR', c.capacitanceWithBankEsrF),
-    row('Largest ESR with the bank C', c.maxEsrWithBankCapacitanceOhm),
-    row('Output capacitor RMS', c.rmsA),
-    row('Input capacitor RMS', s.inputCapacitorRmsA),
-    row('Switch voltage', s.stresses.switchV),
-    row('Switch peak current', s.stresses.switchPeakA),
-    row('Rectifier voltage', s.stresses.rectifierV),
-    row('Rectifier mean current', s.stresses.rectifierAverageA),
-    row('Inductor down-slope m2', s.slope.downSlopeAPerS),
-    ...(s.slope.senseSignalPeakV ? [row('Sense signal with the minimum ramp', s.slope.senseSignalPeakV)] : []),
-    ...(s.slope.senseLossW ? [row('Sense resistor loss', s.slope.senseLossW)] : []),
-    row('Output pole', s.loop.outputPoleHz),
-    ...(s.loop.rhpZeroHz ? [row('RHP zero (lowest)', s.loop.rhpZeroHz)] : []),
-  ];
+  const rows = sizingRows(s).map(({ label, value: v }) =>
+    v ? [label, fmt(v.value, v.unit, 4), v.corner, v.reason] : [label, '—', '', 'not sized (see the notes)']);
   const r = s.stresses.required;
   const needs = [
     `Switch: VDS ≥ ${fmt(r.switchVdsV, 'V', 3)}, ID ≥ ${fmt(r.switchIdA, 'A', 3)}; rectifier: ≥ ${fmt(r.rectifierVoltageV, 'V', 3)}, ≥ ${fmt(r.rectifierCurrentA, 'A', 3)}`,

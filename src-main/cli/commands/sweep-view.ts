@@ -31,6 +31,7 @@ export function sweepJson(design: Design, sweep: LoadSweep, landmarks: Landmarks
       outputPower: p.outputPower,
       dutyCycle: p.dutyCycle,
       mode: p.mode,
+      equivalentSwitchingHz: p.equivalentSwitchingHz,
       converged: p.converged,
       temperatures: Object.fromEntries(c.temperatures.map((t, j) => [t.part, p.temperaturesC[j]])),
       marginsK: Object.fromEntries(c.temperatures.map((t, j) => [t.part, p.marginsK[j]])),

@@ -141,3 +141,19 @@ describe('zero load on a boost with pulse skipping: one consistent story', () =>
     closeTo(e.losses.find((t) => t.mechanism === 'quiescent')!.watts, 5 * 20e-6, 1e-12); // only the sleep current: Vin·I_sleep (worked here)
   });
 });
+
+describe('every sweep point says the rate the converter switches at (issue 10 §2, equivalent switching frequency)', () => {
+  it('below the mode change it is the pulse rate Io/Q, above it the switching frequency', () => {
+    const d = pfmDesign(BUCK);
+    const sweep = sweepLoad(d, { fromA: 0.01, toA: 1, points: 7 });
+    const first = sweep.points[0]!;
+    expect(first.loadA).toBe(0.01);
+    closeTo(first.equivalentSwitchingHz, 40.723e3, 0.02); // docs/methods.md §14: 40.723 kHz at 10 mA (ideal parts; the sketch's drops move it by under 2 %)
+    expect(first.switchingFrequencyHz).toBe(500e3); // the design's own frequency stays in its column
+    const last = sweep.points.at(-1)!;
+    expect(last.loadA).toBeGreaterThan(245.559e-9 * 500e3); // above the mode change Q·fs = 122.8 mA (docs/methods.md §14)
+    expect(last.equivalentSwitchingHz).toBe(500e3); // switching every period
+    for (let i = 1; i < sweep.points.length; i++)
+      expect(sweep.points[i]!.equivalentSwitchingHz).toBeGreaterThanOrEqual(sweep.points[i - 1]!.equivalentSwitchingHz); // f = Io/Q rises with the load (docs/methods.md §14)
+  });
+});

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { evaluate } from '../../../shared-model/index.ts';
+import { evaluate, validateDesign } from '../../../shared-model/index.ts';
 import { operatingPointRows, ratingShare, ratingState } from '../../../src-renderer/results/operating-point-rows.ts';
 import { closeTo } from '../../helpers/close-to.ts';
 import { demoDesign } from '../../helpers/demo.ts';
@@ -36,5 +36,20 @@ describe('operating-point rows', () => {
     const row = rows.find((r) => r.key === 'stats.outputCapacitor.rmsA')!;
     const slot = design.parts.outputCapacitor;
     closeTo(row.rating!.value, slot.part.rippleRatingA * slot.count, 1e-15); // n equal capacitors share the ripple current
+  });
+});
+
+describe('operating-point rows while pulses skip', () => {
+  it('name the equivalent switching frequency, the pulse rate Io/Q, and the frequency while awake', () => {
+    const base = demoDesign();
+    const checked = validateDesign({ ...base, topology: { ...base.topology, lightLoad: 'pulse-skipping', pulseSkipping: { minPeakCurrentA: 0.5, sleepCurrentA: 20e-6 } } });
+    if (!checked.ok) throw new Error(checked.problems.map((p) => p.message).join(' '));
+    const e = evaluate(checked.design, { loadA: 0.01 });
+    const row = operatingPointRows(e.operatingPoint, checked.design, e.conditions.switchingFrequencyHz).find((r) => r.key === 'conditions.switchingFrequencyHz')!;
+    expect(row.label).toMatch(/^Equivalent switching frequency \(pulse skipping; switching frequency while awake: /);
+    expect(row.value).toBeLessThan(e.conditions.switchingFrequencyHz / 4); // docs/methods.md §14: f = Io/Q, a few tens of kHz at 10 mA for a 0.5 A pulse
+    const rated = evaluate(checked.design);
+    const plain = operatingPointRows(rated.operatingPoint, checked.design, rated.conditions.switchingFrequencyHz).find((r) => r.key === 'conditions.switchingFrequencyHz')!;
+    expect(plain.label).toBe('Switching frequency'); // at rated load it switches every period
   });
 });
