@@ -182,14 +182,16 @@ export type { SampleHistogram, SampleSummary } from './tolerance/statistics.ts';
 export type { ResolvedTolerances, SpreadKey, ToleranceRange, Tolerances, Variation } from './tolerance/variation.ts';
 export { checkTolerances, DEFAULT_AMBIENT_SPREAD_K, DEFAULT_SPREADS, describeVariation } from './tolerance/variation.ts';
 export type { CornerTemperature, ToleranceCorner, WorstCase, WorstCaseOptions } from './tolerance/worst-case.ts';
-export { worstCase } from './tolerance/worst-case.ts';
-export type { MonteCarlo, MonteCarloDistribution, MonteCarloOptions, PartDistribution } from './tolerance/monte-carlo.ts';
+export { cornerVariations, worstCase } from './tolerance/worst-case.ts';
+export type { MonteCarlo, MonteCarloDistribution, MonteCarloOptions, MonteCarloSampleChunk, PartDistribution } from './tolerance/monte-carlo.ts';
 export {
   checkMonteCarloOptions,
   DEFAULT_MONTE_CARLO_SAMPLES,
   DEFAULT_MONTE_CARLO_SEED,
   MAX_MONTE_CARLO_SAMPLES,
   monteCarlo,
+  runMonteCarloSamples,
+  summarizeMonteCarlo,
 } from './tolerance/monte-carlo.ts';
 
 // --- interleaved phases (issue 13 §1) ---

@@ -49,11 +49,14 @@ export function checkRankOptions(design: Design, options: RankLibraryOptions): O
   return problems;
 }
 
-/** Verdicts on library parts [from, to). */
-export function judgeChunk(design: Design, options: RankLibraryOptions, from = 0, to = options.library.length): PartVerdict[] {
+/**
+ * Verdicts on library parts [from, to). `firstIndex` is the library position of `options.library[0]`,
+ * for a pool that sends each worker only its slice of the library.
+ */
+export function judgeChunk(design: Design, options: RankLibraryOptions, from = 0, to = options.library.length, firstIndex = 0): PartVerdict[] {
   const settings = { role: options.role, by: options.by ?? DEFAULT_RANK_SCORE, currentDerating: options.currentDerating, evaluator: options.evaluator };
   const out: PartVerdict[] = [];
-  for (let i = from; i < to; i++) out.push(judgePart(design, options.library[i]!, i, settings));
+  for (let i = from; i < to; i++) out.push(judgePart(design, options.library[i]!, firstIndex + i, settings));
   return out;
 }
 

@@ -11,6 +11,9 @@
  * Result: distribution of efficiency and of each part's temperature (summary, histogram), the fraction of
  * samples over each part's derated limit, its absolute limit, its touch limit, below the efficiency target,
  * and not regulating. With every tolerance zero every sample equals the nominal evaluation.
+ * Chunkable for a pool of workers: runMonteCarloSamples evaluates samples [from, to) (drawing the one
+ * stream from its start, so a sample's variation never depends on the split) and summarizeMonteCarlo puts
+ * chunks together; monteCarlo is both on one thread, and a pool's result equals it exactly.
  * Each sample is a new design, evaluated from scratch; only samples whose parts are all nominal (every
  * part spread zero) reuse the nominal design's evaluator set-up (sweep/evaluator.ts; same results).
  */
@@ -122,37 +125,81 @@ export function drawVariation(rng: RandomSource, t: ResolvedTolerances, distribu
 
 const NOT_REGULATING = new Set(['duty-limit', 'cannot-regulate', 'thermal-runaway']);
 
-export function monteCarlo(design: Design, options: MonteCarloOptions): MonteCarlo {
+/** What every chunk and the summary share: the options resolved and the nominal evaluation. */
+interface MonteCarloSetup {
+  n: number;
+  distribution: MonteCarloDistribution;
+  spreadConditions: boolean;
+  tolerances: ResolvedTolerances;
+  base: Conditions;
+  nominalEval: Evaluation;
+  nominalEvaluator: PointEvaluator;
+  evaluator: PointEvaluator;
+  parts: Role[];
+}
+
+function setupOf(design: Design, options: MonteCarloOptions): MonteCarloSetup {
   const problems = checkMonteCarloOptions(options);
   if (problems.length > 0) throw new RangeError(problems.map((p) => p.message).join(' '));
-  const evaluator = options.evaluator ?? defaultEvaluator;
   const nominalEvaluator = evaluatorFor(design, options.evaluator);
-  const n = options.samples ?? DEFAULT_MONTE_CARLO_SAMPLES;
-  const distribution = options.distribution ?? 'uniform';
-  const spreadConditions = options.spreadConditions ?? false;
-  const tolerances = resolveTolerances(design, options.tolerances);
   const base = conditionsFor(design, { ...options.conditions, loadA: options.loadA });
   const nominalEval = nominalEvaluator(design, base);
-  const parts = nominalEval.temperatures.map((t) => t.part);
-  const touchParts = new Map(nominalEval.hazards.map((h, k) => [h.part, k]));
-  const efficiency = new Float64Array(n);
-  const temps = parts.map(() => new Float64Array(n));
+  return {
+    n: options.samples ?? DEFAULT_MONTE_CARLO_SAMPLES,
+    distribution: options.distribution ?? 'uniform',
+    spreadConditions: options.spreadConditions ?? false,
+    tolerances: resolveTolerances(design, options.tolerances),
+    base,
+    nominalEval,
+    nominalEvaluator,
+    evaluator: options.evaluator ?? defaultEvaluator,
+    parts: nominalEval.temperatures.map((t) => t.part),
+  };
+}
+
+/**
+ * Samples [from, to) of a Monte Carlo: each sample's efficiency and part temperatures (part-major, aligned
+ * with the nominal evaluation's parts) and the counts over limits. The one MT19937 stream is drawn from
+ * its start, so sample i has the same variation whatever chunk evaluates it: chunks run anywhere (a pool
+ * of workers) and put together by summarizeMonteCarlo give exactly monteCarlo's result.
+ */
+export interface MonteCarloSampleChunk {
+  from: number;
+  to: number;
+  efficiency: number[];
+  temperaturesC: number[][];
+  overDerated: number[];
+  overLimit: number[];
+  overTouch: number[];
+  notRegulating: number;
+}
+
+export function runMonteCarloSamples(design: Design, options: MonteCarloOptions, from = 0, to?: number): MonteCarloSampleChunk {
+  const setup = setupOf(design, options);
+  const { parts, tolerances, distribution, base, spreadConditions, nominalEvaluator, evaluator } = setup;
+  const end = Math.min(to ?? setup.n, setup.n);
+  const start = Math.max(0, Math.min(from, end));
+  const count = end - start;
+  const efficiency = new Array<number>(count).fill(0);
+  const temps = parts.map(() => new Array<number>(count).fill(0));
   const overDerated = new Array<number>(parts.length).fill(0);
   const overLimit = new Array<number>(parts.length).fill(0);
   const overTouch = new Array<number>(parts.length).fill(0);
   let notRegulating = 0;
   const rng = createRandom(options.seed);
-  for (let i = 0; i < n; i++) {
+  for (let i = 0; i < end; i++) {
     const v = drawVariation(rng, tolerances, distribution, base, spreadConditions);
+    if (i < start) continue;
+    const k = i - start;
     let e: Evaluation;
     if (partsNominal(v)) e = nominalEvaluator(design, varyConditions(base, v));
     else {
       const applied = applyVariation(design, base, v);
       e = evaluator(applied.design, applied.conditions);
     }
-    efficiency[i] = e.efficiency;
-    for (let k = 0; k < e.warnings.length; k++) {
-      if (NOT_REGULATING.has(e.warnings[k].code)) {
+    efficiency[k] = e.efficiency;
+    for (let w = 0; w < e.warnings.length; w++) {
+      if (NOT_REGULATING.has(e.warnings[w].code)) {
         notRegulating += 1;
         break;
       }
@@ -164,7 +211,7 @@ export function monteCarlo(design: Design, options: MonteCarloOptions): MonteCar
         for (const x of e.temperatures) if (x.part === parts[j]) t = x;
       }
       if (!t) continue;
-      temps[j][i] = t.celsius;
+      temps[j][k] = t.celsius;
       if (t.marginK < 0) overDerated[j] += 1;
       if (t.celsius > t.limit) overLimit[j] += 1;
     }
@@ -173,6 +220,32 @@ export function monteCarlo(design: Design, options: MonteCarloOptions): MonteCar
       if (j >= 0 && h.exceeded) overTouch[j] += 1;
     }
   }
+  return { from: start, to: end, efficiency, temperaturesC: temps, overDerated, overLimit, overTouch, notRegulating };
+}
+
+/** Chunks covering samples 0 … n − 1 (in any order) put together into the Monte Carlo result. */
+export function summarizeMonteCarlo(design: Design, options: MonteCarloOptions, chunks: readonly MonteCarloSampleChunk[]): MonteCarlo {
+  const { n, parts, nominalEval, tolerances, distribution, spreadConditions, base } = setupOf(design, options);
+  const efficiency = new Float64Array(n);
+  const temps = parts.map(() => new Float64Array(n));
+  const overDerated = new Array<number>(parts.length).fill(0);
+  const overLimit = new Array<number>(parts.length).fill(0);
+  const overTouch = new Array<number>(parts.length).fill(0);
+  let notRegulating = 0;
+  let covered = 0;
+  for (const c of chunks) {
+    efficiency.set(c.efficiency, c.from);
+    for (let j = 0; j < parts.length; j++) {
+      temps[j].set(c.temperaturesC[j] ?? [], c.from);
+      overDerated[j] += c.overDerated[j] ?? 0;
+      overLimit[j] += c.overLimit[j] ?? 0;
+      overTouch[j] += c.overTouch[j] ?? 0;
+    }
+    notRegulating += c.notRegulating;
+    covered += c.to - c.from;
+  }
+  if (covered !== n) throw new Error(`Monte Carlo chunks cover ${covered} samples, not ${n}`);
+  const touchParts = new Map(nominalEval.hazards.map((h, k) => [h.part, k]));
   const bins = options.histogramBins ?? 30;
   const target = options.efficiencyTarget ?? design.spec.targets?.efficiencyAtRated;
   let below = 0;
@@ -202,4 +275,8 @@ export function monteCarlo(design: Design, options: MonteCarloOptions): MonteCar
   };
   if (options.keepSamples) result.values = { efficiency: Array.from(efficiency), temperaturesC: temps.map((a) => Array.from(a)) };
   return result;
+}
+
+export function monteCarlo(design: Design, options: MonteCarloOptions): MonteCarlo {
+  return summarizeMonteCarlo(design, options, [runMonteCarloSamples(design, options)]);
 }

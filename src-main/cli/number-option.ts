@@ -38,6 +38,7 @@ export const OPTION_RANGES = {
   sweepPoints: whole(2, MAX_AXIS_POINTS),
   samples: whole(1, MAX_MONTE_CARLO_SAMPLES),
   seed: whole(0, 0xffffffff),
+  workers: whole(1, 256),
   kneePoints: { min: 0, minInclusive: false, max: 100, maxInclusive: false, integer: false },
 } as const satisfies Record<string, OptionRange>;
 

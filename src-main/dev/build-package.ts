@@ -6,7 +6,8 @@
  *   out/lib/types/shared-model/  — its type declarations (tsc), entry index.d.ts (package.json "types");
  *   out/cli/wattledger.js        — the command line (src-main/cli/entry.ts) as one ES module for Node,
  *                                  zod inlined (one file to load starts faster); only what the report
- *                                  command loads on demand stays in node_modules (package.json "bin").
+ *                                  command loads on demand stays in node_modules (package.json "bin");
+ *   out/cli/pool-worker.js       — the worker thread of the command line's pool (src-main/pool).
  * With --if-stale it does nothing when every output is newer than every source it is made from.
  *
  * Usage: tsx src-main/dev/build-package.ts [--if-stale]
@@ -25,6 +26,7 @@ export const PACKAGE_OUT = {
   engine: at('out', 'lib', 'wattledger.js'),
   types: at('out', 'lib', 'types', 'shared-model', 'index.d.ts'),
   cli: at('out', 'cli', 'wattledger.js'),
+  poolWorker: at('out', 'cli', 'pool-worker.js'),
 } as const;
 
 /** Written last: its time says when the whole build finished. */
@@ -85,6 +87,17 @@ async function buildCli(): Promise<void> {
     banner: { js: '#!/usr/bin/env node\n// WattLedger command line, built from src-main/cli by src-main/dev/build-package.ts. Do not edit.' },
   });
   chmodSync(PACKAGE_OUT.cli, 0o755);
+  // The pool's worker thread script, beside the command line (src-main/pool/worker-pool.ts looks there).
+  await build({
+    entryPoints: [at('src-main', 'pool', 'worker-entry.ts')],
+    outfile: PACKAGE_OUT.poolWorker,
+    bundle: true,
+    format: 'esm',
+    platform: 'node',
+    target: 'node20',
+    logLevel: 'warning',
+    banner: { js: '// WattLedger pool worker, built from src-main/pool/worker-entry.ts by src-main/dev/build-package.ts. Do not edit.' },
+  });
 }
 
 export async function buildPackage(options: { ifStale?: boolean } = {}): Promise<'built' | 'fresh'> {

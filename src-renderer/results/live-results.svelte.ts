@@ -14,7 +14,8 @@ import {
   DEFAULT_KNEE_THRESHOLD_POINTS,
   DEFAULT_MONTE_CARLO_SAMPLES,
   DEFAULT_MONTE_CARLO_SEED,
-  evaluate,
+  designPointEvaluator,
+  evaluateDesign,
   partInRole,
   sweepWithLandmarks,
 } from '../../shared-model/index.ts';
@@ -106,7 +107,7 @@ export class LiveResults {
   evaluation: EvaluationOutcome = $derived.by(() => {
     const t0 = performance.now();
     try {
-      return { ok: true, evaluation: evaluate(this.design, this.conditions), ms: performance.now() - t0 };
+      return { ok: true, evaluation: evaluateDesign(this.design, this.conditions).evaluation, ms: performance.now() - t0 };
     } catch (error) {
       return { ok: false, message: `The engine stopped on this design: ${(error as Error).message}` };
     }
@@ -155,7 +156,8 @@ export class LiveResults {
     if (this.#pace.here()) {
       const t0 = performance.now();
       try {
-        const result = sweepWithLandmarks(key.design, options, { kneeThresholdPoints: key.knee });
+        // A multiphase design sweeps the whole converter (every phase, or the best count when it sheds phases).
+        const result = sweepWithLandmarks(key.design, { ...options, evaluator: designPointEvaluator(key.design) }, { kneeThresholdPoints: key.knee });
         const ms = performance.now() - t0;
         this.sweep.set(key, result, ms);
         // The page's first sweep also compiles the engine: it says nothing about the speed of the next.

@@ -17,6 +17,7 @@ import {
   sweepFamilies,
   sweepFrequency,
   sweepGrid,
+  designPointEvaluator,
   sweepWithLandmarks,
   worstCase,
   monteCarlo,
@@ -37,7 +38,7 @@ export function runJob(request: Extract<EngineRequest, { type: 'run' }>): JobRes
         const { design, options = {}, landmarks = {} } = request.input;
         const problems = checkLoadSweepOptions(design, options);
         if (problems.length > 0) return refused(problems);
-        return { ok: true, output: sweepWithLandmarks(design, options, landmarks) };
+        return { ok: true, output: sweepWithLandmarks(design, { ...options, evaluator: designPointEvaluator(design) }, landmarks) };
       }
       case 'families': {
         const { design, options = {} } = request.input;

@@ -11,5 +11,6 @@ import { toleranceCommand } from './tolerance.ts';
 import { reportCommand } from './report.ts';
 import { fitCommand } from './fit.ts';
 import { sizeCommand } from './size.ts';
+import { rankCommand } from './rank.ts';
 
-export const COMMANDS: readonly Command[] = [pointCommand, evaluateCommand, sweepCommand, compareCommand, toleranceCommand, fitCommand, sizeCommand, reportCommand];
+export const COMMANDS: readonly Command[] = [pointCommand, evaluateCommand, sweepCommand, compareCommand, rankCommand, toleranceCommand, fitCommand, sizeCommand, reportCommand];

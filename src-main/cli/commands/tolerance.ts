@@ -2,14 +2,14 @@
  * `wattledger tolerance DESIGN.json [--samples N --seed S] [--json] [--load A] [--normal] [--vary-conditions]`:
  * worst-case corners over the tolerances (Vin range, ambient, RDS(on), DCR, ESR, inductance, fs) naming the
  * corners of worst efficiency and worst temperature, and a Monte Carlo with a visible seed (the same seed
- * always gives the same result). Tolerances are the engine's documented defaults (tolerance/variation.ts).
+ * always gives the same result, on any number of worker threads: src-main/pool). Tolerances are the engine's documented defaults (tolerance/variation.ts).
  */
 import {
   DEFAULT_MONTE_CARLO_SAMPLES,
   DEFAULT_MONTE_CARLO_SEED,
-  monteCarlo,
   worstCase,
 } from '../../../shared-model/index.ts';
+import { monteCarloOnPool } from '../../pool/monte-carlo-pool.ts';
 import type { Command } from '../command.ts';
 import { loadDesign } from '../design-file.ts';
 import { EXIT } from '../io.ts';
@@ -32,6 +32,7 @@ export const toleranceCommand: Command = {
     { name: 'load', kind: 'number', unit: 'A', placeholder: 'A', help: 'Load current (default: the rated load).', range: OPTION_RANGES.positiveLoad },
     { name: 'normal', kind: 'switch', help: 'Normal spreads (tolerance = 3σ) instead of uniform ones.' },
     { name: 'vary-conditions', kind: 'switch', help: 'Also vary Vin and ambient in the Monte Carlo (default: held at nominal).' },
+    { name: 'workers', kind: 'number', unit: '', placeholder: 'N', help: 'Worker threads for the Monte Carlo (default: every core; the result is the same).', range: OPTION_RANGES.workers },
     { name: 'json', kind: 'switch', help: 'Print JSON (SI units: V, A, W, Hz, °C, K) instead of tables.' },
   ],
   details: [
@@ -45,13 +46,13 @@ export const toleranceCommand: Command = {
     const design = loaded.design;
     const loadA = args.numbers.load;
     const w = worstCase(design, { loadA });
-    const mc = monteCarlo(design, {
+    const mc = await monteCarloOnPool(design, {
       seed: args.numbers.seed ?? DEFAULT_MONTE_CARLO_SEED,
       samples: args.numbers.samples ?? DEFAULT_MONTE_CARLO_SAMPLES,
       distribution: args.switches.has('normal') ? 'normal' : 'uniform',
       spreadConditions: args.switches.has('vary-conditions'),
       loadA,
-    });
+    }, { workers: args.numbers.workers });
     if (args.switches.has('json')) io.out(JSON.stringify(toleranceJson(design, w, mc), null, 2));
     else io.out(renderTolerance(design, w, mc));
     return EXIT.ok;
