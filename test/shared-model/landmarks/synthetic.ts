@@ -78,6 +78,8 @@ export function syntheticEvaluator(c: SyntheticCurve) {
       operatingPoint: {
         // Past the duty limit the output falls in proportion to the duty it lacks (a buck's D·Vin).
         voutV: limited ? (c.voutV * (c.maxDuty ?? 0)) / duty : c.voutV,
+        // The stand-in switches at the design rate at every load (no pulse skipping).
+        conditions: { switchingFrequencyHz: conditions.switchingFrequencyHz },
         inductor: { peakA: io + ripple / 2, rippleA: ripple, minA: io - ripple / 2, valleyA: io - ripple / 2, rmsA: io, averageA: io, acRmsA: 0 },
       } as unknown as Evaluation['operatingPoint'],
       heatsinks: [],
