@@ -11,6 +11,7 @@ import type { Page } from 'playwright-core';
 import { rankLibrary } from '../../shared-model/index.ts';
 import { demoDesign, demoParts } from '../helpers/demo.ts';
 import { field } from './helpers/app-page.ts';
+import { axeSeriousViolations } from './helpers/browser.ts';
 import { e2eSuite } from './helpers/suite.ts';
 
 const suite = e2eSuite();
@@ -45,6 +46,9 @@ describe('rank parts', () => {
       const cores = await page.evaluate(() => navigator.hardwareConcurrency);
       await expect(page.getByTestId('rank-status').textContent()).resolves.toContain(`${cores} worker${cores === 1 ? '' : 's'}`); // the pool used every core
       await expect(page.locator('[data-testid="cautions"]').first().textContent()).resolves.toMatch(/defer to\s+local codes, the applicable standards and licensed practice/); // team rules: cautions
+
+      expect(await axeSeriousViolations(page)).toEqual([]); // axe-core (WCAG 2.1 AA), as every screen (issue 5)
+      await app.screenshot('ranking');
 
       // Adopt the best part that is not already the design's switch.
       const original = demoDesign().parts.switch.id;
