@@ -1,5 +1,5 @@
 /**
- * The engine as a package for scripts (issue 17 §3): the README's example, examples/sweep-folder.js,
+ * The engine as a package for scripts (issue 17 §3): docs/scripting.md's examples, examples/sweep-folder.js,
  * runs as a real Node process (and so does the evaluate example of docs/scripting.md) against the built package entry (`import … from 'wattledger'` resolves to
  * out/lib/wattledger.js through package.json "exports"), and a strict TypeScript consumer type-checks
  * against the published declarations.
@@ -31,7 +31,7 @@ describe('scripting with the engine package', () => {
     expect(stdout.trim()).toBe(pathToFileURL(nodePath.join(ROOT, 'out', 'lib', 'wattledger.js')).href); // Node: package self-reference through "exports"
   });
 
-  it('the README example sweeps every design in a folder into one CSV, the same numbers as the engine', async () => {
+  it('examples/sweep-folder.js sweeps every design in a folder into one CSV, the same numbers as the engine', async () => {
     const designs = nodePath.join(work, 'designs');
     await nodeFs.mkdir(designs);
     for (const name of ['synchronous-buck', 'diode-boost', 'hot-fin-buck']) await nodeFs.copyFile(nodePath.join(ROOT, 'assets', 'designs', `${name}.json`), nodePath.join(designs, `${name}.json`));
@@ -50,9 +50,9 @@ describe('scripting with the engine package', () => {
     expect(rows.map((r) => Number(r.cells[3]))).toEqual(expected.map((p) => p.efficiency));
   });
 
-  it("the README's inline example runs as printed", async () => {
-    const readme = await nodeFs.readFile(nodePath.join(ROOT, 'README.md'), 'utf8');
-    const code = /### Scripting[\s\S]*?```js\n([\s\S]*?)```/.exec(readme)?.[1];
+  it("docs/scripting.md's shortest script runs as printed", async () => {
+    const page = await nodeFs.readFile(nodePath.join(ROOT, 'docs', 'scripting.md'), 'utf8');
+    const code = /## The shortest script[\s\S]*?```js\n([\s\S]*?)```/.exec(page)?.[1];
     expect(code).toBeDefined();
     const folder = nodePath.join(work, 'readme');
     await nodeFs.mkdir(nodePath.join(folder, 'assets'), { recursive: true });
