@@ -17,7 +17,7 @@
  * Assumptions: the ESR is a linear resistance at each frequency (superposition); straight lines between
  * the table's points in f; ESR(f, T) = ESR(f) · ratio(T) (separable, temperature applied by the caller).
  * Source: Fourier series by breakpoints — Bracewell, "The Fourier Transform and Its Applications", the
- * derivative theorem [from memory]; Parseval's theorem (any signals text); docs/methods.md §6b.
+ * derivative theorem [from memory]; Parseval's theorem (any signals text); docs/methods.md §26.
  */
 import type { EsrFrequencyPoint } from '../design/parts.ts';
 import type { Segment } from '../operating-point/types.ts';

@@ -7,7 +7,7 @@
  * spectrum-weighted ESR Σ Ih²·ESR(h·fs) / Irms² of the bank current (curves/esr-spectrum.ts).
  * Assumptions: without an ESR(f) table the ESR at the switching frequency applies to the whole ripple
  * spectrum; equal sharing; ESR(f, T) = ESR(f) · ratio(T).
- * Source: docs/methods.md §9, §1 (exact RMS currents) and §6b (harmonics) [common practice].
+ * Source: docs/methods.md §9, §1 (exact RMS currents) and §26 (harmonics) [common practice].
  */
 import { input, nonNegativeFinite, type LossModel } from './model.ts';
 

@@ -317,6 +317,7 @@ const capacitor: FieldSpec[] = [
         ],
         minRows: CURVE_POINTS.min,
         maxRows: CURVE_POINTS.max,
+        logX: true,
         logY: true,
         help: 'Frequency rising, ESR above 0 Ω. When given, each harmonic of the capacitor current meets the ESR at its own frequency and the single ESR above is not used for the loss; the end values are held outside the table (the result warns when the switching frequency lies outside it).',
       },
