@@ -235,9 +235,44 @@ export function fillPassiveInputs(ctx: LedgerContext, op: PointView, T: Float64A
   q.quiescentA = pfm && pfm.active ? drv.quiescentA * pfm.awakeFraction + pfm.sleepCurrentA * (1 - pfm.awakeFraction) : drv.quiescentA;
 }
 
+/** The last bank current an ESR(f) table was met with and what it gave (the electro-thermal loop refills the
+ *  kernel at one operating point many times while only temperatures move). */
+interface SpectrumMemo {
+  key: Float64Array;
+  esrOhm: number;
+}
+const spectrumMemos = new WeakMap<object, SpectrumMemo>();
+
 /** A capacitor's ESR at 25 °C for the bank current `segments`: the part's ESR, or its ESR(f) table met by the current's harmonics (curves/esr-spectrum.ts). */
 function esr25Of(cap: Capacitor, segments: readonly Segment[], periodS: number): number {
   const curve = cap.esrFrequencyCurve;
   if (!curve) return cap.esrOhm;
-  return spectralEsrOhm(segments, periodS, curve.points);
+  let memo = spectrumMemos.get(curve.points);
+  if (!memo) {
+    memo = { key: new Float64Array(1 + 3 * segments.length), esrOhm: NaN };
+    spectrumMemos.set(curve.points, memo);
+  }
+  const key = memo.key;
+  let same = key.length === 1 + 3 * segments.length && key[0] === periodS;
+  if (same) {
+    for (let k = 0; k < segments.length; k++) {
+      const g = segments[k]!;
+      if (key[1 + 3 * k] !== g.durationS || key[2 + 3 * k] !== g.i0A || key[3 + 3 * k] !== g.i1A) {
+        same = false;
+        break;
+      }
+    }
+  }
+  if (same && memo.esrOhm === memo.esrOhm) return memo.esrOhm;
+  if (key.length !== 1 + 3 * segments.length) memo.key = new Float64Array(1 + 3 * segments.length);
+  const kk = memo.key;
+  kk[0] = periodS;
+  for (let k = 0; k < segments.length; k++) {
+    const g = segments[k]!;
+    kk[1 + 3 * k] = g.durationS;
+    kk[2 + 3 * k] = g.i0A;
+    kk[3 + 3 * k] = g.i1A;
+  }
+  memo.esrOhm = spectralEsrOhm(segments, periodS, curve.points);
+  return memo.esrOhm;
 }
