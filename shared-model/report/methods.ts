@@ -177,15 +177,15 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     title: 'Inductor core (iGSE)',
     formula:
       'Pv = (1/T) · Σ ki · |ΔB_s/t_s|^α · ΔB^(β−α) · t_s over the straight flux segments, ki = k/((2π)^(α−1) · 2^(β−α) · ∫|cos θ|^α dθ); P = Pv · Ve.',
-    source: 'Venkatachalam, Sullivan, Abdallah & Tacca, COMPEL 2002, DOI 10.1109/CIPE.2002.1196712; WattLedger methods §7.',
-    limits: ['Steinmetz constants at one temperature; no DC-bias dependence; no relaxation loss after the DCM idle interval.'],
+    source: 'Venkatachalam, Sullivan, Abdallah & Tacca, COMPEL 2002, DOI 10.1109/CIPE.2002.1196712; WattLedger methods §7; the temperature curve §26.',
+    limits: ['Steinmetz exponents at one temperature (a core-loss-vs-temperature curve, when given, multiplies the loss at the inductor temperature); no DC-bias dependence; no relaxation loss after the DCM idle interval.'],
   },
   {
     id: 'esr',
     title: 'Capacitor ESR',
-    formula: 'P = ESR(T) · Irms² / n for n equal capacitors sharing the bank current.',
-    source: 'WattLedger methods §9 and §1 (common practice).',
-    limits: ['ESR at the switching frequency applies to the whole ripple spectrum; the capacitors share the current equally.'],
+    formula: 'P = ESR(T) · Irms² / n for n equal capacitors sharing the bank current; with an ESR(f) table ESR = Σ Ih²·ESR(h·fs) / Irms² over the harmonics of the bank current.',
+    source: 'WattLedger methods §9, §1 (common practice) and §26 (harmonics).',
+    limits: ['Without an ESR(f) table the ESR at the switching frequency applies to the whole ripple spectrum; ESR(f, T) = ESR(f)·ratio(T); the capacitors share the current equally.'],
   },
   {
     id: 'sense',
