@@ -6,7 +6,7 @@
  * design and on designs built to reach runaway, touch limits and the duty limit.
  */
 import { describe, expect, it } from 'vitest';
-import { DEMO_DESIGNS, evaluate, monteCarlo } from '../../../shared-model/index.ts';
+import { DEMO_DESIGNS, evaluate, monteCarlo, worstCase } from '../../../shared-model/index.ts';
 import type { Design, MonteCarloOptions, PointEvaluator } from '../../../shared-model/index.ts';
 import { sampleEvaluator } from '../../../shared-model/tolerance/sample-evaluator.ts';
 import { nominalVariation, ownPartsCopy, varyDesign } from '../../../shared-model/tolerance/variation.ts';
@@ -61,6 +61,13 @@ describe('Monte Carlo on the lean path with parts varied in place', () => {
       if (label.startsWith('near runaway')) expect(lean.fractionNotRegulating).toBeGreaterThan(0); // the wide spread reaches runaway, so the runaway branch is compared too
     });
   }
+
+  it('worst-case corners equal the corners evaluated alone, each a new varied design', () => {
+    for (const d of [...DEMO_DESIGNS.map((x) => demo(x.id)), ...edgeDesigns().map((e) => e.design)]) {
+      const options = { tolerances: wide, loadA: 1.2 * d.spec.ratedLoadA };
+      expect(worstCase(d, options)).toStrictEqual(worstCase(d, { ...options, evaluator: fullFromScratch })); // independent check: full evaluate of a new varied design per corner
+    }
+  });
 
   it('a sample leaves the design it was given unchanged, and a later nominal sample is the nominal point', () => {
     const d = demo('synchronous-buck');
