@@ -65,7 +65,7 @@ const conductionIn = (): ConductionInputs => ({ irmsA: 0, resistanceOhm: 0, temp
 const gateIn = (): GateDriveInputs => ({ qgC: 0, driveV: 0, frequencyHz: 0, gateOhm: 0, pullUpOhm: 0, pullDownOhm: 0 });
 const deadIn = (): DeadTimeInputs => ({ vsdV: 0, firstA: 0, firstS: 0, secondA: 0, secondS: 0, frequencyHz: 0 });
 const recoveryIn = (): ReverseRecoveryInputs => ({ qrrC: 0, testA: 1, forwardA: 0, voltageV: 0, frequencyHz: 0 });
-const capIn = (): CapacitorEsrInputs => ({ irmsA: 0, esrOhm: 0, count: 1, temperatureC: 0 });
+const capIn = (): CapacitorEsrInputs => ({ irmsA: 0, esrOhm: 0, esr25Ohm: 0, count: 1, temperatureC: 0 });
 
 /**
  * A slot of `model` on part `role`. Node, payer, temperature dependence and drop come from the model
@@ -124,7 +124,7 @@ export function slotsOf(design: Design, synchronous: boolean): Slots {
     swCoss: at('switch', outputCapacitance, { voltageV: 0, frequencyHz: 0, ctrlEossJ: 0, syncQossC: 0, syncEossJ: 0 }),
     swGate: at('switch', gateDrive, gateIn()),
     windingDc: at('inductor', windingDc, { irmsA: 0, dcrOhm: 0, temperatureC: 0 }),
-    core: at('inductor', coreLoss, { kiWPerM3: 0, alpha: 1, beta: 2, veM3: 0, fluxPerAmpT: 0, segments: [] }),
+    core: at('inductor', coreLoss, { kiWPerM3: 0, alpha: 1, beta: 2, veM3: 0, fluxPerAmpT: 0, segments: [], temperatureFactor: 1, temperatureC: 0 }),
     inputEsr: at('inputCapacitor', capacitorEsr, capIn(), true),
     outputEsr: at('outputCapacitor', capacitorEsr, capIn()),
     quiescent: at('controller', quiescent, { vinV: 0, quiescentA: 0 }),
