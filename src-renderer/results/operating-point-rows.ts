@@ -75,8 +75,8 @@ export function operatingPointRows(op: OperatingPoint, design: Design, evaluated
   add('Source and output', 'outputRipple.esrV', 'Output ripple from ESR', op.outputRipple.esrV, 'V');
   add('Source and output', 'outputRipple.totalV', 'Output ripple, total', op.outputRipple.totalV, 'V');
   if (op.smallSignal) {
-    add('Boost control landmarks', 'smallSignal.rhpZeroHz', 'Right-half-plane zero', op.smallSignal.rhpZeroHz, 'Hz');
-    add('Boost control landmarks', 'smallSignal.outputPoleHz', 'Output pole (current mode)', op.smallSignal.outputPoleHz, 'Hz');
+    add('Control landmarks (small signal)', 'smallSignal.rhpZeroHz', 'Right-half-plane zero', op.smallSignal.rhpZeroHz, 'Hz');
+    add('Control landmarks (small signal)', 'smallSignal.outputPoleHz', 'Output pole (current mode)', op.smallSignal.outputPoleHz, 'Hz');
   }
   return rows;
 }
