@@ -47,7 +47,6 @@ export type { PartsLibrary, PartsLibraryValidation } from './design/parts-librar
 export {
   PARTS_LIBRARY_FORMAT,
   PARTS_LIBRARY_VERSION,
-  partsLibrarySchema,
   partsOfKind,
   validatePartsLibrary,
 } from './design/parts-library.ts';
@@ -69,7 +68,7 @@ export { KIND_WORDS } from './part-import/field-labels.ts';
 export type { HeaderParts } from './part-import/header-unit.ts';
 export type { CellRead } from './part-import/cells.ts';
 export type { ColumnMapping, MappingProblem, PartMapping } from './part-import/mapping.ts';
-export { checkMapping, mappingDocument, PART_MAPPING_FORMAT, PART_MAPPING_VERSION, partMappingSchema } from './part-import/mapping.ts';
+export { checkMapping, mappingDocument, partMappingSchema } from './part-import/mapping.ts';
 export { guessMapping, reuseMapping } from './part-import/guess.ts';
 export type { ImportPreview, PreviewRow, RowProblem } from './part-import/preview.ts';
 export { previewImport } from './part-import/preview.ts';
@@ -83,7 +82,7 @@ export { solveOperatingPoint } from './operating-point/solve.ts';
 export { TOPOLOGIES, topologyOf } from './topology/registry.ts';
 export type { ConductionInterval, ConverterTopology, VoltageCoefficients } from './topology/types.ts';
 export { conductionParameters, nominalConditions, uniformTemps } from './operating-point/conditions.ts';
-export { isSynchronous } from './operating-point/circuit.ts';
+
 export { waveformStats, periodOf } from './waveform/stats.ts';
 export { constantWaveform, offsetWaveform, scaleWaveform, segment, waveformOf } from './waveform/build.ts';
 export type { VoltageRipple } from './waveform/voltage-ripple.ts';
@@ -103,7 +102,7 @@ export type { EvaluateOptions, LedgerEvaluator } from './ledger/evaluate.ts';
 export { evaluate, ledgerEvaluator, POWER_BALANCE_RTOL } from './ledger/evaluate.ts';
 export type { LeanEvaluation, LeanHazard, LeanTerm } from './ledger/lean-evaluate.ts';
 export type { RegulationFlags } from './ledger/regulated.ts';
-export { isRegulated, isUsablePoint, REGULATION_RTOL, unusableReason } from './ledger/regulated.ts';
+export { isUsablePoint, unusableReason } from './ledger/regulated.ts';
 export { RUNAWAY_BAND_K } from './thermal/fixed-point.ts';
 export { TOUCH_LIMITS } from './hazards/touch-limits.ts';
 export type { RowFit } from './hazards/touch-check.ts';
@@ -141,7 +140,6 @@ export {
   AVERAGE_EFFICIENCY_FRACTIONS,
   figuresOfMerit,
   figuresOfMeritOf,
-  figureValue,
   LIGHT_LOAD_FRACTION,
 } from './sweep/figures-of-merit.ts';
 export type {
@@ -160,8 +158,7 @@ export type { PeakResult } from './landmarks/peak.ts';
 export { findPeak } from './landmarks/peak.ts';
 export { DEFAULT_KNEE_THRESHOLD_POINTS, findKnee, kneeDefinition } from './landmarks/knee.ts';
 export { findModeBoundary } from './landmarks/mode-boundary.ts';
-export { findThermalCeiling, hasFixedPoint } from './landmarks/thermal-ceiling.ts';
-
+export { findThermalCeiling } from './landmarks/thermal-ceiling.ts';
 
 export type { Substitution } from './compare/substitute-part.ts';
 export { partInRole, ROLE_KINDS, substitutePart } from './compare/substitute-part.ts';
@@ -176,7 +173,7 @@ export type {
 } from './compare/compare-parts.ts';
 export { compareParts } from './compare/compare-parts.ts';
 export type { RatingLimit, RoleStress } from './compare/role-fit.ts';
-export { DEFAULT_CURRENT_DERATING, ratingLimits, ratingShortfalls, stressOf } from './compare/role-fit.ts';
+export { ratingLimits } from './compare/role-fit.ts';
 export type { RandomSource } from './tolerance/prng.ts';
 export type { SampleHistogram, SampleSummary } from './tolerance/statistics.ts';
 export type { ResolvedTolerances, SpreadKey, ToleranceRange, Tolerances, Variation } from './tolerance/variation.ts';
@@ -223,10 +220,10 @@ export { sizingRows } from './sizing/rows.ts';
 
 // --- mission profile (issue 11 §4) ---
 export type { MissionProfile, MissionRow } from './mission/schema.ts';
-export { MAX_MISSION_ROWS, missionProfileSchema } from './mission/schema.ts';
+
 export type { WeightingId, WeightingSet } from './mission/weightings.ts';
-export { profileFromWeighting, ratedPointProfile, WEIGHTING_SETS, weightingSet } from './mission/weightings.ts';
-export { FRACTION_SUM_TOLERANCE } from './mission/rules.ts';
+export { profileFromWeighting, ratedPointProfile, WEIGHTING_SETS } from './mission/weightings.ts';
+
 export type * from './mission/types.ts';
 export type { MissionOptions } from './mission/evaluate-mission.ts';
 export { evaluateMission } from './mission/evaluate-mission.ts';
@@ -242,17 +239,17 @@ export { reviewDesign } from './design-checks/review.ts';
 
 // --- bench measurements and calibration ---
 export type { CalibrationRecord, MeasuredPoint, MeasuredTemperatures, Measurement } from './measurement/schema.ts';
-export { calibrationSchema, measuredPointSchema, measurementSchema } from './measurement/schema.ts';
+
 export type { ColumnKey, ColumnSpec } from './measurement/columns.ts';
-export { columnOf, COLUMNS as MEASUREMENT_COLUMNS, INPUT_COLUMNS, REQUIRED_COLUMNS } from './measurement/columns.ts';
+export { COLUMNS as MEASUREMENT_COLUMNS } from './measurement/columns.ts';
 export type { MeasurementProblem, MeasurementRead, ReadMeasurementOptions } from './measurement/read.ts';
-export { inputPowerOf, readMeasurement } from './measurement/read.ts';
+export { readMeasurement } from './measurement/read.ts';
 export type { MeasuredBalance } from './measurement/loss.ts';
 export { measuredBalance } from './measurement/loss.ts';
-export { measurementHash, measurementText } from './measurement/hash.ts';
+
 export type { LeastSquaresOptions, LeastSquaresProblem, LeastSquaresResult, StopReason } from './fit/least-squares.ts';
 export type { IdentifiabilityIssue, ParameterStatistics } from './fit/intervals.ts';
-export { CORRELATION_LIMIT } from './fit/intervals.ts';
+
 export type { FitParameter, FitParameterName } from './fit/parameters.ts';
 export { defaultFitParameters, fitParameters, SCALE_BOUNDS } from './fit/parameters.ts';
 export type * from './fit/types.ts';
@@ -260,7 +257,6 @@ export type { CalibrationOptions, CalibrationOutcome } from './fit/calibrate.ts'
 export { calibrate } from './fit/calibrate.ts';
 export { modelPoints } from './fit/point-model.ts';
 
-export { CALIBRATION_CAUTION } from './fit/caution.ts';
 export type { CalibrationSection, CalibrationSectionPoint } from './fit/report-section.ts';
 export { calibrationSection } from './fit/report-section.ts';
 

@@ -107,13 +107,3 @@ export function ratingLimits(design: Design, role: Role, part: Part, s: RoleStre
   return out;
 }
 
-/** Reasons the part does not fit (empty: it fits). */
-export function ratingShortfalls(design: Design, role: Role, part: Part, s: RoleStress, currentDerating = DEFAULT_CURRENT_DERATING): string[] {
-  return ratingLimits(design, role, part, s, currentDerating)
-    .filter((r) => r.value > r.limit)
-    .map((r) => `${r.what} ${fmt(r.value)} ${r.unit} exceeds the allowed ${fmt(r.limit)} ${r.unit}.`);
-}
-
-function fmt(x: number): string {
-  return Number(x.toPrecision(4)).toString();
-}

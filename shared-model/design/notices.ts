@@ -53,7 +53,8 @@ export function ignoredKeys(input: unknown, parsed: unknown, path: (string | num
  * (curves/coss-table.ts), an extrapolation the engineer should know about.
  */
 export function curveNotices(design: Design): DesignNotice[] {
-  const swingV = design.topology.kind === 'buck' ? design.spec.vinMaxV : design.spec.voutV;
+  const blocks = topologyOf(design).switchBlocks;
+  const swingV = blocks.input * design.spec.vinMaxV + blocks.output * design.spec.voutV;
   const out: DesignNotice[] = [];
   const ind = design.parts.inductor;
   if (ind.inductanceCurve && ind.rolloff) {

@@ -14,7 +14,7 @@
  *
  * Every number must also be finite (zod 4 refuses NaN and ±Infinity).
  * This is the first module that builds zod schemas, so it switches zod's JIT off here: zod 4 probes
- * with `new Function`, which a strict Content-Security-Policy in the renderer reports (TOOLCHAIN.md).
+ * with `new Function`, which the renderer's strict Content-Security-Policy (src-main/security/) reports.
  */
 import { z } from 'zod';
 

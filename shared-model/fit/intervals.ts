@@ -13,7 +13,7 @@
 import { inverseSpd, normalEquations, symmetricEigen } from './matrix.ts';
 import { studentTQuantile } from './student-t.ts';
 
-export const CORRELATION_LIMIT = 0.95;
+const CORRELATION_LIMIT = 0.95;
 export const FLAT_DIRECTION_RATIO = 1e-8;
 
 export type IdentifiabilityIssue =

@@ -14,7 +14,7 @@ import { findEdge, findRoot, interpolateCrossing } from './search.ts';
 import type { PartCeiling, ThermalCeilingLandmark } from './types.ts';
 
 /** A point whose margins can be trusted (converged electro-thermal fixed point). */
-export function hasFixedPoint(p: SweepPoint): boolean {
+function hasFixedPoint(p: SweepPoint): boolean {
   return p.converged && !hasWarning(p, 'thermal-runaway');
 }
 

@@ -12,7 +12,7 @@
  */
 
 /** Relative tolerance within which the output counts as held at its target (far above rounding). */
-export const REGULATION_RTOL = 1e-6;
+const REGULATION_RTOL = 1e-6;
 
 /** Regulated: the output reached is the target within REGULATION_RTOL. */
 export function isRegulated(voutV: number, targetVoutV: number): boolean {

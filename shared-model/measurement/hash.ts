@@ -7,7 +7,7 @@
 import { sha256Hex } from '../report/sha256.ts';
 import { measurementSchema, type Measurement } from './schema.ts';
 
-export function measurementText(m: Measurement): string {
+function measurementText(m: Measurement): string {
   return `${JSON.stringify(measurementSchema.parse(m), null, 2)}\n`;
 }
 

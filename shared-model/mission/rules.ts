@@ -11,7 +11,7 @@ import type { Problem } from '../design/problems.ts';
 import { inUnit, problem } from '../design/problems.ts';
 import { isObject, list, num } from '../design/read.ts';
 
-export const FRACTION_SUM_TOLERANCE = 1e-3;
+const FRACTION_SUM_TOLERANCE = 1e-3;
 
 export function missionRules(doc: unknown): Problem[] {
   if (!isObject(doc) || !isObject(doc.missionProfile)) return [];

@@ -9,7 +9,7 @@
 import { z } from 'zod';
 import { quantity as q } from '../design/numbers.ts';
 
-export const MAX_MISSION_ROWS = 100;
+const MAX_MISSION_ROWS = 100;
 
 export const missionRowSchema = z.object({
   /** What the product is doing in this row ("standby", "charging"...), free text. */

@@ -64,7 +64,7 @@ export const WEIGHTING_SETS: readonly WeightingSet[] = [
   },
 ];
 
-export function weightingSet(id: WeightingId): WeightingSet {
+function weightingSet(id: WeightingId): WeightingSet {
   const set = WEIGHTING_SETS.find((w) => w.id === id);
   if (!set) throw new Error(`unknown weighting set ${String(id)}`);
   return set;

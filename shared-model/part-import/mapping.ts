@@ -15,8 +15,8 @@ import { KIND_WORDS } from './field-labels.ts';
 import { fieldsOfKind, partField } from './fields.ts';
 import { unitExponent } from './cells.ts';
 
-export const PART_MAPPING_FORMAT = 'wattledger.part-mapping';
-export const PART_MAPPING_VERSION = 1;
+const PART_MAPPING_FORMAT = 'wattledger.part-mapping';
+const PART_MAPPING_VERSION = 1;
 
 const kinds = Object.keys(KIND_WORDS) as [PartKind, ...PartKind[]];
 

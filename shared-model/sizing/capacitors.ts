@@ -15,6 +15,7 @@
  * (capacitor charge balance, from memory for the chapter); docs/methods.md §23.
  */
 import type { Design } from '../design/schema.ts';
+import { topologyOf } from '../topology/registry.ts';
 import type { Waveform } from '../operating-point/types.ts';
 import { waveformStats } from '../waveform/stats.ts';
 import type { SolvedCorner } from './corners.ts';
@@ -50,23 +51,17 @@ function swingOf(w: Waveform): number {
 const capWave = (c: SolvedCorner) => c.evaluation.operatingPoint.waveforms.outputCapacitor;
 
 export function sizeOutputCapacitor(design: Design, corners: readonly SolvedCorner[]): OutputCapacitorSizing {
-  const boost = design.topology.kind === 'boost';
+  const words = topologyOf(design).sizingWords;
   const slot = design.parts.outputCapacitor;
   const bank = { capacitanceF: slot.part.capacitanceF * slot.count, esrOhm: slot.part.esrOhm / slot.count };
   const chargeC = sized(corners, (c) => chargeAboveMean(capWave(c)), {
     unit: 'C',
-    formula: boost ? 'Q = ∫ max(iC − īC, 0) dt = Io·D·Ts (boost)' : 'Q = ∫ max(iC − īC, 0) dt = ΔI·Ts/8 (buck)',
-    reason: boost
-      ? 'The bank alone feeds the load during the on time D·Ts; D is largest at {corner}.'
-      : 'The bank absorbs the inductor ripple, largest at {corner}.',
+    ...words.outputCharge,
     source: CHARGE_SOURCE,
   });
   const currentSwingA = sized(corners, (c) => swingOf(capWave(c)), {
     unit: 'A',
-    formula: boost ? 'ΔiC = Ipk (rectifier current steps from 0 to the inductor peak)' : 'ΔiC = ΔI',
-    reason: boost
-      ? 'The capacitor current steps by the inductor peak, largest at {corner}.'
-      : 'The capacitor current swings by the inductor ripple, largest at {corner}.',
+    ...words.outputCurrentSwing,
     source: CHARGE_SOURCE,
   });
   const rmsA = sized(corners, (c) => c.evaluation.operatingPoint.stats.outputCapacitor.rmsA, {

@@ -17,6 +17,7 @@
  * Source: docs/methods.md §13, §17, §23.
  */
 import type { Design } from '../design/schema.ts';
+import { topologyOf } from '../topology/registry.ts';
 import type { SolvedCorner } from './corners.ts';
 import { derived, sized } from './sized.ts';
 import type { CrossoverLimit, DutySizing, LoopSizing, SlopeSizing } from './types.ts';
@@ -46,10 +47,7 @@ function downSlope(c: SolvedCorner): number {
 export function sizeSlope(design: Design, corners: readonly SolvedCorner[]): SlopeSizing {
   const m2 = sized(corners, downSlope, {
     unit: 'A/s',
-    formula: design.topology.kind === 'boost' ? 'm2 = (Vo − Vin)/L (solved waveform)' : 'm2 = Vo/L (solved waveform)',
-    reason: design.topology.kind === 'boost'
-      ? 'The boost down-slope (Vo − Vin)/L is steepest at the lowest input voltage, which is also the largest duty: {corner}.'
-      : 'The buck down-slope Vo/L is the same at every Vin; the duty is largest at {corner}.',
+    ...topologyOf(design).sizingWords.downSlope,
     source: RIDLEY,
   });
   const dMax = Math.max(...corners.map((c) => op(c).dutyCycle));
@@ -80,7 +78,7 @@ export function sizeSlope(design: Design, corners: readonly SolvedCorner[]): Slo
 }
 
 export function sizeLoop(design: Design, corners: readonly SolvedCorner[]): LoopSizing {
-  const boost = design.topology.kind === 'boost';
+  const topology = topologyOf(design);
   const slot = design.parts.outputCapacitor;
   const cF = slot.part.capacitanceF * slot.count;
   const esr = slot.part.esrOhm / slot.count;
@@ -89,9 +87,9 @@ export function sizeLoop(design: Design, corners: readonly SolvedCorner[]): Loop
   const base = sized(corners, (c) => op(c).dutyCycle, { unit: '', formula: '', reason: 'at {corner}' });
   const outputPoleHz = derived(
     { ...base, reason: 'The load resistance R = Vo/Io is smallest at rated load (the pole is then highest).' },
-    (boost ? 2 : 1) / (2 * Math.PI * rLoad * cF),
+    topology.outputPoleFactor / (2 * Math.PI * rLoad * cF),
     'Hz',
-    boost ? 'fp = 2/(2π·R·C) (current mode)' : 'fp = 1/(2π·R·C) (current mode)',
+    topology.sizingWords.outputPoleFormula,
     SMALL_SIGNAL,
   );
   const esrZeroHz = esr > 0 ? 1 / (2 * Math.PI * esr * cF) : Infinity;
@@ -99,12 +97,13 @@ export function sizeLoop(design: Design, corners: readonly SolvedCorner[]): Loop
     { id: 'switching', hz: fs / 10, reason: 'a tenth of the switching frequency (the averaged model holds well below fs)', source: 'common practice; docs/methods.md §13' },
   ];
   const out: LoopSizing = { outputPoleHz, esrZeroHz: Number.isFinite(esrZeroHz) ? esrZeroHz : 0, limits, crossoverHz: 0, crossoverReason: '' };
-  if (boost) {
-    const fz = (c: SolvedCorner) => {
-      const dp = 1 - op(c).dutyCycle;
-      const r = op(c).voutV / c.corner.loadA;
-      return (dp * dp * r) / (2 * Math.PI * op(c).inductanceH);
-    };
+  // The right-half-plane zero of the topology's record at each corner's solved duty (resistive load R = Vo/Io).
+  const rhpZeroAt = (c: SolvedCorner) => {
+    const r = op(c).voutV / c.corner.loadA;
+    return topology.smallSignal(op(c).dutyCycle, r, op(c).inductanceH, cF, 1 / r)?.rhpZeroHz;
+  };
+  if (corners.length > 0 && rhpZeroAt(corners[0]!) !== undefined) {
+    const fz = (c: SolvedCorner) => rhpZeroAt(c) ?? Infinity;
     out.rhpZeroHz = sized(corners, fz, {
       unit: 'Hz',
       formula: 'fz = D′²·R/(2π·L) (solved D)',

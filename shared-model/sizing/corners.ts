@@ -13,6 +13,7 @@
  * and boost, from memory for the chapter); the maximum at Vo/2 is worked here (docs/methods.md §23).
  */
 import type { Design } from '../design/schema.ts';
+import { topologyOf } from '../topology/registry.ts';
 import type { Evaluation } from '../ledger/types.ts';
 import { evaluate } from '../ledger/evaluate.ts';
 import type { CornerId, SizingCorner } from './types.ts';
@@ -28,12 +29,12 @@ const LABELS: Record<CornerId, string> = {
   'vin-min': 'Vin min',
   'vin-nom': 'Vin nominal',
   'vin-max': 'Vin max',
-  'vin-ripple': 'Vin of largest ripple (Vout/2)',
+  'vin-ripple': 'Vin of largest ripple',
 };
 
 /** The input voltages of the corners, in order, without repeats (a fixed input gives one corner). */
 export function cornerVoltages(design: Design): { id: CornerId; vinV: number }[] {
-  const { spec, topology } = design;
+  const { spec } = design;
   const out: { id: CornerId; vinV: number }[] = [];
   const add = (id: CornerId, vinV: number) => {
     if (!out.some((c) => c.vinV === vinV)) out.push({ id, vinV });
@@ -41,8 +42,8 @@ export function cornerVoltages(design: Design): { id: CornerId; vinV: number }[]
   add('vin-min', spec.vinMinV);
   add('vin-nom', spec.vinNomV);
   add('vin-max', spec.vinMaxV);
-  const half = spec.voutV / 2;
-  if (topology.kind === 'boost' && half > spec.vinMinV && half < spec.vinMaxV) add('vin-ripple', half);
+  const ripple = topologyOf(design).sizingWords.largestRippleVinV(spec.voutV);
+  if (ripple !== undefined && ripple > spec.vinMinV && ripple < spec.vinMaxV) add('vin-ripple', ripple);
   return out;
 }
 

@@ -10,9 +10,14 @@
  * Crossover: min(fs/10, fRHPZ/5) (common practice). Sense loss Isw,rms²·Rs.
  * Source: Erickson & Maksimović, Fundamentals of Power Electronics, 2nd ed., ch. 2 (ripple, capacitor
  * charge), ch. 8 (RHP zero), from memory for chapters; Ridley 1991 (slope); docs/methods.md §1, §13, §17, §23.
+ * Both read the topology record (ideal duty, the intervals' flags, on-interval voltage, RHP zero, output
+ * pole factor), so a new topology needs no case here.
  */
+import type { Design } from '../design/schema.ts';
+import { TOPOLOGIES } from '../topology/registry.ts';
+
 export interface HandInput {
-  kind: 'buck' | 'boost';
+  kind: Design['topology']['kind'];
   vinV: number;
   voutV: number;
   loadA: number;
@@ -44,21 +49,29 @@ export interface HandSizing {
 }
 
 export function handSizing(h: HandInput): HandSizing {
-  const boost = h.kind === 'boost';
+  const t = TOPOLOGIES[h.kind];
+  const { on, off } = t.intervals;
   const fs = h.switchingFrequencyHz;
   const r = h.voutV / h.loadA;
-  const d = boost ? 1 - (h.efficiency * h.vinV) / h.voutV : h.voutV / (h.efficiency * h.vinV);
-  const il = boost ? h.loadA / (1 - d) : h.loadA;
+  // The ideal duty with the input scaled by η (boost 1 − η·Vin/Vo, buck Vo/(η·Vin)).
+  const d = t.idealDuty(h.efficiency * h.vinV, h.voutV);
+  // Charge balance: the load current is the inductor current over the intervals that deliver to the output.
+  const delivering = (on.toOutput ? d : 0) + (off.toOutput ? 1 - d : 0);
+  const il = h.loadA / delivering;
   const ripple = h.rippleRatio * il;
-  const onV = boost ? h.vinV : h.vinV - h.voutV;
+  const onV = t.idealOnVoltsV(h.vinV, h.voutV);
   const l = (onV * d) / (ripple * fs);
   const peak = il + ripple / 2;
-  const c = boost ? (h.loadA * d) / (fs * h.outputRippleV) : ripple / (8 * fs * h.outputRippleV);
-  const maxEsr = h.outputRippleV / (boost ? peak : ripple);
-  const rhp = boost ? ((1 - d) ** 2 * r) / (2 * Math.PI * l) : 0;
-  const pole = (boost ? 2 : 1) / (2 * Math.PI * r * c);
-  const crossover = boost ? Math.min(fs / 10, rhp / 5) : fs / 10;
-  const downSlope = boost ? (h.voutV - h.vinV) / l : h.voutV / l;
+  // Output fed in both intervals: the bank takes the triangular ripple (ΔI/(8·fs·ΔV)); fed only while the
+  // rectifier conducts: the bank alone carries the load for the rest of the period (Io·D/(fs·ΔV)).
+  const continuous = on.toOutput && off.toOutput;
+  const c = continuous ? ripple / (8 * fs * h.outputRippleV) : (h.loadA * (1 - delivering)) / (fs * h.outputRippleV);
+  const maxEsr = h.outputRippleV / (continuous ? ripple : peak);
+  const rhp = t.smallSignal(d, r, l, c, 1 / r)?.rhpZeroHz ?? 0;
+  const pole = t.outputPoleFactor / (2 * Math.PI * r * c);
+  const crossover = rhp > 0 ? Math.min(fs / 10, rhp / 5) : fs / 10;
+  // Falling slope: the off interval's ideal inductor voltage (boost Vo − Vin, buck Vo) over L.
+  const downSlope = Math.abs((off.fromInput ? h.vinV : 0) - h.voutV) / l;
   const swRms = Math.sqrt(d * (il * il + (ripple * ripple) / 12));
   return {
     dutyCycle: d,

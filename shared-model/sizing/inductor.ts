@@ -14,6 +14,7 @@
  * from memory for the chapter); docs/methods.md §1, §23.
  */
 import type { Design } from '../design/schema.ts';
+import { topologyOf } from '../topology/registry.ts';
 import type { SolvedCorner } from './corners.ts';
 import { sized } from './sized.ts';
 import type { InductorSizing } from './types.ts';
@@ -26,13 +27,10 @@ const meanA = (c: SolvedCorner) => c.evaluation.operatingPoint.inductor.averageA
 
 export function sizeInductor(design: Design, corners: readonly SolvedCorner[]): InductorSizing {
   const r = design.spec.targets?.inductorRippleRatio ?? DEFAULT_RIPPLE_RATIO;
-  const boost = design.topology.kind === 'boost';
+  const words = topologyOf(design).sizingWords;
   const ratedCurrentA = sized(corners, meanA, {
     unit: 'A',
-    formula: boost ? 'IL = Iin (mean inductor current, solved)' : 'IL = Io (mean inductor current, solved)',
-    reason: boost
-      ? 'A boost draws its largest input (inductor) current at the lowest input voltage: {corner}.'
-      : 'A buck carries the load current in its inductor at every input voltage; {corner} is taken.',
+    ...words.inductorCurrent,
     source: ERICKSON,
   });
   const targetRippleA = r * ratedCurrentA.value;
@@ -41,9 +39,7 @@ export function sizeInductor(design: Design, corners: readonly SolvedCorner[]): 
   const requiredInductanceH = sized(corners, voltSeconds, {
     unit: 'H',
     formula: 'L ≥ max(L·ΔI)/(r·IL,rated), L·ΔI = on-interval voltage × solved on time',
-    reason: boost
-      ? 'The inductor volt-seconds Vin·D·Ts of a boost peak near Vin = Vout/2; the largest over the range is at {corner}.'
-      : 'The inductor volt-seconds (Vin − Vout)·D·Ts of a buck grow with Vin: {corner}.',
+    reason: words.inductorVoltSecondsReason,
     source: ERICKSON,
   });
   requiredInductanceH.value = lReq;

@@ -10,6 +10,7 @@
  * Source: common practice (derating); docs/methods.md §1 (currents), §23.
  */
 import type { Design } from '../design/schema.ts';
+import { topologyOf } from '../topology/registry.ts';
 import { DEFAULT_CURRENT_DERATING } from '../compare/role-fit.ts';
 import type { SolvedCorner } from './corners.ts';
 import { sized } from './sized.ts';
@@ -19,28 +20,24 @@ const op = (c: SolvedCorner) => c.evaluation.operatingPoint;
 const absPeak = (s: { peakA: number; minA: number }) => Math.max(Math.abs(s.peakA), Math.abs(s.minA));
 
 export function sizeStresses(design: Design, corners: readonly SolvedCorner[], currentDerating = DEFAULT_CURRENT_DERATING): StressSizing {
-  const boost = design.topology.kind === 'boost';
+  const words = topologyOf(design).sizingWords;
   const vd = design.margins.voltageDerating;
-  const voltReason = boost
-    ? 'A boost switch and rectifier block the output voltage at every Vin; the largest solved value is at {corner}.'
-    : 'A buck switch and rectifier block the input voltage: {corner}.';
-  const currentReason = boost
-    ? 'Boost currents follow the input current, largest at {corner}.'
-    : 'Buck currents follow the load plus half the ripple; the ripple grows with Vin: {corner}.';
+  const voltReason = words.blockingReason;
+  const currentReason = words.currentReason;
   const switchV = sized(corners, (c) => op(c).stress.switchV, { unit: 'V', formula: 'solved blocking voltage', reason: voltReason });
   const rectifierV = sized(corners, (c) => op(c).stress.rectifierV, { unit: 'V', formula: 'solved blocking voltage', reason: voltReason });
   const switchPeakA = sized(corners, (c) => absPeak(op(c).stats.switch), { unit: 'A', formula: 'peak of the solved switch current', reason: currentReason });
   const switchRmsA = sized(corners, (c) => op(c).stats.switch.rmsA, {
     unit: 'A',
     formula: 'Isw,rms = √(D·(IL² + ΔI²/12)) (exact, solved)',
-    reason: boost ? 'Boost currents follow the input current, largest at {corner}.' : 'The switch RMS current of a buck grows with D, largest at {corner}.',
+    reason: words.switchRmsReason,
     source: 'docs/methods.md §1',
   });
   const rectifierPeakA = sized(corners, (c) => absPeak(op(c).stats.rectifier), { unit: 'A', formula: 'peak of the solved rectifier current', reason: currentReason });
   const rectifierAverageA = sized(corners, (c) => Math.abs(op(c).stats.rectifier.averageA), {
     unit: 'A',
     formula: 'mean of the solved rectifier current',
-    reason: boost ? 'A boost rectifier carries the load current on average at every Vin: {corner}.' : 'A buck rectifier conducts (1 − D), longest at {corner}.',
+    reason: words.rectifierMeanReason,
   });
   const rect = design.parts.rectifier;
   const rectifierCurrent = rect.kind === 'diode' ? rectifierAverageA.value : rectifierPeakA.value;

@@ -3,6 +3,7 @@
  * points at the corners of the input-voltage range (rated load), each result naming the corner that
  * drives it and why. SI units throughout (V, A, Ω, H, F, Hz, s, W, C); temperatures °C.
  */
+import type { Design } from '../design/schema.ts';
 import type { ConductionMode } from '../operating-point/types.ts';
 
 /** Where a sizing result was found: a corner of Vin at rated load. */
@@ -145,7 +146,7 @@ export interface LoopSizing {
 }
 
 export interface Sizing {
-  topology: 'buck' | 'boost';
+  topology: Design['topology']['kind'];
   corners: SizingCorner[];
   duty: DutySizing;
   inductor: InductorSizing;

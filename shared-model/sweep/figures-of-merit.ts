@@ -92,8 +92,3 @@ export function figuresOfMerit(
   const fixed = conditionsFor(design, options.conditions);
   return figuresOfMeritOf((loadA) => evaluator(design, { ...fixed, loadA }), design.spec.ratedLoadA, design.spec.voutV);
 }
-
-/** The figure's value, or the fallback (for sorting and charts that need a number). */
-export function figureValue(f: Figure, fallback: number): number {
-  return f.available ? f.value : fallback;
-}

@@ -42,4 +42,25 @@ export const boost: ConverterTopology = {
   },
   smallSignalMethod:
     'RHP zero ωz = D′²·R/L; current-mode output pole ωp = (1/R + g)/C with g the load\'s incremental conductance: 2/(R·C) for a resistor (docs/methods.md §13), 1/(R·C) for a constant current, 0 for a constant power (docs/methods.md §22)',
+  outputPoleFactor: 2,
+  sizingWords: {
+    inductorCurrent: {
+      formula: 'IL = Iin (mean inductor current, solved)',
+      reason: 'A boost draws its largest input (inductor) current at the lowest input voltage: {corner}.',
+    },
+    inductorVoltSecondsReason: 'The inductor volt-seconds Vin·D·Ts of a boost peak near Vin = Vout/2; the largest over the range is at {corner}.',
+    // Vin·(1 − Vin/Vo) peaks at Vin = Vo/2.
+    largestRippleVinV: (voutV) => voutV / 2,
+    blockingReason: 'A boost switch and rectifier block the output voltage at every Vin; the largest solved value is at {corner}.',
+    currentReason: 'Boost currents follow the input current, largest at {corner}.',
+    switchRmsReason: 'Boost currents follow the input current, largest at {corner}.',
+    rectifierMeanReason: 'A boost rectifier carries the load current on average at every Vin: {corner}.',
+    outputCharge: { formula: 'Q = ∫ max(iC − īC, 0) dt = Io·D·Ts (boost)', reason: 'The bank alone feeds the load during the on time D·Ts; D is largest at {corner}.' },
+    outputCurrentSwing: { formula: 'ΔiC = Ipk (rectifier current steps from 0 to the inductor peak)', reason: 'The capacitor current steps by the inductor peak, largest at {corner}.' },
+    downSlope: {
+      formula: 'm2 = (Vo − Vin)/L (solved waveform)',
+      reason: 'The boost down-slope (Vo − Vin)/L is steepest at the lowest input voltage, which is also the largest duty: {corner}.',
+    },
+    outputPoleFormula: 'fp = 2/(2π·R·C) (current mode)',
+  },
 };

@@ -29,4 +29,22 @@ export const buck: ConverterTopology = {
   chargePulsesFromSource: true,
   smallSignal: () => undefined,
   smallSignalMethod: 'none (no right-half-plane zero)',
+  outputPoleFactor: 1,
+  sizingWords: {
+    inductorCurrent: {
+      formula: 'IL = Io (mean inductor current, solved)',
+      reason: 'A buck carries the load current in its inductor at every input voltage; {corner} is taken.',
+    },
+    inductorVoltSecondsReason: 'The inductor volt-seconds (Vin − Vout)·D·Ts of a buck grow with Vin: {corner}.',
+    // (Vin − Vo)·Vo/Vin rises with Vin: the largest ripple is at the top of the range, a corner already.
+    largestRippleVinV: () => undefined,
+    blockingReason: 'A buck switch and rectifier block the input voltage: {corner}.',
+    currentReason: 'Buck currents follow the load plus half the ripple; the ripple grows with Vin: {corner}.',
+    switchRmsReason: 'The switch RMS current of a buck grows with D, largest at {corner}.',
+    rectifierMeanReason: 'A buck rectifier conducts (1 − D), longest at {corner}.',
+    outputCharge: { formula: 'Q = ∫ max(iC − īC, 0) dt = ΔI·Ts/8 (buck)', reason: 'The bank absorbs the inductor ripple, largest at {corner}.' },
+    outputCurrentSwing: { formula: 'ΔiC = ΔI', reason: 'The capacitor current swings by the inductor ripple, largest at {corner}.' },
+    downSlope: { formula: 'm2 = Vo/L (solved waveform)', reason: 'The buck down-slope Vo/L is the same at every Vin; the duty is largest at {corner}.' },
+    outputPoleFormula: 'fp = 1/(2π·R·C) (current mode)',
+  },
 };

@@ -94,4 +94,44 @@ export interface ConverterTopology {
   smallSignal(d: number, loadOhm: number, inductanceH: number, capacitanceF: number, loadConductanceS: number): SmallSignalFigures | undefined;
   /** The small-signal formulas in words and their source (report). */
   smallSignalMethod: string;
+  /**
+   * Current-mode output pole of the sizing with a resistive load: fp = outputPoleFactor/(2π·R·C) — 1 where
+   * the power stage feeds the output like a current source (buck), 2 where it feeds about constant power
+   * (boost: its own output conductance 1/R beside the load's). docs/methods.md §13.
+   */
+  outputPoleFactor: number;
+  /** What the sizing (sizing/, design-checks/) says of this topology in words: formulas and why a corner is worst. */
+  sizingWords: TopologySizingWords;
+}
+
+/** A formula in plain text and why the worst corner is where it is (`{corner}` names it). */
+export interface WordedFormula {
+  formula: string;
+  reason: string;
+}
+
+/** The sizing's sentences that depend on the topology (sizing/*.ts fill in the solved numbers). */
+export interface TopologySizingWords {
+  /** The mean inductor current and where it is largest. */
+  inductorCurrent: WordedFormula;
+  /** Why the inductor volt-seconds are largest where they are. */
+  inductorVoltSecondsReason: string;
+  /** The input voltage inside the range where the ripple volt-seconds peak, if not at an end of it. */
+  largestRippleVinV(voutV: number): number | undefined;
+  /** Why the switch and rectifier blocking voltages are largest where they are. */
+  blockingReason: string;
+  /** Why the switch and rectifier peak currents are largest where they are. */
+  currentReason: string;
+  /** Why the switch RMS current is largest where it is. */
+  switchRmsReason: string;
+  /** Why the rectifier's mean current is largest where it is. */
+  rectifierMeanReason: string;
+  /** The output bank's charge per period above its mean current. */
+  outputCharge: WordedFormula;
+  /** The output bank's current swing (for the ESR limit). */
+  outputCurrentSwing: WordedFormula;
+  /** The inductor current's falling slope (slope compensation). */
+  downSlope: WordedFormula;
+  /** The current-mode output pole's formula. */
+  outputPoleFormula: string;
 }

@@ -3,7 +3,7 @@
  * component only renders and the numbers can be checked against the engine in tests. Values are the
  * engine's own numbers; nothing is recomputed here except the share of a rating.
  */
-import { CONDITION_LABELS, formatEngineering, type Design, type OperatingPoint } from '../../shared-model/index.ts';
+import { CONDITION_LABELS, formatEngineering, ROLE_LABELS, type Design, type OperatingPoint } from '../../shared-model/index.ts';
 
 export interface OperatingPointRow {
   /** Stable key for tests and the data table ("inductor.rmsA"). */
@@ -40,19 +40,19 @@ export function operatingPointRows(op: OperatingPoint, design: Design, evaluated
   add('Timing', 'dutyCycle', 'Duty cycle', op.dutyCycle, '%');
   add('Timing', 'rectifierFraction', 'Rectifier conducts', op.rectifierFraction, '%');
   if (op.mode === 'DCM') add('Timing', 'idleFraction', 'Zero-current interval', op.idleFraction, '%');
-  add('Inductor', 'inductor.averageA', 'Average current', op.inductor.averageA, 'A');
-  add('Inductor', 'inductor.rmsA', 'RMS current', op.inductor.rmsA, 'A', { label: 'RMS rating', value: parts.inductor.irmsRatingA, usable: 1 });
-  add('Inductor', 'inductor.peakA', 'Peak current', op.inductor.peakA, 'A', { label: 'Isat', value: parts.inductor.isatA, usable: 1 });
-  add('Inductor', 'inductor.valleyA', 'Valley current', op.inductor.valleyA, 'A');
-  add('Inductor', 'inductor.rippleA', 'Ripple, peak to peak', op.inductor.rippleA, 'A');
-  add('Control switch', 'stats.switch.averageA', 'Average current', op.stats.switch.averageA, 'A');
-  add('Control switch', 'stats.switch.rmsA', 'RMS current', op.stats.switch.rmsA, 'A');
-  add('Control switch', 'stats.switch.peakA', 'Peak current', op.stats.switch.peakA, 'A', { label: 'ID rating', value: parts.switch.idRatingA, usable: 1 });
-  add('Control switch', 'stress.switchV', 'Blocking voltage', op.stress.switchV, 'V', { label: 'VDS rating', value: parts.switch.vdsRatingV, usable: vUse });
-  add('Rectifier', 'stats.rectifier.averageA', 'Average current', op.stats.rectifier.averageA, 'A');
-  add('Rectifier', 'stats.rectifier.rmsA', 'RMS current', op.stats.rectifier.rmsA, 'A');
-  add('Rectifier', 'stats.rectifier.peakA', 'Peak current', op.stats.rectifier.peakA, 'A');
-  add('Rectifier', 'stress.rectifierV', 'Blocking voltage', op.stress.rectifierV, 'V', {
+  add(ROLE_LABELS.inductor, 'inductor.averageA', 'Average current', op.inductor.averageA, 'A');
+  add(ROLE_LABELS.inductor, 'inductor.rmsA', 'RMS current', op.inductor.rmsA, 'A', { label: 'RMS rating', value: parts.inductor.irmsRatingA, usable: 1 });
+  add(ROLE_LABELS.inductor, 'inductor.peakA', 'Peak current', op.inductor.peakA, 'A', { label: 'Isat', value: parts.inductor.isatA, usable: 1 });
+  add(ROLE_LABELS.inductor, 'inductor.valleyA', 'Valley current', op.inductor.valleyA, 'A');
+  add(ROLE_LABELS.inductor, 'inductor.rippleA', 'Ripple, peak to peak', op.inductor.rippleA, 'A');
+  add(ROLE_LABELS.switch, 'stats.switch.averageA', 'Average current', op.stats.switch.averageA, 'A');
+  add(ROLE_LABELS.switch, 'stats.switch.rmsA', 'RMS current', op.stats.switch.rmsA, 'A');
+  add(ROLE_LABELS.switch, 'stats.switch.peakA', 'Peak current', op.stats.switch.peakA, 'A', { label: 'ID rating', value: parts.switch.idRatingA, usable: 1 });
+  add(ROLE_LABELS.switch, 'stress.switchV', 'Blocking voltage', op.stress.switchV, 'V', { label: 'VDS rating', value: parts.switch.vdsRatingV, usable: vUse });
+  add(ROLE_LABELS.rectifier, 'stats.rectifier.averageA', 'Average current', op.stats.rectifier.averageA, 'A');
+  add(ROLE_LABELS.rectifier, 'stats.rectifier.rmsA', 'RMS current', op.stats.rectifier.rmsA, 'A');
+  add(ROLE_LABELS.rectifier, 'stats.rectifier.peakA', 'Peak current', op.stats.rectifier.peakA, 'A');
+  add(ROLE_LABELS.rectifier, 'stress.rectifierV', 'Blocking voltage', op.stress.rectifierV, 'V', {
     label: parts.rectifier.kind === 'diode' ? 'VR rating' : 'VDS rating',
     value: rectifierRating,
     usable: vUse,
@@ -69,14 +69,14 @@ export function operatingPointRows(op: OperatingPoint, design: Design, evaluated
     value: outCap.part.rippleRatingA * outCap.count,
     usable: rippleUse,
   });
-  if (parts.senseResistor) add('Sense resistor', 'stats.sense.rmsA', 'RMS current', op.stats.sense.rmsA, 'A');
+  if (parts.senseResistor) add(ROLE_LABELS.senseResistor, 'stats.sense.rmsA', 'RMS current', op.stats.sense.rmsA, 'A');
   add('Source and output', 'waveforms.inputA', 'Average input current', op.waveforms.inputA, 'A');
   add('Source and output', 'outputRipple.capacitiveV', 'Output ripple from charge', op.outputRipple.capacitiveV, 'V');
   add('Source and output', 'outputRipple.esrV', 'Output ripple from ESR', op.outputRipple.esrV, 'V');
   add('Source and output', 'outputRipple.totalV', 'Output ripple, total', op.outputRipple.totalV, 'V');
   if (op.smallSignal) {
-    add('Boost control landmarks', 'smallSignal.rhpZeroHz', 'Right-half-plane zero', op.smallSignal.rhpZeroHz, 'Hz');
-    add('Boost control landmarks', 'smallSignal.outputPoleHz', 'Output pole (current mode)', op.smallSignal.outputPoleHz, 'Hz');
+    add('Control landmarks (small signal)', 'smallSignal.rhpZeroHz', 'Right-half-plane zero', op.smallSignal.rhpZeroHz, 'Hz');
+    add('Control landmarks (small signal)', 'smallSignal.outputPoleHz', 'Output pole (current mode)', op.smallSignal.outputPoleHz, 'Hz');
   }
   return rows;
 }

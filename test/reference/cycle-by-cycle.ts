@@ -9,7 +9,7 @@
  * crossing is located by Newton iteration with bisection (each trial re-integrates from the step's
  * start), and the rest of the period is the idle interval (iL ≡ 0, DCM). The inductor starts at its
  * ideal valley current (docs/methods.md §1, at the driven duty) and the output at its target, which avoids a
- * long LC start-up transient (TOOLCHAIN.md). Cycles run until the state at the start of a cycle and at its
+ * long LC start-up transient (common practice). Cycles run until the state at the start of a cycle and at its
  * end (iL relative to the cycle's inductor RMS, vC relative to itself, and the input-sense-corrected
  * source voltage) differ by less than `relativeChange` on `settleCycles` consecutive cycles, or
  * `maxCycles` is reached (then `converged` is false). Element means, RMS and

@@ -10,7 +10,6 @@
 import { describe, expect, it } from 'vitest';
 import { evaluate, findLandmarks, sweepLoad } from '../../../shared-model/index.ts';
 import type { Evaluation } from '../../../shared-model/index.ts';
-import { closeTo } from '../../helpers/close-to.ts';
 import { demoDesign as demo } from '../../helpers/demo.ts';
 
 const watts = (e: Evaluation, mechanism: string) =>
@@ -46,8 +45,12 @@ describe('the ledger at the CCM/DCM boundary of the demo synchronous buck', () =
     const rect = design.parts.rectifier;
     const qrr = rect.kind === 'mosfet' ? rect.bodyDiodeQrrC : 0;
     const testA = rect.kind === 'mosfet' ? (rect.bodyDiodeQrrTestA ?? design.spec.ratedLoadA) : 1;
-    // docs/methods.md §4 Qrr·Vsw·fs with Q ∝ IF (charge-control model [from memory]) at that valley current
-    closeTo(watts(above, 'reverse recovery'), qrr * (on.currentA / testA) * on.voltageV * above.conditions.switchingFrequencyHz, 1e-9);
+    // docs/methods.md §4 Qrr·Vsw·fs with Q ∝ IF (charge-control model [from memory]), bounded by hand from the
+    // design's own figures, not the engine's edge record: IF < 1 mA (above) and a buck's swing is Vin plus
+    // the body diode's drop, under 1 V (common practice).
+    const bound = qrr * (1e-3 / testA) * (above.conditions.vinV + 1) * design.spec.switchingFrequencyHz;
+    expect(watts(above, 'reverse recovery')).toBeGreaterThan(0); // CCM side: some charge is still recovered
+    expect(watts(above, 'reverse recovery')).toBeLessThanOrEqual(bound);
     expect(watts(above, 'reverse recovery')).toBeLessThan(STEP_W / 10); // far below the 97 mW the unscaled Qrr gave
   });
 
