@@ -6,8 +6,18 @@
  * is summing the engine's rows.
  */
 import { ROLE_LABELS } from '../../shared-model/index.ts';
-import type { PhasedEvaluation, PhaseIndex, PhaseShedding, Role } from '../../shared-model/index.ts';
+import type { PhaseIndex, PhaseShedding } from '../../shared-model/index.ts';
 import type { LineMarker, LineSeries, PointMarker } from '../charts/chart-data.ts';
+
+/** What the tables read: the engine's PhasedEvaluation, or its PhaseSummary (the report's copy). */
+export interface PhaseRecord {
+  activePhases: number;
+  phaseLoadsA: readonly number[];
+  rows: readonly { phase: PhaseIndex; part: string; watts: number }[];
+  temperatures: readonly { phase: PhaseIndex; part: string; celsius: number; limit: number; marginK: number }[];
+}
+
+const labelOf = (part: string): string => (ROLE_LABELS as Record<string, string>)[part] ?? part;
 
 export interface PhaseColumn {
   key: string;
@@ -18,7 +28,7 @@ export interface PhaseColumn {
 }
 
 export interface PhaseLossRow {
-  part: Role;
+  part: string;
   label: string;
   /** Loss in each column (null: the part has no copy there), W; the last column is the row's total. */
   cells: (number | null)[];
@@ -33,7 +43,7 @@ export interface PhaseLossTable {
 
 export interface PhaseTemperatureRow {
   key: string;
-  part: Role;
+  part: string;
   phase: PhaseIndex;
   label: string;
   phaseLabel: string;
@@ -43,7 +53,7 @@ export interface PhaseTemperatureRow {
 }
 
 /** "Phase 1 (worst, +5 %)", "Phase 2", "Shared". */
-export function phaseLabel(p: Pick<PhasedEvaluation, 'activePhases' | 'phaseLoadsA'>, phase: PhaseIndex): string {
+export function phaseLabel(p: Pick<PhaseRecord, 'activePhases' | 'phaseLoadsA'>, phase: PhaseIndex): string {
   if (phase === 'shared') return 'Shared';
   const loads = p.phaseLoadsA;
   const even = loads.reduce((s, a) => s + a, 0) / Math.max(loads.length, 1);
@@ -57,7 +67,7 @@ function formatPercent(fraction: number): string {
   return `${Number.isInteger(Math.round(pct * 10) / 10) ? pct.toFixed(0) : pct.toFixed(1)} %`;
 }
 
-export function phaseLossTable(p: PhasedEvaluation): PhaseLossTable {
+export function phaseLossTable(p: PhaseRecord): PhaseLossTable {
   const phases = Array.from({ length: p.activePhases }, (_, k) => k + 1);
   const columns: PhaseColumn[] = [
     ...phases.map((k) => ({ key: `phase-${k}`, phase: k, label: phaseLabel(p, k), loadA: p.phaseLoadsA[k - 1] ?? null })),
@@ -65,7 +75,7 @@ export function phaseLossTable(p: PhasedEvaluation): PhaseLossTable {
     { key: 'total', phase: 'total' as const, label: 'Total', loadA: null },
   ];
   const index = (phase: PhaseIndex) => (phase === 'shared' ? phases.length : phase - 1);
-  const byPart = new Map<Role, (number | null)[]>();
+  const byPart = new Map<string, (number | null)[]>();
   for (const row of p.rows) {
     const cells = byPart.get(row.part) ?? columns.map(() => null);
     const i = index(row.phase);
@@ -73,14 +83,14 @@ export function phaseLossTable(p: PhasedEvaluation): PhaseLossTable {
     cells[columns.length - 1] = (cells[columns.length - 1] ?? 0) + row.watts;
     byPart.set(row.part, cells);
   }
-  const rows = [...byPart.entries()].map(([part, cells]) => ({ part, label: ROLE_LABELS[part], cells }));
+  const rows = [...byPart.entries()].map(([part, cells]) => ({ part, label: labelOf(part), cells }));
   const totals = columns.map((_, i) => rows.reduce((s, r) => s + (r.cells[i] ?? 0), 0));
   return { columns, rows, totals };
 }
 
 /** One row per part and phase, the parts in ledger order, each part's phases in order, shared parts once. */
-export function phaseTemperatureRows(p: PhasedEvaluation): PhaseTemperatureRow[] {
-  const order = new Map<Role, number>();
+export function phaseTemperatureRows(p: PhaseRecord): PhaseTemperatureRow[] {
+  const order = new Map<string, number>();
   p.rows.forEach((r) => order.has(r.part) || order.set(r.part, order.size));
   const rank = (phase: PhaseIndex) => (phase === 'shared' ? 0 : phase);
   return [...p.temperatures]
@@ -89,7 +99,7 @@ export function phaseTemperatureRows(p: PhasedEvaluation): PhaseTemperatureRow[]
       key: `${t.part}:${t.phase}`,
       part: t.part,
       phase: t.phase,
-      label: ROLE_LABELS[t.part],
+      label: labelOf(t.part),
       phaseLabel: phaseLabel(p, t.phase),
       celsius: t.celsius,
       limit: t.limit,
