@@ -47,6 +47,11 @@ export const TOPOLOGY_LABELS = {
   deadTimeAfterOffS: 'Dead time after switch turn-off',
   phases: 'Interleaved phases',
   phaseMismatch: 'Current-sharing mismatch',
+  phaseShedding: 'Shed phases at light load',
+} as const;
+
+export const PHASE_SHEDDING_LABELS = {
+  hysteresisFraction: 'Shedding hysteresis, share of the crossover load',
 } as const;
 
 export const PULSE_SKIPPING_LABELS = {
@@ -155,6 +160,7 @@ export function designFieldLabel(path: string, doc: unknown): string | undefined
       return rest.length === 1 ? own(SPEC_LABELS, rest[0]) : undefined;
     case 'topology':
       if (rest[0] === 'pulseSkipping') return rest.length === 2 ? own(PULSE_SKIPPING_LABELS, rest[1]) : 'Pulse skipping';
+      if (rest[0] === 'phaseShedding') return rest.length === 2 ? own(PHASE_SHEDDING_LABELS, rest[1]) : TOPOLOGY_LABELS.phaseShedding;
       return rest.length === 1 ? own(TOPOLOGY_LABELS, rest[0]) : undefined;
     case 'parts':
       return isRole(rest[0]) ? partLabel(rest[0], rest.slice(1)) : undefined;

@@ -11,7 +11,9 @@
  * The date and the program version are inputs: the engine reads no clock. Pure: records in, record out.
  */
 import type { Design } from '../design/schema.ts';
-import { evaluate } from '../ledger/evaluate.ts';
+import { evaluateDesign } from '../interleave/phase-evaluator.ts';
+import { phaseShedding } from '../interleave/shedding.ts';
+import { phaseSummary } from '../interleave/summary.ts';
 import type { Evaluation, Mechanism } from '../ledger/types.ts';
 import type { Comparison } from '../compare/compare-parts.ts';
 import { sweepWithLandmarks } from '../landmarks/sweep-with-landmarks.ts';
@@ -29,6 +31,7 @@ import { methodsFor } from './methods.ts';
 import { loadKindOf } from '../operating-point/load.ts';
 import { sha256Hex } from './sha256.ts';
 import type {
+  ReportPhases,
   FamilyCurve,
   InputVoltageCase,
   ReportComparison,
@@ -131,8 +134,14 @@ export function reduceTolerance(worst: WorstCase | null | undefined, mc: MonteCa
 export function buildReport(input: ReportInput): ReportModel {
   const design = input.design;
   const s = design.spec;
-  const evaluateAt = (vinV: number): Evaluation => evaluate(design, { vinV, loadA: s.ratedLoadA });
-  const rated = evaluateAt(s.vinNomV);
+  // A multiphase design is evaluated as the whole converter (issue 13 §1); its per-phase rows and the
+  // phase-shedding curves go into `phases`.
+  const evaluateAt = (vinV: number): Evaluation => evaluateDesign(design, { vinV, loadA: s.ratedLoadA }).evaluation;
+  const nominal = evaluateDesign(design, { vinV: s.vinNomV, loadA: s.ratedLoadA });
+  const rated = nominal.evaluation;
+  const phases: ReportPhases | null = nominal.phased
+    ? { atRated: phaseSummary(nominal.phased), shedding: phaseShedding(design, { conditions: { vinV: s.vinNomV }, spacing: input.sweepSpacing }) }
+    : null;
   const inputVoltages: InputVoltageCase[] = [
     { label: 'Vin min', vinV: s.vinMinV, evaluation: evaluateAt(s.vinMinV) },
     { label: 'Vin nom', vinV: s.vinNomV, evaluation: rated },
@@ -173,6 +182,7 @@ export function buildReport(input: ReportInput): ReportModel {
     comparison,
     tolerance,
     calibration: calibrationSection(design),
+    phases,
     methods: methodsFor({
       mechanisms,
       loadKind: loadKindOf(design.spec),

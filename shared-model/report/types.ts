@@ -14,6 +14,8 @@ import type { CompareCrossover } from '../compare/compare-parts.ts';
 import type { MonteCarlo } from '../tolerance/monte-carlo.ts';
 import type { ToleranceCorner, WorstCase } from '../tolerance/worst-case.ts';
 import type { Severity, WarningCode } from '../warnings.ts';
+import type { PhaseShedding } from '../interleave/shedding.ts';
+import type { PhaseSummary } from '../interleave/summary.ts';
 
 export const REPORT_FORMAT = 'wattledger.report';
 export const REPORT_VERSION = 1;
@@ -117,6 +119,12 @@ export interface MethodEntry {
   limits: string[];
 }
 
+/** The interleaving part of the report (issue 13 §1). */
+export interface ReportPhases {
+  atRated: PhaseSummary;
+  shedding: PhaseShedding;
+}
+
 export interface ReportModel {
   format: typeof REPORT_FORMAT;
   version: typeof REPORT_VERSION;
@@ -134,6 +142,8 @@ export interface ReportModel {
   tolerance: ReportTolerance | null;
   /** The bench measurement the design carries, its adopted fitted values and residuals (null without one). */
   calibration: CalibrationSection | null;
+  /** A multiphase design's per-phase ledger at rated load and nominal Vin and its phase-shedding curves (null for one phase). */
+  phases: ReportPhases | null;
   methods: MethodEntry[];
   cautions: string[];
 }

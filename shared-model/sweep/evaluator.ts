@@ -10,8 +10,14 @@
  * It also carries the ledger's lean evaluation of its design (`lean`), which `pointRecorder` uses for
  * sweep points: the same numbers and warnings without the full record (test:
  * test/shared-model/sweep/lean-point.test.ts). A stand-in evaluator (tests) is always called as given.
+ * A multiphase design (topology.phases > 1) is evaluated as the whole converter — every phase, or the best
+ * active count at each point when it sheds phases (interleave/phase-evaluator.ts) — by both evaluators here,
+ * so sweeps, landmarks, comparison, ranking, tolerance and the mission never treat it as one stage carrying
+ * the whole load (issue 13 §1; test: test/shared-model/interleave/multiphase-callers.test.ts).
  */
 import type { Design } from '../design/schema.ts';
+import { phaseCount } from '../interleave/phase-design.ts';
+import { designPointEvaluator } from '../interleave/phase-evaluator.ts';
 import { evaluate, ledgerEvaluator } from '../ledger/evaluate.ts';
 import type { LeanEvaluation } from '../ledger/lean-evaluate.ts';
 import { nominalConditions } from '../operating-point/conditions.ts';
@@ -19,7 +25,9 @@ import type { Conditions } from '../operating-point/types.ts';
 import type { ColumnBook, RecordSource } from './point-record.ts';
 import type { PointEvaluator, SweepPoint } from './types.ts';
 
-export const defaultEvaluator: PointEvaluator = (design, conditions) => evaluate(design, conditions);
+/** One point of any design: `evaluate` for one phase, the whole interleaved converter for several. */
+export const defaultEvaluator: PointEvaluator = (design, conditions) =>
+  phaseCount(design) > 1 ? designPointEvaluator(design)!(design, conditions) : evaluate(design, conditions);
 
 /** The per-design evaluator: a PointEvaluator that also evaluates its own design leanly. */
 export interface DesignEvaluator extends PointEvaluator {
@@ -35,8 +43,10 @@ export interface DesignEvaluator extends PointEvaluator {
  */
 export function evaluatorFor(design: Design, evaluator?: PointEvaluator): PointEvaluator {
   if (evaluator) return evaluator;
+  const phased = designPointEvaluator(design);
+  if (phased) return phased;
   const ledger = ledgerEvaluator(design);
-  const full: PointEvaluator = (d, conditions) => (d === design ? ledger.evaluate(conditions) : evaluate(d, conditions));
+  const full: PointEvaluator = (d, conditions) => (d === design ? ledger.evaluate(conditions) : defaultEvaluator(d, conditions));
   const lean = (conditions: Conditions) => ledger.lean(conditions);
   return Object.assign(full, { design, lean }) satisfies DesignEvaluator;
 }

@@ -9,6 +9,7 @@ import {
   contactSchema,
   IDENTITY_LABELS,
   MARGIN_LABELS,
+  PHASE_SHEDDING_LABELS,
   PULSE_SKIPPING_LABELS,
   SPEC_LABELS,
   TARGET_LABELS,
@@ -107,6 +108,33 @@ export const SENSE_CHOICE: ChoiceSpec = {
 export const DEAD_TIME_FIELDS: FieldSpec[] = [
   num('deadTimeBeforeOnS', TOPOLOGY_LABELS.deadTimeBeforeOnS, 's'),
   num('deadTimeAfterOffS', TOPOLOGY_LABELS.deadTimeAfterOffS, 's'),
+];
+
+/**
+ * Interleaving (issue 13 §1): the number of power stages, how unevenly they share the load (applied to the
+ * worst phase), and whether the controller sheds phases at light load. Empty phases = 1, empty mismatch = 0.
+ */
+export const PHASE_FIELDS: FieldSpec[] = [
+  num('phases', TOPOLOGY_LABELS.phases, '', {
+    optional: true,
+    integer: true,
+    help: 'Identical power stages switched 360°/N apart, sharing the input and output capacitors, the controller and the heatsinks (1 … 8; empty: 1).',
+  }),
+  num('phaseMismatch', TOPOLOGY_LABELS.phaseMismatch, '', {
+    optional: true,
+    help: 'The worst phase carries (1 + m) × its even share ("0.05" or "5 %"; 0 … 0.5; empty: 0). Its temperatures are the ones checked.',
+  }),
+  {
+    type: 'group',
+    key: 'phaseShedding',
+    label: TOPOLOGY_LABELS.phaseShedding,
+    fields: [
+      num('hysteresisFraction', PHASE_SHEDDING_LABELS.hysteresisFraction, '', {
+        help: 'A band centred on each crossover load so a load near it does not toggle a phase ("0.1" or "10 %"; 0 … 0.5).',
+      }),
+    ],
+    defaults: () => ({ hysteresisFraction: 0.1 }),
+  },
 ];
 
 export const MARGIN_FIELDS: FieldSpec[] = [

@@ -14,6 +14,7 @@ import {
   KIND_CHOICE,
   LIGHT_LOAD_CHOICE,
   MARGIN_FIELDS,
+  PHASE_FIELDS,
   RECTIFIER_CHOICE,
   SENSE_CHOICE,
   SPEC_FIELDS,
@@ -73,7 +74,7 @@ export function fieldName(path: string, design: Design): FieldName | null {
     case 'spec':
       return rest[0] === 'targets' ? within('Target', findSpec(TARGET_FIELDS, rest.slice(1))) : findSpec(SPEC_FIELDS, rest);
     case 'topology':
-      return findSpec([KIND_CHOICE, RECTIFIER_CHOICE, LIGHT_LOAD_CHOICE, SENSE_CHOICE, ...DEAD_TIME_FIELDS], rest);
+      return findSpec([KIND_CHOICE, RECTIFIER_CHOICE, LIGHT_LOAD_CHOICE, SENSE_CHOICE, ...DEAD_TIME_FIELDS, ...PHASE_FIELDS], rest);
     case 'parts': {
       const role = rest[0];
       if (!isRole(role)) return null;

@@ -170,3 +170,38 @@ export function monteCarloChart(model: ReportModel): BarChartSpec | null {
     xTitle: 'Samples',
   };
 }
+
+const PHASE_COLORS = ['#1f5fa8', '#b5501b', '#2f7d32', '#7a3f98', '#8a6d00', '#b0276b', '#4a5560', '#0b6b8a'];
+
+/**
+ * Phase shedding (issue 13 §1): efficiency against load with 1 … N phases switching, the envelope with ideal
+ * shedding (dashed, dark) and a line at each crossover n → n − 1. Null for a one-phase design.
+ */
+export function sheddingReportChart(model: ReportModel): LineChartSpec | null {
+  const s = model.phases?.shedding;
+  if (!s) return null;
+  const loads = s.curves[0]?.points.map((p) => p.loadA) ?? [];
+  const series: LineSeries[] = s.curves.map((c, k) => ({
+    label: `${c.activePhases} phase${c.activePhases === 1 ? '' : 's'}`,
+    x: loads,
+    y: c.points.map((p) => (p.usable ? p.efficiency : null)),
+    color: PHASE_COLORS[k % PHASE_COLORS.length]!,
+    width: 1.4,
+  }));
+  series.push({ label: 'Best count (envelope)', x: loads, y: s.envelope.map((e) => (e.activePhases > 0 ? e.efficiency : null)), color: '#202020', width: 2.2, dash: [6, 3] });
+  const shown = s.envelope.filter((e) => e.activePhases > 0 && e.loadA >= 0.05 * model.design.spec.ratedLoadA).map((e) => e.efficiency);
+  const low = Math.min(...shown, ...s.curves.flatMap((c) => c.points.filter((p) => p.usable && p.loadA >= 0.05 * model.design.spec.ratedLoadA).map((p) => p.efficiency)));
+  return {
+    title: `Efficiency versus load with 1 … ${s.phases} phases switching`,
+    xTitle: 'Load current (A)',
+    yTitle: 'Efficiency (%)',
+    xLog: model.sweep.spacing === 'log',
+    ...loadRange(loads),
+    yMin: Number.isFinite(low) ? Math.max(0, floorTo(low, 0.05)) : 0,
+    yMax: 1,
+    yTickScale: 100,
+    series,
+    xMarks: s.landmarks.filter((l) => l.found && l.crossoverA !== undefined).map((l) => ({ x: l.crossoverA!, label: `${l.fromPhases}→${l.toPhases}`, color: MARK.crossover })),
+    pointMarks: [],
+  };
+}

@@ -17,6 +17,7 @@ import {
   designPointEvaluator,
   evaluateDesign,
   partInRole,
+  phaseCount,
   sweepWithLandmarks,
 } from '../../shared-model/index.ts';
 import type {
@@ -31,6 +32,8 @@ import type {
   LoadSweepOptions,
   MonteCarlo,
   MonteCarloDistribution,
+  PhasedEvaluation,
+  PhaseShedding,
   Role,
   SweepFamilies,
   SweepWithLandmarks,
@@ -54,7 +57,8 @@ export const SYNC_SWEEP_BUDGET_MS = 40;
 /** Sweeps run after start-up to compile the engine and chart code before the first keystroke. */
 export const WARM_UP_ROUNDS = 4;
 
-export type EvaluationOutcome = { ok: true; evaluation: Evaluation; ms: number } | { ok: false; message: string };
+/** `phased`: the per-phase record of a multiphase design (null for one phase); `evaluation` is the whole converter. */
+export type EvaluationOutcome = { ok: true; evaluation: Evaluation; phased: PhasedEvaluation | null; ms: number } | { ok: false; message: string };
 /** The live load sweep with its landmarks (the engine's record). */
 export type SweepResult = SweepWithLandmarks;
 type SweepKey = {
@@ -99,6 +103,8 @@ export class LiveResults {
   readonly review = new JobSlot<DesignReview>();
   readonly monteCarlo = new JobSlot<MonteCarlo>();
   readonly comparison = new JobSlot<Comparison>();
+  /** Efficiency against load for 1 … N active phases (multiphase designs only). */
+  readonly shedding = new JobSlot<PhaseShedding>();
 
   design: Design = $derived(this.#workspace().doc.shown);
   conditions = $derived(conditionsFor(this.design, { loadA: this.#workspace().results.loadA, vinV: this.#workspace().results.vinV }));
@@ -107,7 +113,8 @@ export class LiveResults {
   evaluation: EvaluationOutcome = $derived.by(() => {
     const t0 = performance.now();
     try {
-      return { ok: true, evaluation: evaluateDesign(this.design, this.conditions).evaluation, ms: performance.now() - t0 };
+      const { evaluation, phased } = evaluateDesign(this.design, this.conditions);
+      return { ok: true, evaluation, phased, ms: performance.now() - t0 };
     } catch (error) {
       return { ok: false, message: `The engine stopped on this design: ${(error as Error).message}` };
     }
@@ -224,6 +231,14 @@ export class LiveResults {
   requestReview(): void {
     const design = this.design;
     void this.review.run({ design }, () => this.heavy.run('review', { design }), (o) => o.output);
+  }
+
+  /** The phase-shedding curves of a multiphase design at the chosen Vin (a few hundred evaluations: the worker). */
+  requestShedding(): void {
+    const design = this.design;
+    if (phaseCount(design) <= 1) return;
+    const vinV = this.conditions.vinV;
+    void this.shedding.run({ design, vinV }, () => this.heavy.run('shedding', { design, vinV }), (o) => o.output);
   }
 
   requestWorstCase(): void {

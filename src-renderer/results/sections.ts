@@ -5,6 +5,7 @@ export const RESULT_SECTIONS = [
   { id: 'ledger', label: 'Losses' },
   { id: 'loss-curves', label: 'Loss vs load' },
   { id: 'temperatures', label: 'Temperatures' },
+  { id: 'phases', label: 'Phases' },
   { id: 'operating', label: 'Operating point' },
   { id: 'sizing', label: 'Sizing and checks' },
   { id: 'frequency', label: 'Frequency and grid' },

@@ -13,6 +13,7 @@ import {
   figuresOfMerit,
   checkRankOptions,
   judgeChunk,
+  phaseShedding,
   reviewDesign,
   sweepFamilies,
   sweepFrequency,
@@ -64,6 +65,8 @@ export function runJob(request: Extract<EngineRequest, { type: 'run' }>): JobRes
         const outcome = compareParts(request.input.design, request.input.options);
         return outcome.ok ? { ok: true, output: outcome.comparison } : refused(outcome.problems);
       }
+      case 'shedding':
+        return { ok: true, output: phaseShedding(request.input.design, { conditions: { vinV: request.input.vinV } }) };
       case 'review':
         return { ok: true, output: reviewDesign(request.input.design) };
       case 'rank-chunk': {

@@ -19,6 +19,7 @@ import type {
   MonteCarloOptions,
   OptionProblem,
   PartVerdict,
+  PhaseShedding,
   RankLibraryOptions,
   ReportInput,
   ReportModel,
@@ -48,6 +49,8 @@ export interface EngineJobs {
   'monte-carlo': { input: { design: Design; options: Plain<MonteCarloOptions> }; output: MonteCarlo };
   /** Sizing and design checks: the design at its corners of Vin at rated load (a few evaluations). */
   review: { input: { design: Design }; output: DesignReview };
+  /** Efficiency against load for 1 … N active phases, the shedding landmarks and the envelope (issue 13 §1). */
+  shedding: { input: { design: Design; vinV: number }; output: PhaseShedding };
   /** The review report's model (a few hundred electro-thermal evaluations). */
   report: { input: ReportInput; output: ReportModel };
 }

@@ -140,3 +140,21 @@ export const arbitraryDesign: fc.Arbitrary<Design> = fc
       }
     });
   });
+
+/** Removes every loss but conduction from the power path (switching, core, leakage, AC winding). */
+export function conductionOnly(d: Design): Design {
+  const c = structuredClone(d);
+  for (const fet of [c.parts.switch, c.parts.rectifier]) {
+    if (fet.kind !== 'mosfet') continue;
+    fet.qgs2C = 1e-12; // the smallest gate charges the schema accepts (design/numbers.ts): switching losses ~1e-5 of the output
+    fet.qgdC = 1e-12;
+    fet.outputCapacitance = { kind: 'capacitance', cossF: 0, atV: 12 };
+    fet.bodyDiodeQrrC = 0;
+  }
+  if (c.parts.rectifier.kind === 'diode') c.parts.rectifier = { ...c.parts.rectifier, qrrC: 0, cjF: 0, leakageA: 0 };
+  c.topology.deadTimeAfterOffS = 0;
+  c.topology.deadTimeBeforeOnS = 0;
+  c.parts.inductor.coreLoss = { kind: 'steinmetz', k: 1e-12, alpha: 1.5, beta: 2.5 }; // the smallest k accepted: core loss ~nW
+  c.parts.inductor.acWinding = { kind: 'none' };
+  return c;
+}

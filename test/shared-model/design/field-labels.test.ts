@@ -13,7 +13,22 @@ describe('validation messages name each field by its on-screen label (issue 10 �
     expect(designFieldLabel('thermal.heatsinks[0].thetaSaKPerW', boost)).toMatch(/^Heatsink “.+” — θSA \(sink to ambient\)$/);
     expect(designFieldLabel('margins.voltageDerating', boost)).toBe('Usable share of voltage ratings');
     expect(designFieldLabel('topology.pulseSkipping.minPeakCurrentA', boost)).toBe('Minimum peak current of a pulse');
+    expect(designFieldLabel('topology.phases', boost)).toBe('Interleaved phases'); // the editor's topology section (issue 13 §1)
+    expect(designFieldLabel('topology.phaseShedding.hysteresisFraction', boost)).toBe('Shedding hysteresis, share of the crossover load');
     expect(designFieldLabel('spec.noSuchKey', boost)).toBeUndefined(); // no field on screen: the path stays alone
+  });
+
+  it('a phase count or shedding hysteresis out of range names the label, value and range (issue 13 §1)', () => {
+    const doc = structuredClone(boost) as unknown as { topology: Record<string, unknown> };
+    doc.topology.phases = 9;
+    doc.topology.phaseShedding = { hysteresisFraction: 0.9 };
+    const r = validateDesign(doc);
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    const phases = r.problems.find((p) => p.path === 'topology.phases');
+    expect(phases?.message).toMatch(/^Interleaved phases \(topology\.phases\) is 9; allowed: .*1 ≤ phases ≤ 8/); // design/numbers.ts phaseCount
+    const band = r.problems.find((p) => p.path === 'topology.phaseShedding.hysteresisFraction');
+    expect(band?.message).toMatch(/^Shedding hysteresis, share of the crossover load \(topology\.phaseShedding\.hysteresisFraction\) is 0\.9; allowed: 0 ≤ .* ≤ 0\.5/);
   });
 
   it('a refused design says label, path, value and range in one sentence, and the sentence in paths comes back', () => {

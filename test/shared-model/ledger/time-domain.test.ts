@@ -9,6 +9,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { conductionParameters, esrAt, evaluate, validateDesign, type Design, type Evaluation } from '../../../shared-model/index.ts';
+import { conductionOnly } from '../../helpers/ledger-designs.ts';
 import { randomCases } from '../../reference/random-designs.ts';
 import { referenceSteadyState, type ReferenceResult } from '../../reference/steady-state.ts';
 
@@ -16,23 +17,6 @@ const TOLERANCE = 0.005; // issue 3: conduction losses of every resistive elemen
 const SEED = 20250301; // any seed; fixed so the set is reproducible
 const PER_FAMILY = 5; // 12 families × 5 = 60 designs
 
-/** Removes every loss but conduction from the power path (switching, core, leakage, AC winding). */
-function conductionOnly(d: Design): Design {
-  const c = structuredClone(d);
-  for (const fet of [c.parts.switch, c.parts.rectifier]) {
-    if (fet.kind !== 'mosfet') continue;
-    fet.qgs2C = 1e-12; // the smallest gate charges the schema accepts (design/numbers.ts): switching losses ~1e-5 of the output
-    fet.qgdC = 1e-12;
-    fet.outputCapacitance = { kind: 'capacitance', cossF: 0, atV: 12 };
-    fet.bodyDiodeQrrC = 0;
-  }
-  if (c.parts.rectifier.kind === 'diode') c.parts.rectifier = { ...c.parts.rectifier, qrrC: 0, cjF: 0, leakageA: 0 };
-  c.topology.deadTimeAfterOffS = 0;
-  c.topology.deadTimeBeforeOnS = 0;
-  c.parts.inductor.coreLoss = { kind: 'steinmetz', k: 1e-12, alpha: 1.5, beta: 2.5 }; // the smallest k accepted: core loss ~nW
-  c.parts.inductor.acWinding = { kind: 'none' };
-  return c;
-}
 
 const pairs: [string, string, keyof ReferenceResult['branches']][] = [
   ['switch', 'conduction', 'switch'],

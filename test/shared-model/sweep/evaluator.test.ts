@@ -52,8 +52,9 @@ describe('sweeps, comparison and tolerance analysis give identical results with 
   const sync = demo('synchronous-buck');
   const boost = demo('diode-boost');
 
-  it('sweepLoad equals the point-by-point evaluate sweep on every demo design', () => {
-    for (const id of DEMO_DESIGNS.map((d) => d.id)) {
+  it('sweepLoad equals the point-by-point evaluate sweep on every one-phase demo design', () => {
+    // A multiphase demo sweeps the whole interleaved converter (test/shared-model/interleave/multiphase-callers.test.ts).
+    for (const id of DEMO_DESIGNS.map((d) => d.id).filter((id) => (demo(id).topology.phases ?? 1) === 1)) {
       const d = demo(id);
       expect(sweepLoad(d), id).toStrictEqual(sweepLoad(d, { evaluator: fromScratch }));
     }

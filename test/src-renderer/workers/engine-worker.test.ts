@@ -89,6 +89,15 @@ describe('engine worker protocol', () => {
     expect(broken.ok ? '' : broken.error.message).toMatch(/report job/); // team brief: errors travel as data, the worker stays alive
   });
 
+  it('runs the phase-shedding job of a multiphase design at the given Vin (issue 13 §1)', () => {
+    const result = runJob({ type: 'run', id: 1, lane: 'shed', kind: 'shedding', input: { design: demoDesign('multiphase-buck'), vinV: 12 } });
+    expect(result.ok).toBe(true);
+    if (!result.ok || !('curves' in result.output)) return;
+    expect(result.output.curves.map((c) => c.activePhases)).toEqual([1, 2, 3, 4]); // the demo's 4 phases, one curve per active count
+    const broken = runJob({ type: 'run', id: 2, lane: 'shed', kind: 'shedding', input: { design: { name: 'no spec' } as unknown as Design, vinV: 12 } });
+    expect(broken.ok).toBe(false); // errors travel as data, the worker stays alive
+  });
+
   it('settles a cancelled request as superseded', async () => {
     const { client, flush, ran } = rig((r) => done(r.id));
     const p = client.run('grid', { design }, 'map');
