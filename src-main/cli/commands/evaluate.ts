@@ -1,10 +1,12 @@
 /**
  * `wattledger evaluate DESIGN.json [--json] [--load A] [--vin V] [--fs Hz] [--ambient °C]`: the electro-thermal
  * loss ledger — every watt by part and mechanism, temperatures, heatsinks, burn hazards, rating checks,
- * warnings. JSON: the engine's Evaluation record unchanged at the top level (efficiency, inputPower,
- * outputPower, totalLoss, dutyCycle, conductionMode, losses, temperatures, hazards, warnings, converged,
- * ...) plus command, design, designChecks (the design checks of `size`, at the design's own corners),
- * designNotices and cautions (README.md, "evaluate"). A point with no
+ * warnings. JSON: the engine's Evaluation record at the top level (efficiency, inputPower, outputPower,
+ * totalLoss, dutyCycle, conductionMode, losses, temperatures, hazards, warnings, converged, ...) except that
+ * `checks` holds the design checks of `size` (issue 11: id, value, limit, unit, passed, source, at the
+ * design's own corners) and the ledger's rating checks at this point move to `ratingChecks`; `designChecks`
+ * stays as an alias of `checks` for older readers; plus command, design, designNotices and cautions
+ * (README.md, "evaluate"). A point with no
  * steady state (thermal runaway) exits 0 with converged false and a warning naming the part.
  */
 import { evaluateDesign, phaseSummary, reviewDesign } from '../../../shared-model/index.ts';
@@ -36,10 +38,11 @@ export const evaluateCommand: Command = {
     if (args.switches.has('json')) {
       // The design checks are the design's own (its corners at rated load), whatever point was asked for.
       const designChecks = reviewDesign(loaded.design).checks;
+      const { checks: ratingChecks, ...rest } = result;
       const record = {
-        command: 'evaluate', design: loaded.design.name, ...result,
+        command: 'evaluate', design: loaded.design.name, ...rest,
         ...(phased ? { phases: phaseSummary(phased) } : {}),
-        designChecks, designNotices: loaded.notices, cautions: CAUTIONS,
+        checks: designChecks, ratingChecks, designChecks, designNotices: loaded.notices, cautions: CAUTIONS,
       };
       io.out(JSON.stringify(record, null, 2));
     } else io.out(renderEvaluation(loaded.design, result, loaded.notices));

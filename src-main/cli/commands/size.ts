@@ -2,7 +2,7 @@
  * `wattledger size DESIGN.json [--json]`: sizing from the specification (inductance, capacitance, ESR,
  * ratings, duty range, slope compensation, loop limits), each result with the corner that drives it, and
  * the design checks of the chosen parts against it (pass / warn / fail). JSON: { command, design, sizing,
- * designChecks, checkCounts, checkNotes, designNotices, cautions } — the engine's records unchanged
+ * checks, designChecks (the same list, an alias kept for older readers), checkCounts, checkNotes, designNotices, cautions } — the engine's records unchanged
  * (README.md, "size"). Exits 0 whatever the checks say (a check is a finding, not an error).
  */
 import { reviewDesign } from '../../../shared-model/index.ts';
@@ -31,6 +31,7 @@ export const sizeCommand: Command = {
         command: 'size',
         design: loaded.design.name,
         sizing: review.sizing,
+        checks: review.checks,
         designChecks: review.checks,
         checkCounts: review.counts,
         checkNotes: review.notes,

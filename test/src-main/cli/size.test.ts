@@ -3,7 +3,7 @@
  * the figures meet the hand calculations of a near-lossless design, and bad input names its field.
  */
 import { describe, expect, it } from 'vitest';
-import { reviewDesign } from '../../../shared-model/index.ts';
+import { evaluateDesign, reviewDesign } from '../../../shared-model/index.ts';
 import { EXIT } from '../../../src-main/cli/io.ts';
 import { runCli } from '../../../src-main/cli/main.ts';
 import { closeTo } from '../../helpers/close-to.ts';
@@ -23,8 +23,9 @@ describe('wattledger size', () => {
     const out = JSON.parse(io.stdout);
     const engine = JSON.parse(JSON.stringify(reviewDesign(demoDesign('diode-boost'))));
     expect(out.sizing).toEqual(engine.sizing); // the CLI adds nothing to the engine
-    expect(out.designChecks).toEqual(engine.checks); // the CLI adds nothing to the engine
-    expect(out.checkCounts.pass + out.checkCounts.warn + out.checkCounts.fail).toBe(out.designChecks.length);
+    expect(out.checks).toEqual(engine.checks); // the CLI adds nothing to the engine
+    expect(out.designChecks).toEqual(out.checks); // the older name, the same list
+    expect(out.checkCounts.pass + out.checkCounts.warn + out.checkCounts.fail).toBe(out.checks.length);
     expect(out.cautions.join(' ')).toMatch(/Estimates only/); // team rules: cautions
   });
 
@@ -65,11 +66,16 @@ describe('wattledger evaluate --json carries the design checks', () => {
     const io = memoryIo({ 'd.json': demoText('synchronous-buck') });
     expect(await runCli(['evaluate', 'd.json', '--json'], io)).toBe(EXIT.ok);
     const out = JSON.parse(io.stdout);
-    expect(out.designChecks.length).toBeGreaterThan(10); // issue 11 §2 lists more than ten kinds
-    for (const c of out.designChecks) {
+    expect(out.checks.length).toBeGreaterThan(10); // issue 11 §2 lists more than ten kinds
+    for (const c of out.checks) {
       expect(Object.keys(c)).toEqual(expect.arrayContaining(['id', 'value', 'limit', 'unit', 'passed', 'source'])); // issue 11 "Done when"
+      expect(typeof c.passed).toBe('boolean'); // issue 11 "Done when": pass/fail
+      expect(c.source.length).toBeGreaterThan(0); // issue 11 §2: each check names its source
     }
-    expect(out.designChecks.map((c: { id: string }) => c.id)).toContain('efficiency-at-rated'); // the demo sets an efficiency target
-    expect(out.checks.length).toBeGreaterThan(0); // the ledger's own rating checks stay as they were
+    expect(out.checks.map((c: { id: string }) => c.id)).toContain('efficiency-at-rated'); // the demo sets an efficiency target
+    expect(out.designChecks).toEqual(out.checks); // the older name stays, the same list (src-main/cli/README.md)
+    const engine = JSON.parse(JSON.stringify(evaluateDesign(demoDesign('synchronous-buck')).evaluation));
+    expect(out.ratingChecks).toEqual(engine.checks); // the ledger's own rating checks, moved, unchanged
+    expect(out.ratingChecks.length).toBeGreaterThan(0);
   });
 });
