@@ -34,6 +34,7 @@ export const SPEC_LABELS = {
 
 export const TARGET_LABELS = {
   efficiencyAtRated: 'Efficiency at rated load',
+  efficiencyAtLightLoad: 'Efficiency at light load',
   outputRippleV: 'Output ripple, peak to peak',
   inductorRippleRatio: 'Inductor ripple / rated current',
 } as const;
@@ -59,6 +60,7 @@ export const MARGIN_LABELS = {
   rippleCurrentDerating: 'Usable share of capacitor ripple rating',
   resistorPowerDerating: 'Usable share of resistor power rating',
   voltageDerating: 'Usable share of voltage ratings',
+  currentDerating: 'Usable share of current ratings',
   requiredLifeHours: 'Required capacitor life',
 } as const;
 

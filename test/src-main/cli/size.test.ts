@@ -79,3 +79,32 @@ describe('wattledger evaluate --json carries the design checks', () => {
     expect(out.ratingChecks.length).toBeGreaterThan(0);
   });
 });
+
+describe('--current-derating and --voltage-derating on size and evaluate', () => {
+  it('size: the option replaces the design\'s derating for this run', async () => {
+    const io = memoryIo({ 'd.json': JSON.stringify(buck) });
+    expect(await runCli(['size', 'd.json', '--json', '--current-derating', '50%'], io)).toBe(EXIT.ok);
+    const out = JSON.parse(io.stdout);
+    expect(out.sizing.stresses.currentDerating).toBe(0.5);
+    const peak = 3 + ((16 - 5) * (5 / 16)) / (4.7e-6 * 500e3) / 2; // Io + ΔI/2 at Vin max, Erickson & Maksimović ch. 2
+    closeTo(out.sizing.stresses.required.switchIdA, peak / 0.5, 3e-3); // rating needed = stress / derating (common practice)
+  });
+
+  it('evaluate: --voltage-derating moves the limit of the switch-voltage check', async () => {
+    const io = memoryIo({ 'd.json': JSON.stringify(buck) });
+    expect(await runCli(['evaluate', 'd.json', '--json', '--voltage-derating', '0.5'], io)).toBe(EXIT.ok);
+    const out = JSON.parse(io.stdout);
+    const c = out.checks.find((k: { id: string }) => k.id === 'switch-voltage');
+    closeTo(c.limit, buck.parts.switch.kind === 'mosfet' ? buck.parts.switch.vdsRatingV * 0.5 : NaN, 1e-12); // rating × derating (common practice)
+  });
+
+  it('refuses a derating out of range naming the option, its on-screen label, the value and the range', async () => {
+    const io = memoryIo({ 'd.json': JSON.stringify(buck) });
+    expect(await runCli(['size', 'd.json', '--current-derating', '1.5'], io)).toBe(EXIT.usage);
+    expect(io.stderr).toContain('--current-derating'); // the option
+    expect(io.stderr).toContain('Usable share of current ratings'); // the editor's label
+    expect(io.stderr).toContain('1.5'); // the value
+    expect(io.stderr).toMatch(/0\.1 ≤ --current-derating ≤ 1/); // the range of margins.currentDerating
+    expect(io.stdout).toBe('');
+  });
+});
