@@ -23,6 +23,7 @@ import type {
   Comparison,
   Design,
   DesignReview,
+  MissionResult,
   Evaluation,
   FiguresOfMerit,
   FrequencySweep,
@@ -97,6 +98,8 @@ export class LiveResults {
   readonly worstCase = new JobSlot<WorstCase>();
   /** Sizing and design checks of the design (its own corners; the chosen load does not enter). */
   readonly review = new JobSlot<DesignReview>();
+  /** The design's mission profile evaluated (none without a profile). */
+  readonly mission = new JobSlot<MissionResult>();
   readonly monteCarlo = new JobSlot<MonteCarlo>();
   readonly comparison = new JobSlot<Comparison>();
 
@@ -224,6 +227,15 @@ export class LiveResults {
   requestReview(): void {
     const design = this.design;
     void this.review.run({ design }, () => this.heavy.run('review', { design }), (o) => o.output);
+  }
+
+  requestMission(): void {
+    const design = this.design;
+    if (!design.missionProfile) {
+      this.mission.clear();
+      return;
+    }
+    void this.mission.run({ design }, () => this.heavy.run('mission', { design }), (o) => o.output);
   }
 
   requestWorstCase(): void {

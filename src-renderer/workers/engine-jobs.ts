@@ -14,6 +14,7 @@ import {
   checkRankOptions,
   judgeChunk,
   reviewDesign,
+  evaluateMission,
   sweepFamilies,
   sweepFrequency,
   sweepGrid,
@@ -66,6 +67,8 @@ export function runJob(request: Extract<EngineRequest, { type: 'run' }>): JobRes
       }
       case 'review':
         return { ok: true, output: reviewDesign(request.input.design) };
+      case 'mission':
+        return { ok: true, output: evaluateMission(request.input.design) };
       case 'rank-chunk': {
         const { design, options, from, to } = request.input;
         const problems = checkRankOptions(design, options);

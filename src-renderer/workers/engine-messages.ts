@@ -15,6 +15,7 @@ import type {
   GridOptions,
   LoadGrid,
   LoadSweepOptions,
+  MissionResult,
   MonteCarlo,
   MonteCarloOptions,
   OptionProblem,
@@ -48,6 +49,8 @@ export interface EngineJobs {
   'monte-carlo': { input: { design: Design; options: Plain<MonteCarloOptions> }; output: MonteCarlo };
   /** Sizing and design checks: the design at its corners of Vin at rated load (a few evaluations). */
   review: { input: { design: Design }; output: DesignReview };
+  /** The design's mission profile: one electro-thermal evaluation per row (mission/evaluate-mission.ts). */
+  mission: { input: { design: Design }; output: MissionResult };
   /** The review report's model (a few hundred electro-thermal evaluations). */
   report: { input: ReportInput; output: ReportModel };
 }
