@@ -92,7 +92,7 @@ export const MISSION_LABELS = {
 /** The columns of the mission profile's table. */
 export const MISSION_ROW_LABELS = {
   label: 'Doing',
-  vinV: 'Input voltage',
+  vinV: 'Vin',
   loadA: 'Load',
   ambientC: 'Ambient',
   fraction: 'Share of time',

@@ -28,7 +28,7 @@ describe('mission profile rules', () => {
   it('names a row\'s field by the editor\'s labels: row number and column', () => {
     const r = validateDesign(withProfile({ name: 'x', rows: [row(20, 1, 1)], hoursPerDay: 24 }));
     const p = !r.ok ? r.problems.find((x) => x.path === 'missionProfile.rows[0].vinV') : undefined;
-    expect(p?.message).toContain('Mission profile row 1 — Input voltage'); // the on-screen label
+    expect(p?.message).toContain('Mission profile row 1 — Vin'); // the on-screen label
     expect(p?.message).toContain('20 V'); // the value
     const hours = validateDesign(withProfile({ name: 'x', rows: [row(14.4, 1, 1)], hoursPerDay: 25 }));
     const h = !hours.ok ? hours.problems.find((x) => x.path === 'missionProfile.hoursPerDay') : undefined;
