@@ -21,7 +21,7 @@ export { describeValue } from './design/problems.ts';
 export type { NumberRange } from './design/number-range.ts';
 export { inRange, rangeText } from './design/number-range.ts';
 export type { ConditionKey, ConditionOverrides, FieldRange } from './design/overrides.ts';
-export { checkConditionOverrides, CONDITION_RANGES } from './design/overrides.ts';
+export { checkConditionOverrides, CONDITION_RANGES, designFieldRange } from './design/overrides.ts';
 export {
   CONDITION_LABELS,
   CONTACT_LABEL,
@@ -30,6 +30,8 @@ export {
   IDENTITY_LABELS,
   MARGIN_LABELS,
   PHASE_SHEDDING_LABELS,
+  MISSION_LABELS,
+  MISSION_ROW_LABELS,
   PULSE_SKIPPING_LABELS,
   SPEC_LABELS,
   TARGET_LABELS,
@@ -174,7 +176,7 @@ export type {
 } from './compare/compare-parts.ts';
 export { compareParts } from './compare/compare-parts.ts';
 export type { RatingLimit, RoleStress } from './compare/role-fit.ts';
-export { ratingLimits } from './compare/role-fit.ts';
+export { currentDeratingOf, DEFAULT_CURRENT_DERATING, ratingLimits } from './compare/role-fit.ts';
 export type { RandomSource } from './tolerance/prng.ts';
 export type { SampleHistogram, SampleSummary } from './tolerance/statistics.ts';
 export type { ResolvedTolerances, SpreadKey, ToleranceRange, Tolerances, Variation } from './tolerance/variation.ts';
@@ -237,6 +239,8 @@ export { assembleRanking, checkRankOptions, DEFAULT_RANK_SCORE, judgeChunk, libr
 // --- design checks: the chosen parts and the targets against the sizing ---
 export type * from './design-checks/types.ts';
 export { reviewDesign } from './design-checks/review.ts';
+export { lightLoadEfficiencyCheck, lightLoadPoint } from './design-checks/light-load.ts';
+export type { LightLoadPoint } from './design-checks/light-load.ts';
 
 // --- bench measurements and calibration ---
 export type { CalibrationRecord, MeasuredPoint, MeasuredTemperatures, Measurement } from './measurement/schema.ts';

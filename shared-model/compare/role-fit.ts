@@ -9,14 +9,19 @@
  * - capacitor: its DC voltage ≤ rating × voltage derating; RMS ripple per capacitor ≤ rating × ripple derating;
  * - sense resistor: dissipation ≤ power rating × resistor derating;
  * - controller: no rating in the design document; always fits.
- * Voltage, ripple and resistor deratings come from the design's margins; the current derating is a
- * setting (default 0.8, common practice).
+ * Voltage, ripple, resistor and current deratings come from the design's margins; the current derating
+ * is optional there (absent: 0.8, common practice) and a caller may still pass its own.
  */
 import type { Part } from '../design/parts.ts';
 import type { Design, Role } from '../design/schema.ts';
 import type { Evaluation } from '../ledger/types.ts';
 
 export const DEFAULT_CURRENT_DERATING = 0.8;
+
+/** The design's current derating (margins.currentDerating), or the common-practice 0.8 when it has none. */
+export function currentDeratingOf(design: Design): number {
+  return design.margins.currentDerating ?? DEFAULT_CURRENT_DERATING;
+}
 
 export interface RoleStress {
   switchV: number;
@@ -71,7 +76,7 @@ export interface RatingLimit {
 }
 
 /** Every rating the part has for the role, each against the stress (value) and its derated limit. */
-export function ratingLimits(design: Design, role: Role, part: Part, s: RoleStress, currentDerating = DEFAULT_CURRENT_DERATING): RatingLimit[] {
+export function ratingLimits(design: Design, role: Role, part: Part, s: RoleStress, currentDerating = currentDeratingOf(design)): RatingLimit[] {
   const m = design.margins;
   const out: RatingLimit[] = [];
   const need = (value: number, limit: number, what: string, unit: string) => out.push({ what, value, limit, unit });
@@ -106,4 +111,3 @@ export function ratingLimits(design: Design, role: Role, part: Part, s: RoleStre
   }
   return out;
 }
-

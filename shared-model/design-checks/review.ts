@@ -12,6 +12,7 @@ import { solveCorners } from '../sizing/corners.ts';
 import { sizeFromCorners, type SizingOptions } from '../sizing/size-design.ts';
 import { crossoverCheck, maximumDutyCheck, slopeCheck } from './control.ts';
 import { ratingChecks } from './ratings.ts';
+import { lightLoadEfficiencyCheck } from './light-load.ts';
 import { efficiencyCheck, inductorRippleCheck, outputRippleCheck } from './ripple.ts';
 import { steadyStateCheck, temperatureChecks } from './thermal.ts';
 import type { CheckStatus, DesignCheck, DesignReview } from './types.ts';
@@ -27,6 +28,7 @@ export function reviewDesign(design: Design, options?: SizingOptions): DesignRev
   add(inductorRippleCheck(design, sizing, usable));
   add(outputRippleCheck(design, sizing, usable));
   add(efficiencyCheck(design, corners));
+  add(lightLoadEfficiencyCheck(design));
   checks.push(...ratingChecks(design, sizing, usable));
   checks.push(...temperatureChecks(design, usable));
   checks.push(steadyStateCheck(corners));
@@ -40,6 +42,7 @@ export function reviewDesign(design: Design, options?: SizingOptions): DesignRev
   const targets = design.spec.targets;
   if (targets?.outputRippleV === undefined) notes.push(`No output ripple target ("${TARGET_LABELS.outputRippleV}" is empty): the output ripple is not checked.`);
   if (targets?.efficiencyAtRated === undefined) notes.push(`No efficiency target ("${TARGET_LABELS.efficiencyAtRated}" is empty): the efficiency is not checked.`);
+  if (targets?.efficiencyAtLightLoad === undefined) notes.push(`No light-load efficiency target ("${TARGET_LABELS.efficiencyAtLightLoad}" is empty): the efficiency at light load is not checked.`);
   if (targets?.inductorRippleRatio === undefined) notes.push(`No inductor ripple target ("${TARGET_LABELS.inductorRippleRatio}" is empty): the common-practice 30 % is used.`);
   const left = corners.filter((c) => !isUsablePoint(c.evaluation));
   if (left.length > 0) {

@@ -11,6 +11,7 @@ export type DesignCheckId =
   | 'inductor-ripple-ratio'
   | 'output-ripple'
   | 'efficiency-at-rated'
+  | 'efficiency-at-light-load'
   | 'switch-voltage'
   | 'switch-current'
   | 'rectifier-voltage'

@@ -34,6 +34,7 @@ export const SPEC_LABELS = {
 
 export const TARGET_LABELS = {
   efficiencyAtRated: 'Efficiency at rated load',
+  efficiencyAtLightLoad: 'Efficiency at light load',
   outputRippleV: 'Output ripple, peak to peak',
   inductorRippleRatio: 'Inductor ripple / rated current',
 } as const;
@@ -64,6 +65,7 @@ export const MARGIN_LABELS = {
   rippleCurrentDerating: 'Usable share of capacitor ripple rating',
   resistorPowerDerating: 'Usable share of resistor power rating',
   voltageDerating: 'Usable share of voltage ratings',
+  currentDerating: 'Usable share of current ratings',
   requiredLifeHours: 'Required capacitor life',
 } as const;
 
@@ -84,6 +86,37 @@ export const HEATSINK_LABELS = {
 } as const;
 
 export const CONTACT_LABEL = 'How a person may touch it';
+
+/** The mission profile's own fields (the editor's "Mission profile" section). */
+export const MISSION_LABELS = {
+  name: 'Profile name',
+  hoursPerDay: 'Hours of use per day',
+  batteryWh: 'Battery capacity',
+} as const;
+
+/** The columns of the mission profile's table. */
+export const MISSION_ROW_LABELS = {
+  label: 'Doing',
+  vinV: 'Vin',
+  loadA: 'Load',
+  ambientC: 'Ambient',
+  fraction: 'Share of time',
+} as const;
+
+/** "Mission profile row 2 — Share of time"; `rows` alone is the column of shares (their sum). */
+function missionLabel(rest: readonly (string | number)[]): string | undefined {
+  if (rest.length === 0) return 'Mission profile';
+  const [key, index, field] = rest;
+  if (key === 'rows') {
+    if (index === undefined) return `Mission profile — ${MISSION_ROW_LABELS.fraction}`;
+    if (typeof index !== 'number') return undefined;
+    if (field === undefined) return `Mission profile row ${index + 1}`;
+    const column = own(MISSION_ROW_LABELS, field);
+    return column === undefined ? undefined : `Mission profile row ${index + 1} — ${column}`;
+  }
+  const label = rest.length === 1 ? own(MISSION_LABELS, key) : undefined;
+  return label === undefined ? undefined : `Mission profile — ${label}`;
+}
 
 /** The operating conditions as the results show them (and the command-line options that set them). */
 export const CONDITION_LABELS = {
@@ -170,6 +203,8 @@ export function designFieldLabel(path: string, doc: unknown): string | undefined
       return rest.length === 1 ? own(MARGIN_LABELS, rest[0]) : undefined;
     case 'conditions':
       return rest.length === 1 ? own(CONDITION_LABELS, rest[0]) : undefined;
+    case 'missionProfile':
+      return missionLabel(rest);
     default:
       return rest.length === 0 ? own(IDENTITY_LABELS, root) : undefined;
   }

@@ -8,10 +8,12 @@
 const PLAIN: ReadonlySet<string> = new Set([
   'maxDuty',
   'efficiencyAtRated',
+  'efficiencyAtLightLoad',
   'inductorRippleRatio',
   'rippleCurrentDerating',
   'resistorPowerDerating',
   'voltageDerating',
+  'currentDerating',
   'porosity',
   'hotRatio',
   'racOverRdc',

@@ -9,7 +9,7 @@ import { designFieldLabel } from './field-labels.ts';
 import type { Problem } from './problems.ts';
 
 /** A document path inside a sentence ("spec.vinMaxV", "thermal.heatsinks[0].id", "conditions.vinV"). */
-const PATH_IN_TEXT = /\b(?:spec|topology|parts|thermal|margins|conditions)(?:\.[A-Za-z][A-Za-z0-9_]*|\[\d+\])+/g;
+const PATH_IN_TEXT = /\b(?:spec|topology|parts|thermal|margins|conditions|missionProfile)(?:\.[A-Za-z][A-Za-z0-9_]*|\[\d+\])+/g;
 
 /** The problem with its fields named by label (`doc`: the document the paths are in). */
 export function labelProblem(p: Problem, doc: unknown): Problem {

@@ -37,6 +37,11 @@ export const specificationSchema = z.object({
   targets: z
     .object({
       efficiencyAtRated: q('efficiency').optional(),
+      /**
+       * Efficiency at the light-load point: the lightest loaded row of the mission profile, else 10 % of
+       * the rated load at nominal Vin (design-checks/light-load.ts).
+       */
+      efficiencyAtLightLoad: q('efficiency').optional(),
       outputRippleV: q('rippleTargetV').optional(),
       /** Inductor ripple as a fraction of the rated inductor current (peak to peak). */
       inductorRippleRatio: q('rippleRatio').optional(),
@@ -194,6 +199,11 @@ export const marginsSchema = z.object({
   resistorPowerDerating: q('derating'),
   /** Fraction of a switch or diode voltage rating that may be used (0..1]. */
   voltageDerating: q('derating'),
+  /**
+   * Fraction of a switch, rectifier or inductor current rating that may be used (0.1..1]; absent: 0.8
+   * (DEFAULT_CURRENT_DERATING, common practice). Isat is never derated: past it the inductance collapses.
+   */
+  currentDerating: q('derating').optional(),
   /** Required electrolytic life in hours at the design's ambient. */
   requiredLifeHours: q('lifeHours').optional(),
 });

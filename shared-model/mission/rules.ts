@@ -23,7 +23,7 @@ export function missionRules(doc: unknown): Problem[] {
     if (Math.abs(sum - 1) > FRACTION_SUM_TOLERANCE) {
       const shown = Number(sum.toPrecision(6));
       out.push(problem('missionProfile.rows', shown, `fractions adding up to 1 (±${FRACTION_SUM_TOLERANCE})`,
-        `The time fractions of the mission profile add up to ${shown}; they must add up to 1 (within ±${FRACTION_SUM_TOLERANCE}), so that every hour of operation is counted once.`));
+        `The shares of time of the mission profile add up to ${shown}; they must add up to 1 (within ±${FRACTION_SUM_TOLERANCE}), so that every hour of operation is counted once.`));
     }
   }
   const min = num(doc, 'spec.vinMinV');

@@ -14,7 +14,7 @@
  */
 import type { Part } from '../design/parts.ts';
 import type { Design, Role } from '../design/schema.ts';
-import { DEFAULT_CURRENT_DERATING, ratingLimits, stressOf } from '../compare/role-fit.ts';
+import { currentDeratingOf, ratingLimits, stressOf } from '../compare/role-fit.ts';
 import { substitutePart } from '../compare/substitute-part.ts';
 import { isUsablePoint, unusableReason } from '../ledger/regulated.ts';
 import { evaluateMission } from '../mission/evaluate-mission.ts';
@@ -46,7 +46,7 @@ export function judgePart(design: Design, part: Part, libraryIndex: number, sett
   const constraints: BindingConstraint[] = [];
 
   const corners = [s.vinMinV, s.vinMaxV].map((vinV) => ev(d, conditionsFor(d, { vinV })));
-  for (const r of ratingLimits(d, settings.role, part, stressOf(corners), settings.currentDerating ?? DEFAULT_CURRENT_DERATING)) {
+  for (const r of ratingLimits(d, settings.role, part, stressOf(corners), settings.currentDerating ?? currentDeratingOf(d))) {
     constraints.push(ratingHeadroom(r));
     if (r.value > r.limit) reasons.push(`${r.what} ${four(r.value)} ${r.unit} exceeds the allowed ${four(r.limit)} ${r.unit}.`);
   }

@@ -6,6 +6,8 @@
  * - the load sweep at nominal Vin with its landmarks (peak, knee, CCM/DCM boundary, thermal ceiling,
  *   regulation limit), the figures of merit (25/50/75/100 % and 10 % of rated load), and the Vin family;
  * - comparison and tolerance results when the caller ran them (they are reduced, not recomputed);
+ * - the sizing from the specification and the design checks (reviewDesign), and the design's mission
+ *   profile evaluated when it carries one (evaluateMission);
  * - the models used with their sources and limits, and the cautions;
  * - the title block with the SHA-256 of the design document's text.
  * The date and the program version are inputs: the engine reads no clock. Pure: records in, record out.
@@ -30,6 +32,8 @@ import { REPORT_CAUTIONS } from './cautions.ts';
 import { methodsFor } from './methods.ts';
 import { loadKindOf } from '../operating-point/load.ts';
 import { sha256Hex } from './sha256.ts';
+import { reviewDesign } from '../design-checks/review.ts';
+import { evaluateMission } from '../mission/evaluate-mission.ts';
 import type {
   ReportPhases,
   FamilyCurve,
@@ -183,6 +187,8 @@ export function buildReport(input: ReportInput): ReportModel {
     tolerance,
     calibration: calibrationSection(design),
     phases,
+    review: reviewDesign(design),
+    mission: design.missionProfile ? evaluateMission(design) : null,
     methods: methodsFor({
       mechanisms,
       loadKind: loadKindOf(design.spec),

@@ -5,6 +5,8 @@
  * Units as in the engine: W, A, V, Hz, °C, K; loads in A.
  */
 import type { Design, Role } from '../design/schema.ts';
+import type { DesignReview } from '../design-checks/types.ts';
+import type { MissionResult } from '../mission/types.ts';
 import type { CalibrationSection } from '../fit/report-section.ts';
 import type { Evaluation } from '../ledger/types.ts';
 import type { Landmarks } from '../landmarks/types.ts';
@@ -144,6 +146,13 @@ export interface ReportModel {
   calibration: CalibrationSection | null;
   /** A multiphase design's per-phase ledger at rated load and nominal Vin and its phase-shedding curves (null for one phase). */
   phases: ReportPhases | null;
+  /**
+   * The sizing from the specification and the design checks (sizing/, design-checks/; issue 11). Optional
+   * so that a report saved before these sections were added still opens (the view then leaves them out).
+   */
+  review?: DesignReview;
+  /** The design's mission profile evaluated (mission/); null when the design carries none. Optional as `review`. */
+  mission?: MissionResult | null;
   methods: MethodEntry[];
   cautions: string[];
 }

@@ -15,7 +15,7 @@ import { sizeStresses } from './stresses.ts';
 import type { Sizing } from './types.ts';
 
 export interface SizingOptions {
-  /** Fraction of a current rating that may be used (default 0.8, common practice). */
+  /** Fraction of a current rating that may be used (default: the design's margins.currentDerating, else 0.8, common practice). */
   currentDerating?: number;
 }
 

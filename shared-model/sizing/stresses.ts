@@ -11,7 +11,7 @@
  */
 import type { Design } from '../design/schema.ts';
 import { topologyOf } from '../topology/registry.ts';
-import { DEFAULT_CURRENT_DERATING } from '../compare/role-fit.ts';
+import { currentDeratingOf } from '../compare/role-fit.ts';
 import type { SolvedCorner } from './corners.ts';
 import { sized } from './sized.ts';
 import type { StressSizing } from './types.ts';
@@ -19,7 +19,7 @@ import type { StressSizing } from './types.ts';
 const op = (c: SolvedCorner) => c.evaluation.operatingPoint;
 const absPeak = (s: { peakA: number; minA: number }) => Math.max(Math.abs(s.peakA), Math.abs(s.minA));
 
-export function sizeStresses(design: Design, corners: readonly SolvedCorner[], currentDerating = DEFAULT_CURRENT_DERATING): StressSizing {
+export function sizeStresses(design: Design, corners: readonly SolvedCorner[], currentDerating = currentDeratingOf(design)): StressSizing {
   const words = topologyOf(design).sizingWords;
   const vd = design.margins.voltageDerating;
   const voltReason = words.blockingReason;

@@ -10,6 +10,7 @@
 import type { FieldRange, NumberRange } from '../../shared-model/index.ts';
 import {
   CONDITION_RANGES,
+  designFieldRange,
   describeValue,
   inRange,
   MAX_AXIS_POINTS,
@@ -40,6 +41,8 @@ export const OPTION_RANGES = {
   seed: whole(0, 0xffffffff),
   workers: whole(1, 256),
   kneePoints: { min: 0, minInclusive: false, max: 100, maxInclusive: false, integer: false },
+  currentDerating: designFieldRange('margins.currentDerating'),
+  voltageDerating: designFieldRange('margins.voltageDerating'),
 } as const satisfies Record<string, OptionRange>;
 
 /** "200 mV ≤ --vin ≤ 2 kV" for the usage text and messages. */

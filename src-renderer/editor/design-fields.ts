@@ -54,6 +54,10 @@ export const LOAD_KIND_HELP =
 
 export const TARGET_FIELDS: FieldSpec[] = [
   num('efficiencyAtRated', TARGET_LABELS.efficiencyAtRated, '', { optional: true, help: 'Checked at nominal input and rated load (Results → Sizing and checks); the Monte Carlo counts the samples that meet it.' }),
+  num('efficiencyAtLightLoad', TARGET_LABELS.efficiencyAtLightLoad, '', {
+    optional: true,
+    help: 'Checked at the lightest loaded row of the mission profile, else at 10 % of rated load and nominal input (Results → Sizing and checks).',
+  }),
   num('outputRippleV', TARGET_LABELS.outputRippleV, 'V', { optional: true, help: 'Sizes the output capacitors and is checked at every input-voltage corner (Results → Sizing and checks).' }),
   num('inductorRippleRatio', TARGET_LABELS.inductorRippleRatio, '', { optional: true, help: 'Sizes the inductor and is checked at every input-voltage corner (empty: 0.3, common practice; Results → Sizing and checks).' }),
 ];
@@ -142,6 +146,10 @@ export const MARGIN_FIELDS: FieldSpec[] = [
   num('rippleCurrentDerating', MARGIN_LABELS.rippleCurrentDerating, ''),
   num('resistorPowerDerating', MARGIN_LABELS.resistorPowerDerating, ''),
   num('voltageDerating', MARGIN_LABELS.voltageDerating, ''),
+  num('currentDerating', MARGIN_LABELS.currentDerating, '', {
+    optional: true,
+    help: 'Switch, rectifier and inductor RMS current ratings; empty: 0.8 (common practice). Isat is not derated.',
+  }),
   num('requiredLifeHours', MARGIN_LABELS.requiredLifeHours, 'h', { optional: true }),
 ];
 

@@ -24,6 +24,7 @@ import type {
   Comparison,
   Design,
   DesignReview,
+  MissionResult,
   Evaluation,
   FiguresOfMerit,
   FrequencySweep,
@@ -101,6 +102,8 @@ export class LiveResults {
   readonly worstCase = new JobSlot<WorstCase>();
   /** Sizing and design checks of the design (its own corners; the chosen load does not enter). */
   readonly review = new JobSlot<DesignReview>();
+  /** The design's mission profile evaluated (none without a profile). */
+  readonly mission = new JobSlot<MissionResult>();
   readonly monteCarlo = new JobSlot<MonteCarlo>();
   readonly comparison = new JobSlot<Comparison>();
   /** Efficiency against load for 1 … N active phases (multiphase designs only). */
@@ -239,6 +242,16 @@ export class LiveResults {
     if (phaseCount(design) <= 1) return;
     const vinV = this.conditions.vinV;
     void this.shedding.run({ design, vinV }, () => this.heavy.run('shedding', { design, vinV }), (o) => o.output);
+  }
+
+  /** The design's mission profile (one evaluation per row: the worker). */
+  requestMission(): void {
+    const design = this.design;
+    if (!design.missionProfile) {
+      this.mission.clear();
+      return;
+    }
+    void this.mission.run({ design }, () => this.heavy.run('mission', { design }), (o) => o.output);
   }
 
   requestWorstCase(): void {

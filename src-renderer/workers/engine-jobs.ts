@@ -15,6 +15,7 @@ import {
   judgeChunk,
   phaseShedding,
   reviewDesign,
+  evaluateMission,
   sweepFamilies,
   sweepFrequency,
   sweepGrid,
@@ -69,6 +70,8 @@ export function runJob(request: Extract<EngineRequest, { type: 'run' }>): JobRes
         return { ok: true, output: phaseShedding(request.input.design, { conditions: { vinV: request.input.vinV } }) };
       case 'review':
         return { ok: true, output: reviewDesign(request.input.design) };
+      case 'mission':
+        return { ok: true, output: evaluateMission(request.input.design) };
       case 'rank-chunk': {
         const { design, options, from, to } = request.input;
         const problems = checkRankOptions(design, options);

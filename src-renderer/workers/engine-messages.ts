@@ -15,6 +15,7 @@ import type {
   GridOptions,
   LoadGrid,
   LoadSweepOptions,
+  MissionResult,
   MonteCarlo,
   MonteCarloOptions,
   OptionProblem,
@@ -51,6 +52,8 @@ export interface EngineJobs {
   review: { input: { design: Design }; output: DesignReview };
   /** Efficiency against load for 1 … N active phases, the shedding landmarks and the envelope (issue 13 §1). */
   shedding: { input: { design: Design; vinV: number }; output: PhaseShedding };
+  /** The design's mission profile: one electro-thermal evaluation per row (mission/evaluate-mission.ts). */
+  mission: { input: { design: Design }; output: MissionResult };
   /** The review report's model (a few hundred electro-thermal evaluations). */
   report: { input: ReportInput; output: ReportModel };
 }

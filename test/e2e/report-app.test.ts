@@ -23,7 +23,7 @@ const suite = e2eSuite();
 const OUT = join(repoRoot, '.artifacts', 'report');
 const BUILD_TIMEOUT = 120_000;
 
-/** The report headings in the order of issue 6 (src-renderer/report/ReportView.svelte and its sections; no comparison or tolerance appendix from the app's screen, so methods and cautions are 6 and 7). */
+/** The report headings in the order of issue 6 (src-renderer/report/ReportView.svelte and its sections; no comparison or tolerance appendix from the app's screen; sizing, design checks and mission profile are 6 to 8, so methods and cautions are 9 and 10). */
 const HEADINGS = [
   'Design hash (SHA-256)',
   '1 Summary',
@@ -37,8 +37,11 @@ const HEADINGS = [
   'Figures of merit',
   '5 Thermal table',
   'Burn-hazard checks',
-  '6 Method and assumptions',
-  '7 Cautions and sign-off',
+  '6 Sizing',
+  '7 Design checks',
+  '8 Mission profile',
+  '9 Method and assumptions',
+  '10 Cautions and sign-off',
   'Sign-off',
 ];
 

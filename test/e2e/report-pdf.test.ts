@@ -10,7 +10,7 @@ import { execFileSync } from 'node:child_process';
 import { mkdirSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { balanceDecimals, buildReport, evaluate, figuresOfMerit, formatFigurePercent, findLandmarks, formatAmps, formatCelsius, formatDuty, formatKelvin, formatPercent, formatWatts, formatWattsFixed, roleLabel, serializeDesign, sweepLoad, validateDesign } from '../../shared-model/index.ts';
+import { balanceDecimals, buildReport, evaluate, evaluateMission, formatEngineering, reviewDesign, sizingRows, figuresOfMerit, formatFigurePercent, findLandmarks, formatAmps, formatCelsius, formatDuty, formatKelvin, formatPercent, formatWatts, formatWattsFixed, roleLabel, serializeDesign, sweepLoad, validateDesign } from '../../shared-model/index.ts';
 import { METHOD_CATALOGUE } from '../../shared-model/report/methods.ts';
 import { REPORT_CAUTIONS } from '../../shared-model/report/cautions.ts';
 import type { Design, ReportModel } from '../../shared-model/index.ts';
@@ -41,6 +41,24 @@ function hotSinkDesign(): Design {
   const design = structuredClone(demoDesign('synchronous-buck'));
   design.name = `${design.name} with a poor heatsink`;
   for (const sink of design.thermal.heatsinks) sink.thetaSaKPerW *= 4;
+  const checked = validateDesign(design);
+  if (!checked.ok) throw new Error(checked.problems.map((p) => p.message).join(' '));
+  return checked.design;
+}
+
+/** The boost demo with a mission profile of our own (invented use: mostly idle on a battery). */
+function profiledDesign(): Design {
+  const design = structuredClone(demoDesign('diode-boost'));
+  const s = design.spec;
+  design.name = `${design.name} with a mission profile`;
+  design.missionProfile = {
+    name: 'Handheld, mostly idle (invented)', hoursPerDay: 8, batteryWh: 10,
+    rows: [
+      { label: 'idle', vinV: s.vinNomV, loadA: 0.05 * s.ratedLoadA, fraction: 0.7 },
+      { label: 'active', vinV: s.vinNomV, loadA: 0.5 * s.ratedLoadA, fraction: 0.25 },
+      { label: 'burst', vinV: s.vinMinV, loadA: s.ratedLoadA, fraction: 0.05 },
+    ],
+  };
   const checked = validateDesign(design);
   if (!checked.ok) throw new Error(checked.problems.map((p) => p.message).join(' '));
   return checked.design;
@@ -98,6 +116,7 @@ beforeAll(async () => {
     ['diode-boost', demoDesign('diode-boost'), 'Letter'],
     ['hot-fin-buck', demoDesign('hot-fin-buck'), 'A4'],
     ['hot-sink-buck', hotSinkDesign(), 'A4'],
+    ['profiled-boost', profiledDesign(), 'A4'],
   ];
   for (const [id, design, size] of cases) printed.set(`${id}-${size}`, await print(id, design, size, chromium));
 }, SLOW);
@@ -134,13 +153,14 @@ describe.each(['synchronous-buck-A4', 'diode-boost-A4', 'diode-boost-Letter', 'h
         '3 Loss ledger at rated load', 'Power balance', 'Loss by part',
         '4 Efficiency, loss and temperature versus load', 'Landmarks of the sweep', 'Figures of merit',
         '5 Thermal table', 'Burn-hazard checks', 'Capacitor life', 'Saturation margin', 'Other rating checks',
-        '6 Method and assumptions', '7 Cautions and sign-off', 'Sign-off', 'Reviewer', 'Approver',
+        '6 Sizing', '7 Design checks', '8 Mission profile',
+        '9 Method and assumptions', '10 Cautions and sign-off', 'Sign-off', 'Reviewer', 'Approver',
       ],
       'sections',
     );
-    for (const m of p.model.methods) expect(section(p, '6 Method and assumptions', '7 Cautions')).toContain(m.title);
+    for (const m of p.model.methods) expect(section(p, '9 Method and assumptions', '10 Cautions')).toContain(m.title);
     expect(METHOD_CATALOGUE.some((m) => m.id === 'overlap' && p.flat.includes(m.title))).toBe(true);
-    for (const c of REPORT_CAUTIONS) expect(section(p, '7 Cautions')).toContain(c.slice(0, 40));
+    for (const c of REPORT_CAUTIONS) expect(section(p, '10 Cautions')).toContain(c.slice(0, 40));
   });
 
   it('prints the engine\'s efficiencies, landmarks and figures of merit in the summary', () => {
@@ -198,7 +218,7 @@ describe.each(['synchronous-buck-A4', 'diode-boost-A4', 'diode-boost-Letter', 'h
   it('prints every part\'s temperature, limit, margin and surface, the hazard checks and the saturation margin', () => {
     const p = get(key);
     const e = evaluate(p.design);
-    const thermal = section(p, '5 Thermal table', '6 Method');
+    const thermal = section(p, '5 Thermal table', '6 Sizing');
     expectInOrder(thermal, e.temperatures.flatMap((t) => [formatWatts(t.dissipationW), formatCelsius(t.celsius), formatCelsius(t.limit), formatKelvin(t.marginK), formatCelsius(t.surfaceC)]), 'thermal rows');
     expectInOrder(thermal, ['Heatsinks', ...e.heatsinks.flatMap((h) => [formatWatts(h.dissipationW), formatCelsius(h.celsius)])], 'heatsinks');
     expectInOrder(
@@ -215,6 +235,45 @@ describe.each(['synchronous-buck-A4', 'diode-boost-A4', 'diode-boost-Letter', 'h
     const fom = figuresOfMerit(p.design, { conditions: { vinV: p.design.spec.vinNomV } });
     const curves = section(p, '4 Efficiency, loss and temperature versus load', '5 Thermal table');
     expectInOrder(curves, ['Figures of merit', ...fom.points.flatMap((x) => [formatAmps(x.loadA), formatPercent(x.efficiency)]), formatFigurePercent(fom.averageEfficiency)], 'figures of merit');
+  });
+});
+
+describe.each(['synchronous-buck-A4', 'diode-boost-A4', 'profiled-boost-A4'])('the sizing, design checks and mission profile of %s', (key) => {
+  it('prints every sized value and every design check the engine finds, with its source and the cautions', () => {
+    const p = get(key);
+    const r = reviewDesign(p.design); // an independent call of the engine
+    const fmt = (x: number, unit: string) => formatEngineering(x, unit, 3, 'table');
+    const sizing = section(p, '6 Sizing', '7 Design checks');
+    const rows = sizingRows(r.sizing).filter((x) => x.value);
+    expect(rows.length).toBeGreaterThan(5);
+    // A label may wrap inside its cell (pdftotext then prints its second line after the row's other cells): values in order, labels by their first word.
+    expectInOrder(sizing, rows.map((x) => formatEngineering(x.value!.value, x.value!.unit, 4, 'table')), 'sizing values');
+    for (const x of rows) expect(sizing).toContain(x.label.split(' ')[0]!);
+    expect(sizing).toMatch(/defer to local codes, the applicable standards and licensed professional practice/); // team rules: cautions
+    const checks = section(p, '7 Design checks', '8 Mission profile');
+    expect(checks).toContain(`${r.counts.fail} fail, ${r.counts.warn} to watch, ${r.counts.pass} ok`);
+    const ORDER = { fail: 0, warn: 1, pass: 2 } as const;
+    const WORD = { fail: 'FAIL', warn: 'WATCH', pass: 'ok' } as const;
+    const sorted = [...r.checks].sort((a, b) => ORDER[a.status] - ORDER[b.status]);
+    expectInOrder(checks, sorted.flatMap((c) => [fmt(c.value, c.unit), fmt(c.limit, c.unit), WORD[c.status], formatPercent(c.marginFraction, 1)]), 'check rows');
+    for (const c of sorted) expect(checks).toContain(c.label.split(' ')[0]!);
+    for (const c of sorted.filter((k) => k.status !== 'pass')) expect(checks).toContain(c.message.slice(0, 30)); // the sentence of each open check
+    expect(checks).toMatch(/defer to local codes and licensed professional practice/); // team rules: cautions
+  });
+
+  it('prints the mission profile figures, or says the design has none', () => {
+    const p = get(key);
+    const mission = section(p, '8 Mission profile', '9 Method');
+    if (!p.design.missionProfile) {
+      expect(mission).toContain('The design carries no mission profile');
+      return;
+    }
+    const m = evaluateMission(p.design); // an independent call of the engine
+    expectInOrder(mission, m.rows.flatMap((r) => [r.label, formatPercent(r.fraction, 1), formatWatts(r.lossW)]), 'mission rows');
+    expectInOrder(mission, ['Weighted efficiency', formatPercent(m.weightedEfficiency), 'Average loss', formatWatts(m.averageLossW), 'Energy lost per day', formatEngineering(m.energyLostPerDayWh, 'Wh', 3, 'table')], 'mission figures');
+    expectInOrder(mission, ['Share of the battery lost per day', formatPercent(m.battery!.shareLostPerDay)], 'battery share');
+    expectInOrder(mission, m.temperatures.flatMap((t) => [roleLabel(t.part), formatCelsius(t.averageC), formatCelsius(t.worstC)]), 'mission temperatures');
+    expect(mission).toMatch(/defer to local codes and licensed professional practice/); // team rules: cautions
   });
 });
 

@@ -22,6 +22,19 @@ describe('mission profile rules', () => {
     expect(p?.value).toBe(0.8);
     expect(p?.message).toMatch(/add up to 0\.8; they must add up to 1/); // a time budget covers every hour once (definition)
     expect(p?.allowed).toMatch(/1 \(±0\.001\)/);
+    expect(p?.message).toMatch(/^Mission profile — Share of time: /); // the editor's column label names the field (team rules)
+  });
+
+  it('names a row\'s field by the editor\'s labels: row number and column', () => {
+    const r = validateDesign(withProfile({ name: 'x', rows: [row(20, 1, 1)], hoursPerDay: 24 }));
+    const p = !r.ok ? r.problems.find((x) => x.path === 'missionProfile.rows[0].vinV') : undefined;
+    expect(p?.message).toContain('Mission profile row 1 — Vin'); // the on-screen label
+    expect(p?.message).toContain('20 V'); // the value
+    const hours = validateDesign(withProfile({ name: 'x', rows: [row(14.4, 1, 1)], hoursPerDay: 25 }));
+    const h = !hours.ok ? hours.problems.find((x) => x.path === 'missionProfile.hoursPerDay') : undefined;
+    expect(h?.message).toMatch(/^Mission profile — Hours of use per day/); // the label
+    expect(h?.message).toContain('25'); // the value
+    expect(h?.message).toMatch(/24/); // the range's upper end
   });
 
   it('accepts thirds typed to three decimals', () => {

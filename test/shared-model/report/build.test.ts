@@ -4,7 +4,7 @@
  */
 import { createHash } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
-import { buildReport, compareParts, DEMO_PARTS_LIBRARY, evaluate, figuresOfMerit, findLandmarks, monteCarlo, partsOfKind, sweepLoad, validatePartsLibrary, worstCase } from '../../../shared-model/index.ts';
+import { buildReport, compareParts, DEMO_PARTS_LIBRARY, evaluate, reviewDesign, figuresOfMerit, findLandmarks, monteCarlo, partsOfKind, sweepLoad, validatePartsLibrary, worstCase } from '../../../shared-model/index.ts';
 import { titleBlock } from '../../../shared-model/report/build.ts';
 import type { ReportModel } from '../../../shared-model/index.ts';
 import { designText } from './demo.ts';
@@ -143,5 +143,33 @@ describe('buildReport appendices', () => {
     expect(model.tolerance?.monteCarlo?.efficiency).toEqual(mc.efficiency);
     expect(model.tolerance?.monteCarlo).not.toHaveProperty('values');
     expect(model.methods.map((m) => m.id)).toEqual(expect.arrayContaining(['comparison', 'tolerance']));
+  }, SLOW);
+});
+
+describe('buildReport carries the sizing, the design checks and the mission profile (issue 11)', () => {
+  it('carries the review as the engine gives it, and no mission profile for a design without one', () => {
+    const design = demoDesign('diode-boost');
+    const model = build('diode-boost');
+    expect(model.review).toEqual(reviewDesign(design)); // independent engine run
+    expect(model.mission).toBeNull();
+  }, SLOW);
+
+  it('with a profile: the weighted efficiency is Σ fᵢ·ηᵢ over independent evaluations of its rows', () => {
+    const design = demoDesign('synchronous-buck');
+    const s = design.spec;
+    design.missionProfile = {
+      name: 'test', hoursPerDay: 10, batteryWh: 50,
+      rows: [
+        { vinV: s.vinNomV, loadA: 0.1 * s.ratedLoadA, fraction: 0.6 },
+        { vinV: s.vinMaxV, loadA: s.ratedLoadA, fraction: 0.4 },
+      ],
+    };
+    const model = buildReport({ design, documentText: designText(design), date: '2026-12-02', appVersion: 'test-version' });
+    const e = design.missionProfile.rows.map((r) => evaluate(design, { vinV: r.vinV, loadA: r.loadA })); // independent engine runs
+    const weighted = 0.6 * e[0]!.efficiency + 0.4 * e[1]!.efficiency; // ηw = Σ fᵢ·ηᵢ, the form of US 10 CFR 430 Subpart B, Appendix Z
+    expect(model.mission?.weightedEfficiency).toBeCloseTo(weighted, 12);
+    const lossW = 0.6 * e[0]!.totalLoss + 0.4 * e[1]!.totalLoss; // average loss Σ fᵢ·Ploss,ᵢ (definition)
+    expect(model.mission?.energyLostPerDayWh).toBeCloseTo(lossW * 10, 9); // W × h/day = Wh/day (definition)
+    expect(model.mission?.battery?.shareLostPerDay).toBeCloseTo((lossW * 10) / 50, 9); // share of a 50 Wh battery (definition)
   }, SLOW);
 });

@@ -3,7 +3,7 @@
  * the figures meet the hand calculations of a near-lossless design, and bad input names its field.
  */
 import { describe, expect, it } from 'vitest';
-import { reviewDesign } from '../../../shared-model/index.ts';
+import { evaluateDesign, reviewDesign } from '../../../shared-model/index.ts';
 import { EXIT } from '../../../src-main/cli/io.ts';
 import { runCli } from '../../../src-main/cli/main.ts';
 import { closeTo } from '../../helpers/close-to.ts';
@@ -23,8 +23,9 @@ describe('wattledger size', () => {
     const out = JSON.parse(io.stdout);
     const engine = JSON.parse(JSON.stringify(reviewDesign(demoDesign('diode-boost'))));
     expect(out.sizing).toEqual(engine.sizing); // the CLI adds nothing to the engine
-    expect(out.designChecks).toEqual(engine.checks); // the CLI adds nothing to the engine
-    expect(out.checkCounts.pass + out.checkCounts.warn + out.checkCounts.fail).toBe(out.designChecks.length);
+    expect(out.checks).toEqual(engine.checks); // the CLI adds nothing to the engine
+    expect(out.designChecks).toEqual(out.checks); // the older name, the same list
+    expect(out.checkCounts.pass + out.checkCounts.warn + out.checkCounts.fail).toBe(out.checks.length);
     expect(out.cautions.join(' ')).toMatch(/Estimates only/); // team rules: cautions
   });
 
@@ -65,11 +66,45 @@ describe('wattledger evaluate --json carries the design checks', () => {
     const io = memoryIo({ 'd.json': demoText('synchronous-buck') });
     expect(await runCli(['evaluate', 'd.json', '--json'], io)).toBe(EXIT.ok);
     const out = JSON.parse(io.stdout);
-    expect(out.designChecks.length).toBeGreaterThan(10); // issue 11 §2 lists more than ten kinds
-    for (const c of out.designChecks) {
+    expect(out.checks.length).toBeGreaterThan(10); // issue 11 §2 lists more than ten kinds
+    for (const c of out.checks) {
       expect(Object.keys(c)).toEqual(expect.arrayContaining(['id', 'value', 'limit', 'unit', 'passed', 'source'])); // issue 11 "Done when"
+      expect(typeof c.passed).toBe('boolean'); // issue 11 "Done when": pass/fail
+      expect(c.source.length).toBeGreaterThan(0); // issue 11 §2: each check names its source
     }
-    expect(out.designChecks.map((c: { id: string }) => c.id)).toContain('efficiency-at-rated'); // the demo sets an efficiency target
-    expect(out.checks.length).toBeGreaterThan(0); // the ledger's own rating checks stay as they were
+    expect(out.checks.map((c: { id: string }) => c.id)).toContain('efficiency-at-rated'); // the demo sets an efficiency target
+    expect(out.designChecks).toEqual(out.checks); // the older name stays, the same list (src-main/cli/README.md)
+    const engine = JSON.parse(JSON.stringify(evaluateDesign(demoDesign('synchronous-buck')).evaluation));
+    expect(out.ratingChecks).toEqual(engine.checks); // the ledger's own rating checks, moved, unchanged
+    expect(out.ratingChecks.length).toBeGreaterThan(0);
+  });
+});
+
+describe('--current-derating and --voltage-derating on size and evaluate', () => {
+  it('size: the option replaces the design\'s derating for this run', async () => {
+    const io = memoryIo({ 'd.json': JSON.stringify(buck) });
+    expect(await runCli(['size', 'd.json', '--json', '--current-derating', '50%'], io)).toBe(EXIT.ok);
+    const out = JSON.parse(io.stdout);
+    expect(out.sizing.stresses.currentDerating).toBe(0.5);
+    const peak = 3 + ((16 - 5) * (5 / 16)) / (4.7e-6 * 500e3) / 2; // Io + ΔI/2 at Vin max, Erickson & Maksimović ch. 2
+    closeTo(out.sizing.stresses.required.switchIdA, peak / 0.5, 3e-3); // rating needed = stress / derating (common practice)
+  });
+
+  it('evaluate: --voltage-derating moves the limit of the switch-voltage check', async () => {
+    const io = memoryIo({ 'd.json': JSON.stringify(buck) });
+    expect(await runCli(['evaluate', 'd.json', '--json', '--voltage-derating', '0.5'], io)).toBe(EXIT.ok);
+    const out = JSON.parse(io.stdout);
+    const c = out.checks.find((k: { id: string }) => k.id === 'switch-voltage');
+    closeTo(c.limit, buck.parts.switch.kind === 'mosfet' ? buck.parts.switch.vdsRatingV * 0.5 : NaN, 1e-12); // rating × derating (common practice)
+  });
+
+  it('refuses a derating out of range naming the option, its on-screen label, the value and the range', async () => {
+    const io = memoryIo({ 'd.json': JSON.stringify(buck) });
+    expect(await runCli(['size', 'd.json', '--current-derating', '1.5'], io)).toBe(EXIT.usage);
+    expect(io.stderr).toContain('--current-derating'); // the option
+    expect(io.stderr).toContain('Usable share of current ratings'); // the editor's label
+    expect(io.stderr).toContain('1.5'); // the value
+    expect(io.stderr).toMatch(/0\.1 ≤ --current-derating ≤ 1/); // the range of margins.currentDerating
+    expect(io.stdout).toBe('');
   });
 });
