@@ -31,6 +31,7 @@ import { sampleHistogram, summarizeSamples } from './statistics.ts';
 import type { ResolvedTolerances, Tolerances, Variation } from './variation.ts';
 import { applyVariation, checkTolerances, partsNominal, resolveTolerances, varyConditions } from './variation.ts';
 import { sampleEvaluator } from './sample-evaluator.ts';
+import { phaseCount } from '../interleave/phase-design.ts';
 
 export type MonteCarloDistribution = 'uniform' | 'normal';
 export const DEFAULT_MONTE_CARLO_SAMPLES = 2000;
@@ -190,7 +191,7 @@ export function runMonteCarloSamples(design: Design, options: MonteCarloOptions,
   const overTouch = new Array<number>(parts.length).fill(0);
   let notRegulating = 0;
   const rng = createRandom(options.seed);
-  const evaluateSample = samplesOf(design, base, options.evaluator ? { nominalEvaluator, evaluator } : null);
+  const evaluateSample = samplesOf(design, base, options.evaluator || phaseCount(design) > 1 ? { nominalEvaluator, evaluator } : null) // the lean sampler is one power stage;
   for (let i = 0; i < end; i++) {
     const v = drawVariation(rng, tolerances, distribution, base, spreadConditions);
     if (i < start) continue;

@@ -18,6 +18,7 @@ import type { PointEvaluator } from '../sweep/types.ts';
 import type { Tolerances, ResolvedTolerances, Variation } from './variation.ts';
 import { applyVariation, checkTolerances, describeVariation, nominalVariation, partsKey, resolveTolerances, varyConditions, varyDesign } from './variation.ts';
 import { sampleEvaluator } from './sample-evaluator.ts';
+import { phaseCount } from '../interleave/phase-design.ts';
 
 export interface CornerTemperature {
   part: Role;
@@ -124,7 +125,7 @@ export function worstCase(design: Design, options: WorstCaseOptions = {}): Worst
   if (problems.length > 0) throw new RangeError(problems.map((p) => p.message).join(' '));
   const tolerances = resolveTolerances(design, options.tolerances);
   const base = conditionsFor(design, { ...options.conditions, loadA: options.loadA });
-  const lean = options.evaluator ? null : sampleEvaluator(design);
+  const lean = options.evaluator || phaseCount(design) > 1 ? null : sampleEvaluator(design); // the lean sampler is one power stage
   const byParts = new Map<string, { design: Design; evaluate: PointEvaluator }>();
   const corner = (v: Variation): ToleranceCorner => {
     if (lean) return cornerRecord(v, lean(v, varyConditions(base, v)));
