@@ -33,7 +33,7 @@ export const SPEC_FIELDS: FieldSpec[] = [
   num('ratedLoadA', SPEC_LABELS.ratedLoadA, 'A'),
   num('switchingFrequencyHz', SPEC_LABELS.switchingFrequencyHz, 'Hz'),
   num('ambientC', SPEC_LABELS.ambientC, '°C'),
-  num('maxDuty', SPEC_LABELS.maxDuty, '', { help: 'A fraction below 1 ("0.9" or "90 %").' }),
+  num('maxDuty', SPEC_LABELS.maxDuty, '%', { help: 'In percent: "90" or "90 %".' }),
 ];
 
 export const LOAD_KIND_CHOICE: ChoiceSpec = {
@@ -52,9 +52,9 @@ export const LOAD_KIND_HELP =
   'Sets how the output ripple current divides between the output capacitors and the load: a resistor takes a share, a constant-power load pushes more into the capacitors.';
 
 export const TARGET_FIELDS: FieldSpec[] = [
-  num('efficiencyAtRated', TARGET_LABELS.efficiencyAtRated, '', { optional: true, help: 'Checked at nominal input and rated load (Results → Sizing and checks); the Monte Carlo counts the samples that meet it.' }),
+  num('efficiencyAtRated', TARGET_LABELS.efficiencyAtRated, '%', { optional: true, help: 'Checked at nominal input and rated load (Results → Sizing and checks); the Monte Carlo counts the samples that meet it.' }),
   num('outputRippleV', TARGET_LABELS.outputRippleV, 'V', { optional: true, help: 'Sizes the output capacitors and is checked at every input-voltage corner (Results → Sizing and checks).' }),
-  num('inductorRippleRatio', TARGET_LABELS.inductorRippleRatio, '', { optional: true, help: 'Sizes the inductor and is checked at every input-voltage corner (empty: 0.3, common practice; Results → Sizing and checks).' }),
+  num('inductorRippleRatio', TARGET_LABELS.inductorRippleRatio, '%', { optional: true, help: 'Sizes the inductor and is checked at every input-voltage corner (empty: 30 %, common practice; Results → Sizing and checks).' }),
 ];
 
 export const KIND_CHOICE: ChoiceSpec = {
@@ -111,9 +111,9 @@ export const DEAD_TIME_FIELDS: FieldSpec[] = [
 
 export const MARGIN_FIELDS: FieldSpec[] = [
   num('temperatureMarginK', MARGIN_LABELS.temperatureMarginK, 'K'),
-  num('rippleCurrentDerating', MARGIN_LABELS.rippleCurrentDerating, ''),
-  num('resistorPowerDerating', MARGIN_LABELS.resistorPowerDerating, ''),
-  num('voltageDerating', MARGIN_LABELS.voltageDerating, ''),
+  num('rippleCurrentDerating', MARGIN_LABELS.rippleCurrentDerating, '%'),
+  num('resistorPowerDerating', MARGIN_LABELS.resistorPowerDerating, '%'),
+  num('voltageDerating', MARGIN_LABELS.voltageDerating, '%'),
   num('requiredLifeHours', MARGIN_LABELS.requiredLifeHours, 'h', { optional: true }),
 ];
 
