@@ -5,8 +5,8 @@
  * topology (part kinds, laws, thermal paths, margins): those are choices with sensible starting values,
  * not numbers of a particular product.
  */
-import { DEMO_DESIGNS, TOPOLOGIES, validateDesign } from '../../shared-model/index.ts';
-import type { Design } from '../../shared-model/index.ts';
+import { DEMO_DESIGNS, ROLE_LABELS, TOPOLOGIES, validateDesign } from '../../shared-model/index.ts';
+import type { Design, Role } from '../../shared-model/index.ts';
 
 export interface DesignTemplate {
   id: string;
@@ -25,8 +25,8 @@ function freshIdentity(design: Design, name: string): Design {
 }
 
 /**
- * A copy of `template` with the specification's conditions and each part's plain numbers removed, part
- * names emptied and library links dropped. The result is an invalid draft on purpose: the editor marks
+ * A copy of `template` with the specification's conditions and each part's plain numbers removed, parts
+ * named by their role ("New inductor") and library links dropped. The result is an invalid draft on purpose: the editor marks
  * each missing field with its label and allowed range.
  */
 export function blankDesign(template: Design, name: string): Design {
@@ -38,7 +38,7 @@ export function blankDesign(template: Design, name: string): Design {
     if (!part) continue;
     part.id = `new-${role}`;
     for (const [key, value] of Object.entries(part)) if (typeof value === 'number' && key !== 'count') delete part[key];
-    part.name = '';
+    part.name = `New ${ROLE_LABELS[role as Role].toLowerCase()}`;
     part.invented = false;
     delete part.notes;
   }
