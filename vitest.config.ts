@@ -1,4 +1,4 @@
-// Test runner configuration: one run, two projects (engine and main-process units; browser end-to-end).
+// Test runner configuration: one run, three projects (engine and main-process units; property tests; browser end-to-end).
 import { defineConfig } from 'vitest/config';
 import { svelte } from '@sveltejs/vite-plugin-svelte';
 
@@ -16,6 +16,17 @@ export default defineConfig({
           environment: 'node',
           globalSetup: ['test/global-package.ts'],
           testTimeout: 60_000,
+        },
+      },
+      {
+        test: {
+          // Property tests over random valid designs (issue 10 §7): ≥ 10⁵ checked points, on their own so
+          // the unit project stays quick; `npm test` runs them with the others.
+          name: 'properties',
+          include: ['test/properties/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['test/global-package.ts'],
+          testTimeout: 300_000,
         },
       },
       {

@@ -297,3 +297,4 @@ export {
 
 // --- desktop API contract (types only) ---
 export type * from './desktop-api.ts';
+export { curveReadings, type CurveReading } from './curves/readings.ts';

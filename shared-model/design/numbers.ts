@@ -92,6 +92,8 @@ export const RANGES = {
   rdsExponent: { min: 0, max: 5, why: `RDS(on) power-law exponent, 0 … 5 (${TRADE}: 1.5–2.5, docs/methods.md §5).` },
   hotRatio: { min: 0.1, max: 10, why: `RDS(on) hot/25 °C ratio, 0.1 … 10 (${TRADE}: 1.2–2.2).` },
   rdsRatio: { min: 0.1, max: 10, why: `RDS(on) at a temperature over RDS(on) at 25 °C, 0.1 … 10 (${TRADE}: about 0.7 at −40 °C to 2.2 at 175 °C).` },
+  esrRatio: { min: 0.05, max: 100, why: `ESR at a temperature over ESR at 25 °C, 0.05 … 100 (${TRADE}: aluminium electrolytics rise several-fold towards −40 °C and fall to about half when hot; ceramics stay near 1).` },
+  coreLossFactor: { min: 0.05, max: 20, why: `Core loss at a temperature over core loss at the Steinmetz coefficients' own temperature, 0.05 … 20 (${TRADE}: power ferrites have a minimum near 80–100 °C and lose about 1.5–3 × as much at 25 °C or 140 °C).` },
   vfTempCoVPerK: { min: -0.01, max: 0.01, why: `VF0 drift, −10 … +10 mV/K (${TRADE}: about −1 to −2 mV/K, docs/methods.md §6).` },
   leakageDoublingK: { min: 2, max: 50, why: `Leakage doubling interval, 2 … 50 K (${TRADE}: about 10 K, docs/methods.md §6).` },
   partTempCoPerK: { min: -0.05, max: 0.05, why: `Fractional change per kelvin, −5 … +5 %/K (${OURS}: Isat and ESR drifts are a fraction of a %/K).` },

@@ -148,6 +148,10 @@ export const diodeSchema = z.object({
 export const inductancePointSchema = z.object({ currentA: q('curveA'), inductanceH: q('inductanceH') });
 export type InductancePoint = z.infer<typeof inductancePointSchema>;
 
+/** One point of a core-loss-against-temperature curve: Pcore(tC) / Pcore from the Steinmetz coefficients. */
+export const coreLossTemperaturePointSchema = z.object({ tC: q('statedC'), factor: q('coreLossFactor') });
+export type CoreLossTemperaturePoint = z.infer<typeof coreLossTemperaturePointSchema>;
+
 export const coreLossSchema = z.discriminatedUnion('kind', [
   /** Steinmetz Pv = k · f^alpha · Bpk^beta in W/m³ with f in Hz and B in T (sine excitation). */
   z.object({ kind: z.literal('steinmetz'), k: q('steinmetzK'), alpha: q('steinmetzAlpha'), beta: q('steinmetzBeta') }),
@@ -198,9 +202,23 @@ export const inductorSchema = z.object({
   aeM2: q('coreAreaM2'),
   veM3: q('coreVolumeM3'),
   coreLoss: coreLossSchema,
+  /** Core loss against temperature as a multiplier of the Steinmetz loss (curves/core-temperature.ts). */
+  coreLossTemperatureCurve: z
+    .object({ points: z.array(coreLossTemperaturePointSchema).min(CURVE_POINTS.min).max(CURVE_POINTS.max) })
+    .optional()
+    .describe(
+      'Core loss against core temperature as a multiplier of the loss the Steinmetz coefficients give, digitised from the material datasheet (loss density at a temperature over the loss density at the coefficients\' own temperature), 3 to 200 points: temperature strictly rising, factor above 0 (ferrites: a minimum near 80–100 °C). When given the core loss is iGSE · factor(T) at the inductor temperature, inside the electro-thermal solve; straight lines between points, the end factors held outside the table (the result warns).',
+    ),
   acWinding: acWindingSchema,
   tMaxC: q('partLimitC'),
 });
+
+/** One point of a capacitor's ESR(f) curve at 25 °C. */
+export const esrFrequencyPointSchema = z.object({ frequencyHz: q('statedHz'), esrOhm: q('seriesOhm') });
+export type EsrFrequencyPoint = z.infer<typeof esrFrequencyPointSchema>;
+/** One point of a capacitor's normalised ESR(T) curve: ESR(tC) / ESR(25 °C). */
+export const esrTemperaturePointSchema = z.object({ tC: q('statedC'), ratio: q('esrRatio') });
+export type EsrTemperaturePoint = z.infer<typeof esrTemperaturePointSchema>;
 
 export const capacitorSchema = z.object({
   kind: z.literal('capacitor'),
@@ -211,6 +229,20 @@ export const capacitorSchema = z.object({
   esrOhm: q('seriesOhm'),
   /** Fractional ESR change per kelvin from 25 °C (electrolytics fall as they warm). 0 if unknown. */
   esrTempCoPerK: q('partTempCoPerK'),
+  /** The datasheet's ESR(f) curve at 25 °C (curves/esr-spectrum.ts); replaces esrOhm for the ESR loss. */
+  esrFrequencyCurve: z
+    .object({ points: z.array(esrFrequencyPointSchema).min(CURVE_POINTS.min).max(CURVE_POINTS.max) })
+    .optional()
+    .describe(
+      'ESR against frequency at 25 °C digitised from the datasheet, 3 to 200 points: frequency strictly rising, ESR above 0 Ω. When given, the ESR loss is Σ Ih²·ESR(h·fs) over the harmonics h of the bank current (the Fourier series of its straight-line segments, exact); esrOhm is then not used for that loss. Straight lines between points, the first ESR held below the first point and the last held above the last point (the result warns when the switching frequency lies outside the table).',
+    ),
+  /** The datasheet's normalised ESR(T) curve; replaces esrTempCoPerK. */
+  esrTemperatureCurve: z
+    .object({ points: z.array(esrTemperaturePointSchema).min(CURVE_POINTS.min).max(CURVE_POINTS.max) })
+    .optional()
+    .describe(
+      'ESR at a temperature over ESR at 25 °C, digitised from the datasheet, 3 to 200 points: temperature strictly rising, ratio above 0. When given it replaces esrTempCoPerK: ESR(f, T) = ESR(f) · ratio(T). Straight lines between points, the end ratios held outside the table (the result warns when the capacitor temperature lies outside it).',
+    ),
   rippleRatingA: q('ratingA'),
   voltageRatingV: q('ratingV'),
   tMaxC: q('partLimitC'),

@@ -7,6 +7,7 @@
  *   A two-point RDS(on) law needs its hot point above 25 °C.
  *   A datasheet curve rises in x point by point and its y keeps the direction physics gives it: Coss
  *   never rises with VDS, the RDS(on) ratio never falls with Tj (sources at COSS_CURVE and RDS_CURVE).
+ *   ESR(f), ESR(T) and core-loss(T) tables: x rising, y above zero, no direction imposed on y.
  *   Inductance falls with current (roll-off ≤ L); the magnetic path length le = Ve/Ae of a real core
  *   lies between 1 mm and 1 m [common practice].
  *   A resistor's derating starts before its zero-power temperature.
@@ -25,7 +26,7 @@ interface CurveRule {
   xName: string;
   yName: string;
   curve: string;
-  monotonic: 'non-increasing' | 'non-decreasing';
+  monotonic: 'non-increasing' | 'non-decreasing' | 'any';
   why: string;
 }
 
@@ -36,6 +37,13 @@ const RDS_CURVE: CurveRule = { x: 'tjC', y: 'ratio', xName: 'Tj', yName: 'RDS(on
 
 /** Inductance falls as the DC current rises: the core's permeability falls towards saturation (common practice). */
 const L_CURVE: CurveRule = { x: 'currentA', y: 'inductanceH', xName: 'current', yName: 'inductance', curve: 'L(I) table', monotonic: 'non-increasing', why: 'the inductance must not rise with current (the core\'s permeability falls towards saturation; check the columns are current then inductance)' };
+
+/** ESR against frequency falls, then rises again with skin and proximity effects: no direction is imposed (common practice). */
+const ESR_F_CURVE: CurveRule = { x: 'frequencyHz', y: 'esrOhm', xName: 'frequency', yName: 'ESR', curve: 'ESR(f) table', monotonic: 'any', why: '' };
+/** ESR(T)/ESR(25 °C): electrolytics fall as they warm, ceramics barely move (common practice): no direction imposed. */
+const ESR_T_CURVE: CurveRule = { x: 'tC', y: 'ratio', xName: 'temperature', yName: 'ESR ratio', curve: 'ESR(T) table', monotonic: 'any', why: '' };
+/** Ferrite core loss has a minimum near 80–100 °C (common practice): no direction imposed. */
+const CORE_T_CURVE: CurveRule = { x: 'tC', y: 'factor', xName: 'temperature', yName: 'core-loss factor', curve: 'core loss (T) table', monotonic: 'any', why: '' };
 
 /** The first point of the curve at `p` that breaks its rule, as a problem naming the point. */
 function curveTable(doc: unknown, p: string, rule: CurveRule, out: Problem[]): void {
@@ -133,6 +141,7 @@ function inductor(doc: unknown, out: Problem[]): void {
     out.push(problem(`${p}.rolloff.inductanceH`, lr, `rolloff.inductanceH ≤ ${p}.inductanceH (${inUnit(l, 'inductanceH')})`,
       `${p}.rolloff.inductanceH (${inUnit(lr, 'inductanceH')}) must not exceed the zero-current inductance ${inUnit(l, 'inductanceH')}: inductance falls with current.`));
   if (Array.isArray(at(doc, `${p}.inductanceCurve.points`))) curveTable(doc, `${p}.inductanceCurve.points`, L_CURVE, out);
+  curveTable(doc, `${p}.coreLossTemperatureCurve.points`, CORE_T_CURVE, out);
   const ae = num(doc, `${p}.aeM2`);
   const ve = num(doc, `${p}.veM3`);
   if (ae !== undefined && ve !== undefined && ae > 0) {
@@ -185,6 +194,10 @@ export function partRules(doc: unknown): Problem[] {
   if (str(doc, 'parts.rectifier.kind') === 'mosfet') mosfet(doc, 'rectifier', out);
   if (str(doc, 'parts.rectifier.kind') === 'diode') forwardCurves(doc, 'parts.rectifier.vfCurves.points', out);
   inductor(doc, out);
+  for (const bank of ['inputCapacitor', 'outputCapacitor']) {
+    curveTable(doc, `parts.${bank}.part.esrFrequencyCurve.points`, ESR_F_CURVE, out);
+    curveTable(doc, `parts.${bank}.part.esrTemperatureCurve.points`, ESR_T_CURVE, out);
+  }
   resistorAndController(doc, out);
   limitsAboveAmbient(doc, out);
   return out;

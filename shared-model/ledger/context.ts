@@ -68,6 +68,8 @@ export interface Workspace {
   sourceLossW: number;
   /** The part of pathLossW the volt-second drops do not carry (slots.ts `drop`). */
   offDropLossW: number;
+  /** The slope part of the resistive conduction losses at the last fill, W (kernel.ts), before clipping. */
+  slopeLossW: number;
   /** The final point of the last evaluation: the solver's record, or the lean summary in a sweep. */
   op: PointSummary | undefined;
   /** The context's electro-thermal loop (joint-loop.ts), made on first use. */
@@ -149,6 +151,7 @@ export function ledgerContext(design: Design, vinV = design.spec.vinNomV, freque
     pathLossW: 0,
     sourceLossW: 0,
     offDropLossW: 0,
+    slopeLossW: 0,
     op: undefined,
     loop: undefined,
     leanRecords: undefined,

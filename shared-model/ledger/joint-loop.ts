@@ -7,7 +7,9 @@
  *      f(D) = Vin·Iin(D) − Pout − P_path(D, T), warm-started from the previous call's duty and slope,
  *      until |f| ≤ 1e-12·Pin (usually one or two steps once the temperatures settle;
  *      a single step while the temperatures are still more than 1 K from their fixed point);
- *   3. per-part losses from the kernel on a reused LeanPoint; the tangents ∂P_i/∂T_i exact, from the
+ *   3. per-part losses from the kernel on a reused LeanPoint — at the duties the solver only tries, the
+ *      losses that move the duty alone (fillPathLosses), the source's (core loss, gate drive, bias, charge
+ *      pulses from the source…) once at the duty kept (completeLosses); the tangents ∂P_i/∂T_i exact, from the
  *      filled slots and the laws' slopes with the electrical point held (kernel-slopes.ts), no further pass.
  * `finalSummary(T)` fills the final point once at the converged duty, as the context's reused summary
  * (operating-point/lean-point.ts) with its warnings and the kernel filled on it; `finalPoint(T)` is that
@@ -31,7 +33,7 @@ import { buildOperatingPoint } from '../operating-point/assemble.ts';
 import { addWarnings } from '../operating-point/checks.ts';
 import type { ConductionParameters } from '../operating-point/types.ts';
 import type { LossAt } from '../thermal/fixed-point.ts';
-import { conductionInto, fillLosses, type LedgerContext } from './kernel.ts';
+import { completeLosses, conductionInto, fillLosses, fillPathLosses, type LedgerContext } from './kernel.ts';
 import { nodeSlopesInto } from './kernel-slopes.ts';
 import { leanPointAt, newLeanPoint, type LeanPoint, type PointSummary } from '../operating-point/lean-point.ts';
 import { rippleSquaresOf, rippleSquaresOfLean } from './ripple-squares.ts';
@@ -131,8 +133,9 @@ export class Loop implements JointLoop, BalanceProblem {
   }
 
   /**
-   * Fills the kernel at the current duty and sets `f`, the power-balance residual Vin·Iin − Pout − P_path
-   * (a field, not a return value: a number returned across a call is boxed on the heap).
+   * Fills the kernel's path losses at the current duty and sets `f`, the power-balance residual
+   * Vin·Iin − Pout − P_path (a field, not a return value: a number returned across a call is boxed on the
+   * heap). The source's losses wait for completeLosses at the duty the step keeps (kernel.ts).
    */
   private balance(T: Float64Array, cp: ConductionParameters): void {
     const ctx = this.ctx;
@@ -141,7 +144,7 @@ export class Loop implements JointLoop, BalanceProblem {
     s.vo = this.vo;
     shapeOfOwn(c, s);
     leanPointAt(c, s, lean);
-    fillLosses(ctx, lean, rippleSquaresOfLean(lean, ctx.ripple), T, cp);
+    fillPathLosses(ctx, lean, rippleSquaresOfLean(lean, ctx.ripple), T, cp);
     this.f = this.vin * s.iin - this.pout - ctx.pathLossW;
   }
 
@@ -183,6 +186,7 @@ export class Loop implements JointLoop, BalanceProblem {
       }
       this.d = vs.d;
       this.balance(T, cp);
+      completeLosses(ctx);
       P.set(ctx.nodePowerW);
       nodeSlopesInto(ctx, T, G);
       return true;
@@ -200,6 +204,8 @@ export class Loop implements JointLoop, BalanceProblem {
       return this.step(T, P, G, residualK);
     }
     const ok = b.status === BALANCED;
+    // The last residual was at the duty kept (duty-balance.ts): its source losses complete the fill.
+    completeLosses(ctx);
     P.set(ctx.nodePowerW);
     nodeSlopesInto(ctx, T, G);
     return ok;

@@ -7,7 +7,10 @@
 import type { Mosfet } from '../design/parts.ts';
 import type { ConductionParameters } from '../operating-point/types.ts';
 import type { PointView } from '../operating-point/lean-point.ts';
-import { esrAt, leakageAt } from '../physics/temperature-laws.ts';
+import { coreLossFactorAt, esrRatioAt, leakageAt } from '../physics/temperature-laws.ts';
+import { spectralEsrOhm } from '../curves/esr-spectrum.ts';
+import type { Capacitor } from '../design/parts.ts';
+import type { Segment } from '../operating-point/types.ts';
 import { eossAt, qossAt } from '../losses/output-capacitance.ts';
 import { dowellRippleFactor } from '../losses/dowell.ts';
 import type { Slots } from './slots.ts';
@@ -199,17 +202,23 @@ export function fillPassiveInputs(ctx: LedgerContext, op: PointView, T: Float64A
   k.veM3 = ind.veM3;
   k.fluxPerAmpT = op.inductanceH / (ind.turns * ind.aeM2);
   k.segments = op.waveforms.inductor.segments;
+  k.temperatureFactor = coreLossFactorAt(ind, tL);
+  k.temperatureC = tL;
 
   const ci = s.inputEsr.inputs;
   const tCi = T[idx.inputCapacitor]!;
+  const capIn = parts.inputCapacitor.part;
   ci.irmsA = op.stats.inputCapacitor.rmsA;
-  ci.esrOhm = esrAt(parts.inputCapacitor.part, tCi);
+  ci.esr25Ohm = esr25Of(capIn, op.waveforms.inputCapacitor.segments, op.periodS);
+  ci.esrOhm = ci.esr25Ohm * esrRatioAt(capIn, tCi);
   ci.count = parts.inputCapacitor.count;
   ci.temperatureC = tCi;
   const cOut = s.outputEsr.inputs;
   const tCo = T[idx.outputCapacitor]!;
+  const capOut = parts.outputCapacitor.part;
   cOut.irmsA = op.stats.outputCapacitor.rmsA;
-  cOut.esrOhm = esrAt(parts.outputCapacitor.part, tCo);
+  cOut.esr25Ohm = esr25Of(capOut, op.waveforms.outputCapacitor.segments, op.periodS);
+  cOut.esrOhm = cOut.esr25Ohm * esrRatioAt(capOut, tCo);
   cOut.count = parts.outputCapacitor.count;
   cOut.temperatureC = tCo;
 
@@ -224,4 +233,46 @@ export function fillPassiveInputs(ctx: LedgerContext, op: PointView, T: Float64A
   // Pulse skipping: awake (quiescent current) while a pulse runs, the sleep current for the rest.
   const pfm = ctx.pulseSkipping;
   q.quiescentA = pfm && pfm.active ? drv.quiescentA * pfm.awakeFraction + pfm.sleepCurrentA * (1 - pfm.awakeFraction) : drv.quiescentA;
+}
+
+/** The last bank current an ESR(f) table was met with and what it gave (the electro-thermal loop refills the
+ *  kernel at one operating point many times while only temperatures move). */
+interface SpectrumMemo {
+  key: Float64Array;
+  esrOhm: number;
+}
+const spectrumMemos = new WeakMap<object, SpectrumMemo>();
+
+/** A capacitor's ESR at 25 °C for the bank current `segments`: the part's ESR, or its ESR(f) table met by the current's harmonics (curves/esr-spectrum.ts). */
+function esr25Of(cap: Capacitor, segments: readonly Segment[], periodS: number): number {
+  const curve = cap.esrFrequencyCurve;
+  if (!curve) return cap.esrOhm;
+  let memo = spectrumMemos.get(curve.points);
+  if (!memo) {
+    memo = { key: new Float64Array(1 + 3 * segments.length), esrOhm: NaN };
+    spectrumMemos.set(curve.points, memo);
+  }
+  const key = memo.key;
+  let same = key.length === 1 + 3 * segments.length && key[0] === periodS;
+  if (same) {
+    for (let k = 0; k < segments.length; k++) {
+      const g = segments[k]!;
+      if (key[1 + 3 * k] !== g.durationS || key[2 + 3 * k] !== g.i0A || key[3 + 3 * k] !== g.i1A) {
+        same = false;
+        break;
+      }
+    }
+  }
+  if (same && memo.esrOhm === memo.esrOhm) return memo.esrOhm;
+  if (key.length !== 1 + 3 * segments.length) memo.key = new Float64Array(1 + 3 * segments.length);
+  const kk = memo.key;
+  kk[0] = periodS;
+  for (let k = 0; k < segments.length; k++) {
+    const g = segments[k]!;
+    kk[1 + 3 * k] = g.durationS;
+    kk[2 + 3 * k] = g.i0A;
+    kk[3 + 3 * k] = g.i1A;
+  }
+  memo.esrOhm = spectralEsrOhm(segments, periodS, curve.points);
+  return memo.esrOhm;
 }

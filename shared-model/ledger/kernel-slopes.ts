@@ -13,8 +13,9 @@
 import type { LedgerContext } from './context.ts';
 import {
   copperResistanceSlopeAt,
+  coreLossFactorSlopeAt,
   diodeVf0SlopeAt,
-  esrSlopeAt,
+  esrRatioSlopeAt,
   leakageSlopeAt,
   rdsOnSlopeAt,
   resistorSlopeAt,
@@ -42,10 +43,13 @@ export function nodeSlopesInto(ctx: LedgerContext, T: Float64Array, G: Float64Ar
   const ac = s.windingAc;
   if (ac) inductorPerOhm += ac.model.sensitivity!(ac.inputs);
   G[idx.inductor] += inductorPerOhm * dcrSlope;
+  // A core-loss-vs-temperature curve: ∂P/∂T = P(Steinmetz) · dfactor/dT (0 without one).
+  G[idx.inductor] += s.core.model.sensitivity!(s.core.inputs) * coreLossFactorSlopeAt(parts.inductor, T[idx.inductor]!);
   const ci = s.inputEsr;
-  G[idx.inputCapacitor] += ci.model.sensitivity!(ci.inputs) * esrSlopeAt(parts.inputCapacitor.part, T[idx.inputCapacitor]!);
+  // ESR(T) = ESR25 · ratio(T), ESR25 the part's ESR or its ESR(f) table met by the current's spectrum.
+  G[idx.inputCapacitor] += ci.model.sensitivity!(ci.inputs) * ci.inputs.esr25Ohm * esrRatioSlopeAt(parts.inputCapacitor.part, T[idx.inputCapacitor]!);
   const co = s.outputEsr;
-  G[idx.outputCapacitor] += co.model.sensitivity!(co.inputs) * esrSlopeAt(parts.outputCapacitor.part, T[idx.outputCapacitor]!);
+  G[idx.outputCapacitor] += co.model.sensitivity!(co.inputs) * co.inputs.esr25Ohm * esrRatioSlopeAt(parts.outputCapacitor.part, T[idx.outputCapacitor]!);
   const r = s.sense;
   const sense = parts.senseResistor;
   if (r && sense) G[idx.senseResistor] += r.model.sensitivity!(r.inputs) * resistorSlopeAt(sense, T[idx.senseResistor]!);

@@ -38,15 +38,58 @@ export function fillLosses(
   T: Float64Array,
   cp: ConductionParameters,
 ): void {
+  fillPathLosses(ctx, op, ripple, T, cp);
+  completeLosses(ctx);
+}
+
+/**
+ * The half of fillLosses the duty balance reads: every slot's inputs, the watts of the slots that are not
+ * the source's, and ctx.pathLossW. The source's slots (core loss, charge pulses from the source, gate
+ * drive, the input bank, bias: slots.ts) keep their old watts and nodePowerW, sourceLossW and offDropLossW
+ * their old values until `completeLosses`, which the caller runs once at the duty it keeps: the duty
+ * solver tries several duties per electro-thermal step and reads only pathLossW at the others.
+ */
+export function fillPathLosses(
+  ctx: LedgerContext,
+  op: PointView,
+  ripple: RippleSquares,
+  T: Float64Array,
+  cp: ConductionParameters,
+): void {
   fillSwitchInputs(ctx, op, T, cp);
   fillRectifierInputs(ctx, op, T, cp);
   fillPassiveInputs(ctx, op, T, cp);
+  const s = ctx.slots;
+  const cOut = s.outputEsr.inputs;
+  slotWatts(s, true, false);
+  const all = s.all;
+  let path = 0;
+  for (let i = 0; i < all.length; i++) {
+    const slot = all[i]!;
+    if (!slot.source && slot !== s.driver) path += slot.watts;
+  }
+  // Slope part of the resistive conduction losses (paid at an unchanged duty, see slots.ts).
+  let slopeW = cp.switchOnOhm * ripple.switchA2 + cp.inductorDcrOhm * ripple.inductorA2;
+  slopeW += (ctx.synchronous ? cp.rectifierOnOhm : cp.diodeRdOhm) * ripple.rectifierA2;
+  slopeW += (cOut.esrOhm / cOut.count) * ripple.outputCapacitorA2;
+  if (s.sense) slopeW += cp.senseOhm * ripple.senseA2;
+  ctx.slopeLossW = slopeW;
+  if (!(slopeW > 0) || slopeW > path) slopeW = slopeW > path ? path : 0;
+  ctx.pathLossW = path - slopeW;
+}
+
+/**
+ * The other half (see fillPathLosses, which must have run at this point): the source's slots' watts, the
+ * driver's, and every sum — the same slots summed in the same order as one pass, so the numbers are those
+ * of a single fill.
+ */
+export function completeLosses(ctx: LedgerContext): void {
   const s = ctx.slots;
   const parts = ctx.design.parts;
   const sw = parts.switch;
   const rect = parts.rectifier;
   const drv = parts.controller;
-  const cOut = s.outputEsr.inputs;
+  slotWatts(s, false, true);
   // Sum: every slot's watts; the driver's share needs the FETs' inside shares first.
   const all = s.all;
   const power = ctx.nodePowerW;
@@ -55,7 +98,6 @@ export function fillLosses(
   let source = 0;
   let offDrop = 0;
   let insideW = 0;
-  slotWatts(s);
   for (let i = 0; i < all.length; i++) {
     const slot = all[i]!;
     if (slot === s.driver) continue;
@@ -77,11 +119,7 @@ export function fillLosses(
   s.driver.watts = dw;
   power[ctx.net.index.controller] += dw;
   source += dw;
-  // Slope part of the resistive conduction losses (paid at an unchanged duty, see slots.ts).
-  let slopeW = cp.switchOnOhm * ripple.switchA2 + cp.inductorDcrOhm * ripple.inductorA2;
-  slopeW += (ctx.synchronous ? cp.rectifierOnOhm : cp.diodeRdOhm) * ripple.rectifierA2;
-  slopeW += (cOut.esrOhm / cOut.count) * ripple.outputCapacitorA2;
-  if (s.sense) slopeW += cp.senseOhm * ripple.senseA2;
+  let slopeW = ctx.slopeLossW;
   if (!(slopeW > 0) || slopeW > path) slopeW = slopeW > path ? path : 0;
   ctx.pathLossW = path - slopeW;
   ctx.sourceLossW = source + slopeW;

@@ -65,7 +65,7 @@ const conductionIn = (): ConductionInputs => ({ irmsA: 0, resistanceOhm: 0, temp
 const gateIn = (): GateDriveInputs => ({ qgC: 0, driveV: 0, frequencyHz: 0, gateOhm: 0, pullUpOhm: 0, pullDownOhm: 0 });
 const deadIn = (): DeadTimeInputs => ({ vsdV: 0, firstA: 0, firstS: 0, secondA: 0, secondS: 0, frequencyHz: 0 });
 const recoveryIn = (): ReverseRecoveryInputs => ({ qrrC: 0, testA: 1, forwardA: 0, voltageV: 0, frequencyHz: 0 });
-const capIn = (): CapacitorEsrInputs => ({ irmsA: 0, esrOhm: 0, count: 1, temperatureC: 0 });
+const capIn = (): CapacitorEsrInputs => ({ irmsA: 0, esrOhm: 0, esr25Ohm: 0, count: 1, temperatureC: 0 });
 
 /**
  * A slot of `model` on part `role`. Node, payer, temperature dependence and drop come from the model
@@ -124,7 +124,7 @@ export function slotsOf(design: Design, synchronous: boolean): Slots {
     swCoss: at('switch', outputCapacitance, { voltageV: 0, frequencyHz: 0, ctrlEossJ: 0, syncQossC: 0, syncEossJ: 0 }),
     swGate: at('switch', gateDrive, gateIn()),
     windingDc: at('inductor', windingDc, { irmsA: 0, dcrOhm: 0, temperatureC: 0 }),
-    core: at('inductor', coreLoss, { kiWPerM3: 0, alpha: 1, beta: 2, veM3: 0, fluxPerAmpT: 0, segments: [] }),
+    core: at('inductor', coreLoss, { kiWPerM3: 0, alpha: 1, beta: 2, veM3: 0, fluxPerAmpT: 0, segments: [], temperatureFactor: 1, temperatureC: 0 }),
     inputEsr: at('inputCapacitor', capacitorEsr, capIn(), true),
     outputEsr: at('outputCapacitor', capacitorEsr, capIn()),
     quiescent: at('controller', quiescent, { vinV: 0, quiescentA: 0 }),
@@ -165,52 +165,64 @@ export function slotsOf(design: Design, synchronous: boolean): Slots {
 }
 
 /**
- * Sets `watts` of every slot but the driver (whose input needs the FETs' gate shares first).
+ * Sets `watts` of every slot but the driver (whose input needs the FETs' gate shares first): of the slots
+ * that are not the source's when `path`, of the source's (`source` true) when `source`. The duty balance
+ * reads only the first (kernel.ts fillPathLosses); the second follow once at the duty kept (completeLosses).
  * One call site per slot on purpose: each site always calls the same model, so the engine can inline
  * it (a shared call site sees every model, and each of its results would be boxed on the heap); three
  * small functions rather than one, so that each has room to inline its models.
  */
-export function slotWatts(s: Slots): void {
-  switchWatts(s);
-  rectifierWatts(s);
-  passiveWatts(s);
+export function slotWatts(s: Slots, path = true, source = true): void {
+  switchWatts(s, path, source);
+  rectifierWatts(s, path, source);
+  passiveWatts(s, path, source);
 }
 
-function switchWatts(s: Slots): void {
-  s.swConduction.watts = s.swConduction.model.watts(s.swConduction.inputs);
-  s.swTurnOn.watts = s.swTurnOn.model.watts(s.swTurnOn.inputs);
-  s.swTurnOff.watts = s.swTurnOff.model.watts(s.swTurnOff.inputs);
-  s.swCoss.watts = s.swCoss.model.watts(s.swCoss.inputs);
+function switchWatts(s: Slots, path: boolean, source: boolean): void {
+  const x = s.swConduction;
+  if (x.source ? source : path) x.watts = x.model.watts(x.inputs);
+  const on = s.swTurnOn;
+  if (on.source ? source : path) on.watts = on.model.watts(on.inputs);
+  const off = s.swTurnOff;
+  if (off.source ? source : path) off.watts = off.model.watts(off.inputs);
+  const coss = s.swCoss;
+  if (coss.source ? source : path) coss.watts = coss.model.watts(coss.inputs);
   const a = s.swDeadTime;
-  if (a) a.watts = a.model.watts(a.inputs);
+  if (a && (a.source ? source : path)) a.watts = a.model.watts(a.inputs);
   const b = s.swRecovery;
-  if (b) b.watts = b.model.watts(b.inputs);
+  if (b && (b.source ? source : path)) b.watts = b.model.watts(b.inputs);
   const c = s.swJunction;
-  if (c) c.watts = c.model.watts(c.inputs);
-  s.swGate.watts = s.swGate.model.watts(s.swGate.inputs);
+  if (c && (c.source ? source : path)) c.watts = c.model.watts(c.inputs);
+  const g = s.swGate;
+  if (g.source ? source : path) g.watts = g.model.watts(g.inputs);
 }
 
-function rectifierWatts(s: Slots): void {
+function rectifierWatts(s: Slots, path: boolean, source: boolean): void {
   const d = s.rectConduction;
-  if (d) d.watts = d.model.watts(d.inputs);
+  if (d && (d.source ? source : path)) d.watts = d.model.watts(d.inputs);
   const e = s.diodeForward;
-  if (e) e.watts = e.model.watts(e.inputs);
+  if (e && (e.source ? source : path)) e.watts = e.model.watts(e.inputs);
   const f = s.rectDeadTime;
-  if (f) f.watts = f.model.watts(f.inputs);
+  if (f && (f.source ? source : path)) f.watts = f.model.watts(f.inputs);
   const g = s.diodeLeakage;
-  if (g) g.watts = g.model.watts(g.inputs);
+  if (g && (g.source ? source : path)) g.watts = g.model.watts(g.inputs);
   const h = s.rectGate;
-  if (h) h.watts = h.model.watts(h.inputs);
+  if (h && (h.source ? source : path)) h.watts = h.model.watts(h.inputs);
 }
 
-function passiveWatts(s: Slots): void {
-  s.windingDc.watts = s.windingDc.model.watts(s.windingDc.inputs);
+function passiveWatts(s: Slots, path: boolean, source: boolean): void {
+  const dc = s.windingDc;
+  if (dc.source ? source : path) dc.watts = dc.model.watts(dc.inputs);
   const w = s.windingAc;
-  if (w) w.watts = w.model.watts(w.inputs);
-  s.core.watts = s.core.model.watts(s.core.inputs);
-  s.inputEsr.watts = s.inputEsr.model.watts(s.inputEsr.inputs);
-  s.outputEsr.watts = s.outputEsr.model.watts(s.outputEsr.inputs);
+  if (w && (w.source ? source : path)) w.watts = w.model.watts(w.inputs);
+  const k = s.core;
+  if (k.source ? source : path) k.watts = k.model.watts(k.inputs);
+  const ci = s.inputEsr;
+  if (ci.source ? source : path) ci.watts = ci.model.watts(ci.inputs);
+  const co = s.outputEsr;
+  if (co.source ? source : path) co.watts = co.model.watts(co.inputs);
   const r = s.sense;
-  if (r) r.watts = r.model.watts(r.inputs);
-  s.quiescent.watts = s.quiescent.model.watts(s.quiescent.inputs);
+  if (r && (r.source ? source : path)) r.watts = r.model.watts(r.inputs);
+  const q = s.quiescent;
+  if (q.source ? source : path) q.watts = q.model.watts(q.inputs);
 }

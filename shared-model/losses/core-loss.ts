@@ -5,7 +5,9 @@
  * flux B(t) = (L/(N·Ae)) · iL(t) whose straight segments last t_s and change by ΔB_s; ΔB is the
  * peak-to-peak flux of the period (one major loop). Flat segments (the DCM idle interval) add nothing.
  * For a CCM triangle rising for D·T this reduces to Pv = ki · ΔB^β · f^α · (D^(1−α) + D'^(1−α)).
- * Assumptions: Steinmetz constants at one temperature (no temperature dependence); no relaxation loss
+ * With a core-loss-vs-temperature curve: P = P(iGSE) · factor(T), T the inductor temperature (the factor
+ * scales the Steinmetz k; ferrite loss has a minimum near 80–100 °C, common practice).
+ * Assumptions: Steinmetz exponents at one temperature, k scaled by the curve's factor; no relaxation loss
  * after the DCM idle interval (i²GSE not modelled); no DC-bias dependence; L at the operating current.
  * Source: Venkatachalam et al., COMPEL 2002 (DOI 10.1109/CIPE.2002.1196712); docs/methods.md §7.
  */
@@ -21,6 +23,9 @@ export interface CoreLossInputs {
   fluxPerAmpT: number;
   /** One period of the inductor current. */
   segments: readonly Segment[];
+  /** Core loss at the inductor temperature over the Steinmetz loss (1 without a curve). */
+  temperatureFactor: number;
+  temperatureC: number;
 }
 
 /** Peak-to-peak flux density of the waveform, T. */
@@ -76,10 +81,12 @@ export const coreLoss: LossModel<CoreLossInputs> = {
   mechanism: 'core',
   heats: 'own',
   payer: 'source',
-  thermal: false,
+  thermal: true,
   drop: false,
-  formula: 'Ve · (1/T) · Σ ki · |ΔBs/ts|^α · ΔB^(β−α) · ts  (iGSE)',
-  watts: (x) => nonNegativeFinite(x.veM3 * igseLossDensity(x.kiWPerM3, x.alpha, x.beta, x.fluxPerAmpT, x.segments)),
+  formula: 'factor(T) · Ve · (1/T) · Σ ki · |ΔBs/ts|^α · ΔB^(β−α) · ts  (iGSE)',
+  watts: (x) => nonNegativeFinite(x.temperatureFactor * x.veM3 * igseLossDensity(x.kiWPerM3, x.alpha, x.beta, x.fluxPerAmpT, x.segments)),
+  // ∂P/∂factor: the loss at the Steinmetz coefficients (ledger/kernel-slopes.ts multiplies by dfactor/dT).
+  sensitivity: (x) => nonNegativeFinite(x.veM3 * igseLossDensity(x.kiWPerM3, x.alpha, x.beta, x.fluxPerAmpT, x.segments)),
   describe: (x) => {
     const period = periodOf(x.segments);
     return [
@@ -91,6 +98,8 @@ export const coreLoss: LossModel<CoreLossInputs> = {
       input('β', x.beta, ''),
       input('Pv', igseLossDensity(x.kiWPerM3, x.alpha, x.beta, x.fluxPerAmpT, x.segments), 'W/m³'),
       input('Ve', x.veM3, 'm³'),
+      input('factor(T)', x.temperatureFactor, ''),
+      input('T', x.temperatureC, '°C'),
     ];
   },
 };

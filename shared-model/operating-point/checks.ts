@@ -20,6 +20,7 @@ import type { Circuit } from './circuit.ts';
 import type { DutyLimit } from './duty.ts';
 import type { OperatingPoint } from './types.ts';
 import { loadModelWarnings } from './load.ts';
+import { curvatureWarnings } from './curvature.ts';
 
 const f4 = (x: number) => (Number.isFinite(x) ? Number(x.toPrecision(4)).toString() : String(x));
 
@@ -30,7 +31,7 @@ export interface CheckedPoint {
   dutyCycle: number;
   mode: OperatingPoint['mode'];
   idleFraction: number;
-  inductor: { averageA: number; peakA: number; valleyA: number };
+  inductor: { averageA: number; rmsA: number; peakA: number; valleyA: number };
   stats: { switch: { peakA: number }; rectifier: { peakA: number; minA: number; averageA: number } };
   stress: { switchV: number; rectifierV: number };
   warnings: Warning[];
@@ -148,5 +149,6 @@ export function addWarnings(ctx: CheckContext, op: CheckedPoint): void {
       message: `Inductor peak ${f4(op.inductor.peakA)} A exceeds its saturation current ${f4(isatAmb)} A at the ${f4(op.conditions.ambientC)} °C ambient (it falls further when hot).` });
   }
   loadModelWarnings(c, out);
+  curvatureWarnings(c, op, out);
   ratingWarnings(design, op, out);
 }

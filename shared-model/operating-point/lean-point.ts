@@ -29,7 +29,8 @@ export interface PointView {
   voutV: number;
   inductanceH: number;
   inductor: { rmsA: number; acRmsA: number };
-  waveforms: { inductor: { segments: readonly Segment[] } };
+  /** The capacitor banks' currents as straight segments (read only where a capacitor has an ESR(f) table). */
+  waveforms: { inductor: { segments: readonly Segment[] }; inputCapacitor: { segments: readonly Segment[] }; outputCapacitor: { segments: readonly Segment[] } };
   stats: {
     switch: { rmsA: number };
     rectifier: { rmsA: number; averageA: number };
@@ -49,7 +50,7 @@ export interface PointSummary extends PointView {
   conditions: Conditions;
   outputPowerW: number;
   inductor: { rmsA: number; acRmsA: number; averageA: number; peakA: number; minA: number; rippleA: number; valleyA: number };
-  waveforms: { inductor: { segments: readonly Segment[] }; inputA: number };
+  waveforms: { inductor: { segments: readonly Segment[] }; inputCapacitor: { segments: readonly Segment[] }; outputCapacitor: { segments: readonly Segment[] }; inputA: number };
   stats: {
     switch: { rmsA: number; peakA: number };
     rectifier: { rmsA: number; averageA: number; peakA: number; minA: number };
@@ -64,7 +65,7 @@ export interface PointSummary extends PointView {
 export interface LeanPoint extends PointSummary {
   inductor: IntervalStats & { rippleA: number; valleyA: number };
   stats: { switch: IntervalStats; rectifier: IntervalStats; inputCapacitor: IntervalStats; outputCapacitor: IntervalStats; sense: IntervalStats };
-  waveforms: { inductor: { segments: Segment[] }; inputA: number };
+  waveforms: { inductor: { segments: Segment[] }; inputCapacitor: { segments: Segment[] }; outputCapacitor: { segments: Segment[] }; inputA: number };
   /** Segment records reused for the inductor waveform (on, off, idle). */
   pool: Segment[];
   /** The inductor's segment list for each set of non-empty intervals (bit 0 on, 1 off, 2 idle). */
@@ -74,6 +75,21 @@ export interface LeanPoint extends PointSummary {
 }
 
 const edge = (): SwitchingEdge => ({ currentA: 0, voltageV: 0, hard: false });
+const threeSegments = (): Segment[] => [
+  { durationS: 0, i0A: 0, i1A: 0 },
+  { durationS: 0, i0A: 0, i1A: 0 },
+  { durationS: 0, i0A: 0, i1A: 0 },
+];
+
+/** Writes the intervals v (branch-table.ts) into three reused segments (on, off, idle; empty ones have duration 0). */
+function putIntervals(segments: Segment[], v: Float64Array): void {
+  let g = segments[0]!;
+  g.durationS = v[0]!; g.i0A = v[3]!; g.i1A = v[4]!;
+  g = segments[1]!;
+  g.durationS = v[1]!; g.i0A = v[5]!; g.i1A = v[6]!;
+  g = segments[2]!;
+  g.durationS = v[2]!; g.i0A = v[7]!; g.i1A = v[7]!;
+}
 
 export function newLeanPoint(): LeanPoint {
   const pool: Segment[] = [
@@ -88,7 +104,7 @@ export function newLeanPoint(): LeanPoint {
     periodS: 0, dutyCycle: 0, rectifierFraction: 0, idleFraction: 0, mode: 'CCM', voutV: 0, inductanceH: 0, outputPowerW: 0,
     // A plain literal (a spread here left the record in dictionary mode: slow, and every store allocated).
     inductor: { rmsA: 0, acRmsA: 0, averageA: 0, peakA: 0, minA: 0, rippleSqA2: 0, rippleA: 0, valleyA: 0 },
-    waveforms: { inductor: { segments: segmentSets[0]! }, inputA: 0 },
+    waveforms: { inductor: { segments: segmentSets[0]! }, inputCapacitor: { segments: threeSegments() }, outputCapacitor: { segments: threeSegments() }, inputA: 0 },
     stats: {
       switch: newIntervalStats(),
       rectifier: newIntervalStats(),
@@ -147,8 +163,10 @@ export function leanPointAt(c: Circuit, s: Shape, p: LeanPoint, asRecord = false
   intervalStats(p.stats.rectifier, v, r);
   branchIntervals(c, s, INPUT_CAPACITOR, v);
   intervalStats(p.stats.inputCapacitor, v, r);
+  putIntervals(p.waveforms.inputCapacitor.segments, v);
   branchIntervals(c, s, OUTPUT_CAPACITOR, v);
   intervalStats(p.stats.outputCapacitor, v, r);
+  putIntervals(p.waveforms.outputCapacitor.segments, v);
   branchIntervals(c, s, SENSE, v);
   intervalStats(p.stats.sense, v, r);
   const vo = s.vo;

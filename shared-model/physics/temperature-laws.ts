@@ -11,13 +11,18 @@
  * - Copper (IEC 60028):        R(T) = R20 · (1 + 0.00393 · (T − 20))
  * - Diode threshold:           VF0(T) = VF0(25 °C) + dVF0/dT · (T − 25)
  * - Reverse leakage:           IR(T) = IR(T0) · 2^((T − T0)/ΔTdouble)
- * - Resistor, capacitor ESR:   R(T) = R25 · (1 + tc · (T − 25))
+ * - Resistor, capacitor ESR:   R(T) = R25 · (1 + tc · (T − 25)); with an ESR(T) table ESR(T) = ESR25 · ratio(T)
+ * - Core loss (with a curve):  Pcore(T) = Pcore(Steinmetz) · factor(T)   (curves/temperature-curves.ts)
  * Assumptions: part parameters without a stated reference temperature are taken at 25 °C; the linear
  * laws are clamped at 0 so a resistance or forward drop never turns negative far outside their range.
  * Sources: docs/methods.md §5 (RDS(on) laws, common practice; physics in Sze & Ng, Baliga [memory]), §8 (IEC
  * 60028 copper, α20 0.00393/K [memory for α]), §6 (VF0 drift and leakage doubling, common practice).
  */
-import type { Capacitor, Diode, Mosfet, RdsPoint, RdsTemperatureLaw, Resistor } from '../design/parts.ts';
+import type { Capacitor, CoreLossTemperaturePoint, Diode, EsrTemperaturePoint, Inductor, Mosfet, RdsPoint, RdsTemperatureLaw, Resistor } from '../design/parts.ts';
+import { pointCurveAt, temperatureCurveAt } from '../curves/temperature-curves.ts';
+
+const tjOf = (p: RdsPoint): number => p.tjC;
+const rdsRatioOf = (p: RdsPoint): number => p.ratio;
 
 const KELVIN_OFFSET = 273.15;
 const REFERENCE_C = 25;
@@ -66,14 +71,7 @@ export function twoPointExponent(law: TwoPointLaw): number {
 
 /** RDS(on)(T)/RDS(on)(25 °C) from a normalised curve: straight lines between points, ends held. */
 export function rdsRatioAt(points: readonly RdsPoint[], tC: number): number {
-  const n = points.length;
-  if (tC <= points[0]!.tjC) return points[0]!.ratio;
-  if (tC >= points[n - 1]!.tjC) return points[n - 1]!.ratio;
-  let i = 0;
-  while (points[i + 1]!.tjC < tC) i++;
-  const a = points[i]!;
-  const b = points[i + 1]!;
-  return a.ratio + ((tC - a.tjC) / (b.tjC - a.tjC)) * (b.ratio - a.ratio);
+  return pointCurveAt(points, tjOf, rdsRatioOf, tC);
 }
 
 /** Copper winding resistance at tC from its value at 20 °C (IEC 60028), Ω. */
@@ -101,5 +99,22 @@ export function resistorAt(resistor: Resistor, tC: number): number {
 
 /** ESR of one capacitor at tC (ESR stated at 25 °C and fs), Ω. */
 export function esrAt(capacitor: Capacitor, tC: number): number {
-  return linearClamped(capacitor.esrOhm, capacitor.esrTempCoPerK, tC);
+  return capacitor.esrOhm * esrRatioAt(capacitor, tC);
+}
+
+const esrRatioOf = (p: EsrTemperaturePoint): number => p.ratio;
+
+/** ESR(tC)/ESR(25 °C) of one capacitor: its ESR(T) table when given, else 1 + c·(T − 25 °C) floored at 0. */
+export function esrRatioAt(capacitor: Capacitor, tC: number): number {
+  const curve = capacitor.esrTemperatureCurve;
+  if (curve) return temperatureCurveAt(curve.points, esrRatioOf, tC);
+  return linearClamped(1, capacitor.esrTempCoPerK, tC);
+}
+
+const coreFactorOf = (p: CoreLossTemperaturePoint): number => p.factor;
+
+/** Core loss at tC over the Steinmetz loss: the inductor's core-loss-vs-temperature curve, 1 without one. */
+export function coreLossFactorAt(inductor: Inductor, tC: number): number {
+  const curve = inductor.coreLossTemperatureCurve;
+  return curve ? temperatureCurveAt(curve.points, coreFactorOf, tC) : 1;
 }

@@ -13,10 +13,15 @@
  * - Diode threshold:    dVF0/dT = dVF0/dT of the part             (0 where VF0 is clamped at 0)
  * - Reverse leakage:    dIR/dT = IR(T) · ln 2 / ΔTdouble          (0 where the exponent is capped)
  * - Resistor, ESR:      dR/dT = R25 · tc                          (0 where clamped at 0)
+ *   ESR(T) table, core-loss factor table: the segment's slope as for the RDS(on) table
  * Assumptions and sources: those of temperature-laws.ts (docs/methods.md §5, §6, §8); the derivatives are
  * plain calculus of those laws.
  */
-import type { Capacitor, Diode, Mosfet, RdsPoint, Resistor } from '../design/parts.ts';
+import type { Capacitor, CoreLossTemperaturePoint, Diode, EsrTemperaturePoint, Inductor, Mosfet, RdsPoint, Resistor } from '../design/parts.ts';
+import { pointCurveSlopeAt, temperatureCurveSlopeAt } from '../curves/temperature-curves.ts';
+
+const tjOf = (p: RdsPoint): number => p.tjC;
+const rdsRatioOf = (p: RdsPoint): number => p.ratio;
 import { COPPER_ALPHA20_PER_K, leakageAt, twoPointAlpha, twoPointExponent } from './temperature-laws.ts';
 
 const KELVIN_OFFSET = 273.15;
@@ -49,13 +54,7 @@ export function rdsOnSlopeAt(mosfet: Mosfet, tC: number): number {
 
 /** d(ratio)/dT of a normalised curve (see header), 1/K. */
 export function rdsRatioSlopeAt(points: readonly RdsPoint[], tC: number): number {
-  const n = points.length;
-  if (tC < points[0]!.tjC || tC >= points[n - 1]!.tjC) return 0;
-  let i = 0;
-  while (points[i + 1]!.tjC <= tC) i++;
-  const a = points[i]!;
-  const b = points[i + 1]!;
-  return (b.ratio - a.ratio) / (b.tjC - a.tjC);
+  return pointCurveSlopeAt(points, tjOf, rdsRatioOf, tC);
 }
 
 /** dR/dT of a copper winding of r20Ohm at 20 °C (IEC 60028), Ω/K. */
@@ -81,5 +80,22 @@ export function resistorSlopeAt(resistor: Resistor, tC: number): number {
 
 /** dESR/dT of one capacitor at tC, Ω/K. */
 export function esrSlopeAt(capacitor: Capacitor, tC: number): number {
-  return linearSlope(capacitor.esrOhm, capacitor.esrTempCoPerK, tC);
+  return capacitor.esrOhm * esrRatioSlopeAt(capacitor, tC);
+}
+
+const esrRatioOf = (p: EsrTemperaturePoint): number => p.ratio;
+
+/** d(ESR(T)/ESR(25 °C))/dT of one capacitor, 1/K: its ESR(T) table's segment slope, or c where not clamped. */
+export function esrRatioSlopeAt(capacitor: Capacitor, tC: number): number {
+  const curve = capacitor.esrTemperatureCurve;
+  if (curve) return temperatureCurveSlopeAt(curve.points, esrRatioOf, tC);
+  return linearSlope(1, capacitor.esrTempCoPerK, tC);
+}
+
+const coreFactorOf = (p: CoreLossTemperaturePoint): number => p.factor;
+
+/** d(core-loss factor)/dT of the inductor's core-loss-vs-temperature curve, 1/K (0 without one). */
+export function coreLossFactorSlopeAt(inductor: Inductor, tC: number): number {
+  const curve = inductor.coreLossTemperatureCurve;
+  return curve ? temperatureCurveSlopeAt(curve.points, coreFactorOf, tC) : 0;
 }

@@ -25,6 +25,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
       'Steady state only: no control-loop dynamics, start-up or load transients.',
       'Switching edges are instantaneous in the current waveforms (transition times do not enter the RMS currents).',
       'Capacitor ESL is ignored in the output ripple.',
+      'Currents are straight lines within each interval: the loop resistances bend them (curvature index η = (R_on·t_on + R_off·t_off)/L · ΔI / I_L,rms); past η = 0.025 a warning gives the likely error, about 0.2·η (measured against an exact time-domain simulation).',
       'With an L(I) curve from the datasheet, ripple and peak follow Faraday\'s law λ(peak) − λ(valley) = v · t with λ = ∫L di; each interval is drawn as one straight segment between those end points (its curvature is not drawn, so the RMS is that of the chord).',
     ],
   },
@@ -44,7 +45,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
       'The node ripple divides between the bank\'s ESR and the load (the bank an AC short over a period): I_C = k · (i_node − Io), ' +
       'k = R/(R + ESR); the load carries the rest; the node sees k · ESR. R follows the load along a sweep.',
     source: 'Current divider (Kirchhoff\'s laws); WattLedger methods §22, checked against an exact time-domain simulation.',
-    limits: ['The capacitor\'s own voltage ripple drives no load current: R·C of at least 10 switching periods (a warning says when not).'],
+    limits: ['The capacitor\'s own voltage ripple drives no load current: R·C of at least 40 switching periods (a warning says when not).'],
   },
   {
     id: 'load-constant-power',
@@ -54,7 +55,7 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
       'k = 1/(1 − ESR/R) > 1, so the bank carries more ripple than with a current sink; the node sees k · ESR.',
     source: 'First-order expansion of i = P/v (common practice); WattLedger methods §22, checked against an exact time-domain simulation of the linearised load.',
     limits: [
-      'Valid while the bank\'s share stays moderate (k ≤ 1.5, ESR ≤ R/3) and R·C is at least 10 switching periods; a warning says when not.',
+      'Valid while the bank\'s share stays moderate (k ≤ 1.5, ESR ≤ R/3) and R·C is at least 40 switching periods; a warning says when not.',
       'Steady state only: a constant-power load lowers the damping of the output filter; stability is the control loop\'s task, not modelled here.',
     ],
   },
@@ -176,15 +177,15 @@ export const METHOD_CATALOGUE: readonly MethodEntry[] = [
     title: 'Inductor core (iGSE)',
     formula:
       'Pv = (1/T) · Σ ki · |ΔB_s/t_s|^α · ΔB^(β−α) · t_s over the straight flux segments, ki = k/((2π)^(α−1) · 2^(β−α) · ∫|cos θ|^α dθ); P = Pv · Ve.',
-    source: 'Venkatachalam, Sullivan, Abdallah & Tacca, COMPEL 2002, DOI 10.1109/CIPE.2002.1196712; WattLedger methods §7.',
-    limits: ['Steinmetz constants at one temperature; no DC-bias dependence; no relaxation loss after the DCM idle interval.'],
+    source: 'Venkatachalam, Sullivan, Abdallah & Tacca, COMPEL 2002, DOI 10.1109/CIPE.2002.1196712; WattLedger methods §7; the temperature curve §26.',
+    limits: ['Steinmetz exponents at one temperature (a core-loss-vs-temperature curve, when given, multiplies the loss at the inductor temperature); no DC-bias dependence; no relaxation loss after the DCM idle interval.'],
   },
   {
     id: 'esr',
     title: 'Capacitor ESR',
-    formula: 'P = ESR(T) · Irms² / n for n equal capacitors sharing the bank current.',
-    source: 'WattLedger methods §9 and §1 (common practice).',
-    limits: ['ESR at the switching frequency applies to the whole ripple spectrum; the capacitors share the current equally.'],
+    formula: 'P = ESR(T) · Irms² / n for n equal capacitors sharing the bank current; with an ESR(f) table ESR = Σ Ih²·ESR(h·fs) / Irms² over the harmonics of the bank current.',
+    source: 'WattLedger methods §9, §1 (common practice) and §26 (harmonics).',
+    limits: ['Without an ESR(f) table the ESR at the switching frequency applies to the whole ripple spectrum; ESR(f, T) = ESR(f)·ratio(T); the capacitors share the current equally.'],
   },
   {
     id: 'sense',

@@ -14,11 +14,13 @@
  * Chunkable for a pool of workers: runMonteCarloSamples evaluates samples [from, to) (drawing the one
  * stream from its start, so a sample's variation never depends on the split) and summarizeMonteCarlo puts
  * chunks together; monteCarlo is both on one thread, and a pool's result equals it exactly.
- * Each sample is a new design, evaluated from scratch; only samples whose parts are all nominal (every
- * part spread zero) reuse the nominal design's evaluator set-up (sweep/evaluator.ts; same results).
+ * The samples run on the lean path with one set-up (sample-evaluator.ts: the parts varied in place in a
+ * copy of the design; the same numbers as evaluate on the varied design). A caller's own `evaluator` (a
+ * stand-in, the multiphase evaluator) is called with a new varied design for each sample instead.
  */
 import type { Design, Role } from '../design/schema.ts';
 import type { Evaluation, PartTemperature } from '../ledger/types.ts';
+import type { Warning } from '../warnings.ts';
 import type { Conditions } from '../operating-point/types.ts';
 import { conditionsFor, defaultEvaluator, evaluatorFor } from '../sweep/evaluator.ts';
 import type { PointEvaluator, OptionProblem } from '../sweep/types.ts';
@@ -28,6 +30,7 @@ import type { SampleHistogram, SampleSummary } from './statistics.ts';
 import { sampleHistogram, summarizeSamples } from './statistics.ts';
 import type { ResolvedTolerances, Tolerances, Variation } from './variation.ts';
 import { applyVariation, checkTolerances, partsNominal, resolveTolerances, varyConditions } from './variation.ts';
+import { sampleEvaluator } from './sample-evaluator.ts';
 
 export type MonteCarloDistribution = 'uniform' | 'normal';
 export const DEFAULT_MONTE_CARLO_SAMPLES = 2000;
@@ -187,17 +190,17 @@ export function runMonteCarloSamples(design: Design, options: MonteCarloOptions,
   const overTouch = new Array<number>(parts.length).fill(0);
   let notRegulating = 0;
   const rng = createRandom(options.seed);
+  const evaluateSample = samplesOf(design, base, options.evaluator ? { nominalEvaluator, evaluator } : null);
   for (let i = 0; i < end; i++) {
     const v = drawVariation(rng, tolerances, distribution, base, spreadConditions);
     if (i < start) continue;
     const k = i - start;
-    let e: Evaluation;
-    if (partsNominal(v)) e = nominalEvaluator(design, varyConditions(base, v));
-    else {
-      const applied = applyVariation(design, base, v);
-      e = evaluator(applied.design, applied.conditions);
-    }
+    const e = evaluateSample(v);
     efficiency[k] = e.efficiency;
+    let runaway = false;
+    for (let w = 0; w < e.warnings.length; w++) {
+      if (e.warnings[w].code === 'thermal-runaway') runaway = true;
+    }
     for (let w = 0; w < e.warnings.length; w++) {
       if (NOT_REGULATING.has(e.warnings[w].code)) {
         notRegulating += 1;
@@ -217,10 +220,39 @@ export function runMonteCarloSamples(design: Design, options: MonteCarloOptions,
     }
     for (const h of e.hazards) {
       const j = parts.indexOf(h.part);
-      if (j >= 0 && h.exceeded) overTouch[j] += 1;
+      // As the full record's Hazard.exceeded (ledger/keep.ts): below the touch limit, or no steady state.
+      if (j >= 0 && (h.marginK < 0 || runaway)) overTouch[j] += 1;
     }
   }
   return { from: start, to: end, efficiency, temperaturesC: temps, overDerated, overLimit, overTouch, notRegulating };
+}
+
+/** What the sample loop reads of an evaluation (the full record and the lean one both carry it). */
+interface SampleResult {
+  efficiency: number;
+  warnings: readonly Warning[];
+  temperatures: readonly PartTemperature[];
+  hazards: readonly { part: Role; marginK: number }[];
+}
+
+/**
+ * Each sample's evaluation: the lean path with one set-up (sample-evaluator.ts), or the caller's own
+ * evaluator on a new varied design (nominal parts: the nominal evaluator).
+ */
+function samplesOf(
+  design: Design,
+  base: Conditions,
+  given: { nominalEvaluator: PointEvaluator; evaluator: PointEvaluator } | null,
+): (v: Variation) => SampleResult {
+  if (!given) {
+    const lean = sampleEvaluator(design);
+    return (v) => lean(v, varyConditions(base, v));
+  }
+  return (v) => {
+    if (partsNominal(v)) return given.nominalEvaluator(design, varyConditions(base, v));
+    const applied = applyVariation(design, base, v);
+    return given.evaluator(applied.design, applied.conditions);
+  };
 }
 
 /** Chunks covering samples 0 … n − 1 (in any order) put together into the Monte Carlo result. */

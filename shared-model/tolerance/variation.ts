@@ -132,24 +132,42 @@ export function varyConditions(conditions: Conditions, v: Variation): Conditions
 
 /** The design with a variation's part scales applied (a new object; the input is unchanged). */
 export function varyDesign(design: Design, v: Variation): Design {
+  const varied = ownPartsCopy(design);
+  varyPartsInto(varied.parts, design.parts, v);
+  return varied;
+}
+
+/**
+ * A copy of `design` with its own records of every part value a variation sets (switch, a MOSFET
+ * rectifier, inductor and its roll-off, both capacitor parts); everything else shared with `design`.
+ */
+export function ownPartsCopy(design: Design): Design {
   const p = design.parts;
-  const inductor = {
-    ...p.inductor,
-    inductanceH: p.inductor.inductanceH * v.inductanceScale,
-    dcr20Ohm: p.inductor.dcr20Ohm * v.dcrScale,
-    ...(p.inductor.rolloff ? { rolloff: { ...p.inductor.rolloff, inductanceH: p.inductor.rolloff.inductanceH * v.inductanceScale } } : {}),
-  };
-  const rectifier =
-    p.rectifier.kind === 'mosfet' ? { ...p.rectifier, rdsOn25Ohm: p.rectifier.rdsOn25Ohm * v.rectifierRdsOnScale } : p.rectifier;
+  const inductor = { ...p.inductor, ...(p.inductor.rolloff ? { rolloff: { ...p.inductor.rolloff } } : {}) };
   const parts = {
     ...p,
-    switch: { ...p.switch, rdsOn25Ohm: p.switch.rdsOn25Ohm * v.switchRdsOnScale },
-    rectifier,
+    switch: { ...p.switch },
+    rectifier: p.rectifier.kind === 'mosfet' ? { ...p.rectifier } : p.rectifier,
     inductor,
-    inputCapacitor: { ...p.inputCapacitor, part: { ...p.inputCapacitor.part, esrOhm: p.inputCapacitor.part.esrOhm * v.inputEsrScale } },
-    outputCapacitor: { ...p.outputCapacitor, part: { ...p.outputCapacitor.part, esrOhm: p.outputCapacitor.part.esrOhm * v.outputEsrScale } },
+    inputCapacitor: { ...p.inputCapacitor, part: { ...p.inputCapacitor.part } },
+    outputCapacitor: { ...p.outputCapacitor, part: { ...p.outputCapacitor.part } },
   };
   return { ...design, parts };
+}
+
+/**
+ * Writes a variation's part values, scaled from `nominal`, into `into` — the parts of an ownPartsCopy of
+ * the design `nominal` belongs to (in place: a tolerance analysis varies one copy sample after sample).
+ */
+export function varyPartsInto(into: Design['parts'], nominal: Design['parts'], v: Variation): void {
+  const n = nominal;
+  into.inductor.inductanceH = n.inductor.inductanceH * v.inductanceScale;
+  into.inductor.dcr20Ohm = n.inductor.dcr20Ohm * v.dcrScale;
+  if (into.inductor.rolloff && n.inductor.rolloff) into.inductor.rolloff.inductanceH = n.inductor.rolloff.inductanceH * v.inductanceScale;
+  if (into.rectifier.kind === 'mosfet' && n.rectifier.kind === 'mosfet') into.rectifier.rdsOn25Ohm = n.rectifier.rdsOn25Ohm * v.rectifierRdsOnScale;
+  into.switch.rdsOn25Ohm = n.switch.rdsOn25Ohm * v.switchRdsOnScale;
+  into.inputCapacitor.part.esrOhm = n.inputCapacitor.part.esrOhm * v.inputEsrScale;
+  into.outputCapacitor.part.esrOhm = n.outputCapacitor.part.esrOhm * v.outputEsrScale;
 }
 
 /** A short label of a variation, e.g. "Vin 9 V · ambient 50 °C · RDS(on) +20 % · … · fs −10 %". */

@@ -6,8 +6,9 @@
  * over) a temperature limit, and each part's hottest corner.
  * Caution: corners bound a result only where it changes monotonically with each tolerance; use the Monte
  * Carlo for the interior.
- * Corners that differ only in Vin, ambient and fs share one varied design and its evaluator set-up
- * (sweep/evaluator.ts), so 128 corners need 16 set-ups; the results are those of evaluating each corner alone.
+ * The corners run on the lean path with one set-up, the parts varied in place in one copy of the design
+ * (sample-evaluator.ts); the results are those of evaluating each corner alone. With a caller's own
+ * evaluator, corners that differ only in Vin, ambient and fs share one varied design (16 for 128 corners).
  */
 import type { Design, Role } from '../design/schema.ts';
 import type { Evaluation } from '../ledger/types.ts';
@@ -16,6 +17,7 @@ import { conditionsFor, evaluatorFor } from '../sweep/evaluator.ts';
 import type { PointEvaluator } from '../sweep/types.ts';
 import type { Tolerances, ResolvedTolerances, Variation } from './variation.ts';
 import { applyVariation, checkTolerances, describeVariation, nominalVariation, partsKey, resolveTolerances, varyConditions, varyDesign } from './variation.ts';
+import { sampleEvaluator } from './sample-evaluator.ts';
 
 export interface CornerTemperature {
   part: Role;
@@ -91,7 +93,10 @@ export function evaluateCorner(design: Design, base: Conditions, v: Variation, e
   return cornerRecord(v, evaluator(applied.design, applied.conditions));
 }
 
-function cornerRecord(v: Variation, e: Evaluation): ToleranceCorner {
+/** What a corner reads of an evaluation (the full record and the lean one both carry it). */
+type CornerSource = Pick<Evaluation, 'efficiency' | 'totalLoss' | 'converged' | 'temperatures' | 'warnings'>;
+
+function cornerRecord(v: Variation, e: CornerSource): ToleranceCorner {
   let worstMarginK = Infinity;
   let worstPart: Role | null = null;
   const temperatures = e.temperatures.map((t) => {
@@ -119,8 +124,10 @@ export function worstCase(design: Design, options: WorstCaseOptions = {}): Worst
   if (problems.length > 0) throw new RangeError(problems.map((p) => p.message).join(' '));
   const tolerances = resolveTolerances(design, options.tolerances);
   const base = conditionsFor(design, { ...options.conditions, loadA: options.loadA });
+  const lean = options.evaluator ? null : sampleEvaluator(design);
   const byParts = new Map<string, { design: Design; evaluate: PointEvaluator }>();
   const corner = (v: Variation): ToleranceCorner => {
+    if (lean) return cornerRecord(v, lean(v, varyConditions(base, v)));
     const key = partsKey(v);
     let entry = byParts.get(key);
     if (!entry) {

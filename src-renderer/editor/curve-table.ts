@@ -85,9 +85,11 @@ export function plotSeries(
   width: number,
   height: number,
   logY: boolean,
+  logX = false,
 ): { name: number | undefined; points: string }[] {
   const ty = (v: number) => (logY ? Math.log10(v) : v);
-  const usable = rows.filter((r) => Number.isFinite(r[x]) && Number.isFinite(r[y]) && (!logY || r[y]! > 0));
+  const tx = (v: number) => (logX ? Math.log10(v) : v);
+  const usable = rows.filter((r) => Number.isFinite(r[x]) && Number.isFinite(r[y]) && (!logY || r[y]! > 0) && (!logX || r[x]! > 0));
   const groups: CurveRow[][] = [];
   for (const r of usable) {
     const last = groups.at(-1);
@@ -95,7 +97,7 @@ export function plotSeries(
     else if (last) last.push(r);
     else groups.push([r]);
   }
-  const xs = usable.map((r) => r[x]!);
+  const xs = usable.map((r) => tx(r[x]!));
   const ys = usable.map((r) => ty(r[y]!));
   const [x0, x1] = [Math.min(...xs), Math.max(...xs)];
   const [y0, y1] = [Math.min(...ys), Math.max(...ys)];
@@ -105,6 +107,6 @@ export function plotSeries(
     .filter((g) => g.length >= 2)
     .map((g) => ({
       name: series === undefined ? undefined : g[0]![series],
-      points: g.map((r) => `${sx(r[x]!).toFixed(1)},${sy(ty(r[y]!)).toFixed(1)}`).join(' '),
+      points: g.map((r) => `${sx(tx(r[x]!)).toFixed(1)},${sy(ty(r[y]!)).toFixed(1)}`).join(' '),
     }));
 }

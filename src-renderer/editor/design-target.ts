@@ -2,11 +2,13 @@
  * The design document as an edit target: every set is one undo step (keystrokes merge per field); a
  * number being typed is previewed and enters the history on Enter, on leaving the field or after a pause.
  */
+import type { Warning } from '../../shared-model/index.ts';
 import type { DocumentStore } from '../state/document.svelte.ts';
-import { getAt } from '../state/paths.ts';
+import { getAt, pathKey } from '../state/paths.ts';
 import type { EditTarget } from './edit-target.ts';
 
-export function designTarget(doc: DocumentStore): EditTarget {
+/** `warnings`: the shown results' warnings (state/results.svelte.ts), read when a field asks. */
+export function designTarget(doc: DocumentStore, warnings: () => readonly Warning[] = () => []): EditTarget {
   return {
     idPrefix: 'design',
     get: (path) => getAt(doc.design, path),
@@ -16,5 +18,9 @@ export function designTarget(doc: DocumentStore): EditTarget {
     commit: () => doc.commitPreview(),
     problems: (path) => doc.shownAt(path).own,
     related: (path) => doc.shownAt(path).related,
+    cautions: (path) => {
+      const key = pathKey(path);
+      return warnings().filter((w) => w.path === key).map((w) => w.message);
+    },
   };
 }

@@ -22,6 +22,8 @@ export interface EditTarget {
   problems(path: Path): string[];
   /** Labels of fields whose problem concerns this field too (a rule relating two fields). */
   related?(path: Path): string[];
+  /** Warnings of the shown results about exactly this field (a curve read outside its table). */
+  cautions?(path: Path): string[];
 }
 
 export function fieldId(target: EditTarget, path: Path): string {

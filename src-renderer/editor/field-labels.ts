@@ -43,6 +43,12 @@ export function findSpec(fields: readonly FieldSpec[], keys: readonly (string | 
     if (field.key !== head) continue;
     if (rest.length === 0) return { label: field.label, unit: field.type === 'number' ? field.unit : null };
     if (field.type === 'group') return findSpec(field.fields, rest);
+    if (field.type === 'table' && typeof rest[0] === 'number') {
+      // One point of a curve table ("points[2].esrOhm"): the table, the point as numbered on screen, the column.
+      const column = rest.length === 2 ? field.columns.find((c) => c.key === rest[1]) : undefined;
+      if (rest.length === 1) return { label: `${field.label}, point ${rest[0] + 1}`, unit: null };
+      if (column) return { label: `${field.label}, point ${rest[0] + 1}, ${column.label}`, unit: column.unit };
+    }
     if (field.type === 'union') {
       for (const variant of field.variants) {
         const inner = findSpec(variant.fields, rest);

@@ -74,6 +74,8 @@ export interface TableSpec {
   maxRows: number;
   /** Plot the second column on a log scale (capacitance curves span decades). */
   logY?: boolean;
+  /** Plot the first column on a log scale (frequencies span decades). */
+  logX?: boolean;
   /**
    * A column whose value names the curve a row belongs to (a family of curves, e.g. VF(IF) at each Tj):
    * the preview draws one line per value, against the other two columns.

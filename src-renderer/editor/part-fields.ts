@@ -262,6 +262,27 @@ const inductor: FieldSpec[] = [
   num('aeM2', 'Core area Ae', 'm²'),
   num('veM3', 'Core volume Ve', 'm³'),
   coreLoss,
+  {
+    type: 'group',
+    key: 'coreLossTemperatureCurve',
+    label: 'Core loss against temperature from the datasheet',
+    fields: [
+      {
+        type: 'table',
+        key: 'points',
+        label: 'Core loss factor against temperature',
+        columns: [
+          { key: 'tC', label: 'Temperature', unit: '°C' },
+          { key: 'factor', label: 'Factor', unit: '' },
+        ],
+        minRows: CURVE_POINTS.min,
+        maxRows: CURVE_POINTS.max,
+        help: 'Temperature rising, factor above 0: the material\'s loss at each temperature over the loss the core-loss data above gives. The core loss is multiplied by the factor at the inductor temperature, inside the temperature solve; the end factors are held outside the table (the result warns).',
+      },
+    ],
+    // A starting curve of the usual ferrite shape (invented): minimum near 90 °C; paste the material's over it.
+    defaults: () => ({ points: [25, 60, 90, 120].map((tC, k) => ({ tC, factor: [1.8, 1.2, 1, 1.3][k]! })) }),
+  },
   acWinding,
   num('tMaxC', 'Maximum temperature', '°C'),
 ];
@@ -281,6 +302,56 @@ const capacitor: FieldSpec[] = [
   num('capacitanceF', 'Capacitance', 'F'),
   num('esrOhm', 'ESR at fs', 'Ω'),
   num('esrTempCoPerK', 'ESR change per kelvin', '/K'),
+  {
+    type: 'group',
+    key: 'esrFrequencyCurve',
+    label: 'ESR against frequency from the datasheet',
+    fields: [
+      {
+        type: 'table',
+        key: 'points',
+        label: 'ESR(f) at 25 °C',
+        columns: [
+          { key: 'frequencyHz', label: 'Frequency', unit: 'Hz' },
+          { key: 'esrOhm', label: 'ESR', unit: 'Ω' },
+        ],
+        minRows: CURVE_POINTS.min,
+        maxRows: CURVE_POINTS.max,
+        logX: true,
+        logY: true,
+        help: 'Frequency rising, ESR above 0 Ω. When given, each harmonic of the capacitor current meets the ESR at its own frequency and the single ESR above is not used for the loss; the end values are held outside the table (the result warns when the switching frequency lies outside it).',
+      },
+    ],
+    // A starting curve around the single ESR (invented): higher at low frequency, flat above fs; paste the datasheet's over it.
+    defaults: (part) => {
+      const esr = Number(part.esrOhm) || 0.01;
+      return { points: [1e3, 1e4, 1e5, 1e6, 1e7].map((frequencyHz, k) => ({ frequencyHz, esrOhm: esr * [4, 2, 1.2, 1, 1][k]! })) };
+    },
+  },
+  {
+    type: 'group',
+    key: 'esrTemperatureCurve',
+    label: 'ESR against temperature from the datasheet',
+    fields: [
+      {
+        type: 'table',
+        key: 'points',
+        label: 'ESR(T) / ESR(25 °C)',
+        columns: [
+          { key: 'tC', label: 'Temperature', unit: '°C' },
+          { key: 'ratio', label: 'Ratio', unit: '' },
+        ],
+        minRows: CURVE_POINTS.min,
+        maxRows: CURVE_POINTS.max,
+        help: 'Temperature rising, ratio above 0 (1 at 25 °C). When given it replaces the ESR change per kelvin; the end ratios are held outside the table (the result warns).',
+      },
+    ],
+    // A starting curve from the coefficient above (straight, floored at 0.1): edit or paste the datasheet's over it.
+    defaults: (part) => {
+      const c = Number(part.esrTempCoPerK) || 0;
+      return { points: [-40, 25, 105].map((tC) => ({ tC, ratio: Math.max(0.1, 1 + c * (tC - 25)) })) };
+    },
+  },
   num('rippleRatingA', 'Ripple current rating', 'A'),
   num('voltageRatingV', 'Voltage rating', 'V'),
   num('tMaxC', 'Maximum temperature', '°C'),

@@ -69,7 +69,10 @@ export function usePart(ws: Workspace, role: Role, choice: string): void {
   const cut = choice.indexOf('/');
   const library = ws.library.book(choice.slice(0, cut))?.library;
   const part = library?.parts.find((p) => p.id === choice.slice(cut + 1));
-  if (!library || !part) return;
+  if (!library || !part) {
+    ws.messages.error(`That part is not in any open part library (looked for “${choice}”).`);
+    return;
+  }
   const design = ws.doc.design;
   if (part.kind !== kindForRole(design, role)) {
     ws.messages.error(`${part.name} is a ${part.kind} and cannot be the ${ROLE_LABELS[role].toLowerCase()}.`);

@@ -3,6 +3,7 @@
  * previous results on screen; `stale` says so), at the load and input voltage the user picked (rated
  * load and nominal Vin unless chosen). The results area (results/) computes from this.
  */
+import type { Warning } from '../../shared-model/index.ts';
 import type { DocumentStore } from './document.svelte.ts';
 
 export class ResultsState {
@@ -13,6 +14,8 @@ export class ResultsState {
   vinV: number | null = $state(null);
   /** True while the draft is invalid: the results belong to the last valid design. */
   stale = $derived.by(() => !this.doc.valid);
+  /** The warnings of the shown evaluation (set by the results area), so a field can show those about itself. */
+  warnings: readonly Warning[] = $state.raw([]);
 
   constructor(doc: DocumentStore) {
     this.doc = doc;

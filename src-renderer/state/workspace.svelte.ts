@@ -10,12 +10,13 @@ import { suggestFileName, type Recovered } from './design-file.ts';
 import { DocumentStore, UNTITLED } from './document.svelte.ts';
 import { ImportSession } from '../import/import-session.svelte.ts';
 import { PartLibrary } from './library.svelte.ts';
+import { RankingRun } from '../ranking/ranking-run.svelte.ts';
 import { Messages } from './messages.svelte.ts';
 import { ResultsState } from './results.svelte.ts';
 import { ThemeState } from './theme.svelte.ts';
 import type { PartStash } from './topology-edits.ts';
 
-export type Screen = 'design' | 'library' | 'import' | 'bench' | 'report';
+export type Screen = 'design' | 'library' | 'ranking' | 'import' | 'bench' | 'report';
 
 export interface RecoveryOffer {
   recovered: Recovered;
@@ -33,6 +34,8 @@ export class Workspace {
   readonly library: PartLibrary;
   /** The spreadsheet import in progress; kept while the user visits other screens. */
   readonly partImport = new ImportSession();
+  /** The ranking view's choices and last ranking (kept across screens). */
+  readonly ranking = new RankingRun();
   readonly messages = new Messages();
   readonly theme = new ThemeState();
   screen: Screen = $state('design');

@@ -59,8 +59,8 @@ export class EngineClient {
   }
 }
 
-/** Starts the engine worker (a module worker bundled by Vite) and returns its client. */
-export function startEngineWorker(): EngineClient {
-  const worker = new Worker(new URL('./engine-worker.ts', import.meta.url), { type: 'module', name: 'wattledger-engine' });
+/** Starts an engine worker (a module worker bundled by Vite) and returns its client; `name` shows in the browser's tools. */
+export function startEngineWorker(name = 'wattledger-engine'): EngineClient {
+  const worker = new Worker(new URL('./engine-worker.ts', import.meta.url), { type: 'module', name });
   return new EngineClient(worker as unknown as WorkerPort);
 }

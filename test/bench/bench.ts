@@ -5,7 +5,7 @@
  *
  *   point-full-us, point-lean-us, sweep-landmarks-ms, monte-carlo-10k-ms   engine-figures.ts
  *   sweep-landmarks-small-young-ms, alloc-per-point-kb                    engine-figures.ts (extras)
- *   rank-10k-parts-s                                                      rank-figure.ts
+ *   rank-10k-parts-s, rank-10k-parts-one-core-s, rank-demo-library-ms      rank-figure.ts
  *   cli-evaluate-ms                                                       cli-figure.ts
  *   time-domain-ratio                                                     time-domain-figure.ts
  *   fit-30-points-4-params-ms (issue 12)                                  fit-figure.ts
@@ -22,7 +22,7 @@ import { cliFigure } from './cli-figure.ts';
 import { allocationFigure, monteCarloFigure, pointFigures, sweepFigures, sweepTimeMs } from './engine-figures.ts';
 import { fitFigure } from './fit-figure.ts';
 import { lineOf, machineFacts, writeFigures, type Figure } from './figures.ts';
-import { rankFigure } from './rank-figure.ts';
+import { rankFigures } from './rank-figure.ts';
 import { YOUNG_CHILD_FLAG } from './sweep-budget.ts';
 import { timeDomainFigure } from './time-domain-figure.ts';
 
@@ -51,7 +51,7 @@ if (wanted('monte-carlo-10k-ms')) add(monteCarloFigure(quick));
 if (wanted('alloc-per-point-kb')) add(await allocationFigure(quick));
 if (wanted('cli-evaluate-ms')) add(cliFigure(quick));
 if (wanted('time-domain-ratio')) add(timeDomainFigure(quick));
-if (wanted('rank-10k-parts-s')) add(rankFigure(quick));
+if (wanted('rank-10k-parts-s', 'rank-10k-parts-one-core-s', 'rank-demo-library-ms')) add(await rankFigures(quick));
 if (wanted('fit-30-points-4-params-ms')) {
   const f = await fitFigure(quick ? 5 : 15);
   add({

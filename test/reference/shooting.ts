@@ -20,13 +20,25 @@ export function propagate(sys: IntervalSystem, x: [number, number], t: number): 
   return [y[0], y[1]];
 }
 
-/** Time in (0, tMax] where iL falls to 0 in the rectifier interval, or -1 when it does not. */
+/** Grid steps over the rectifier interval when bracketing the first zero of iL. */
+const SCAN = 256;
+
+/** Time in (0, tMax] where iL first falls to 0 in the rectifier interval, or -1 when it does not. */
 function zeroCrossing(sys: IntervalSystem, x: [number, number], tMax: number): number {
-  if (propagate(sys, x, tMax)[0] > 0) return -1;
-  let lo = 0;
-  let hi = tMax;
-  let t = 0.5 * tMax;
-  for (let k = 0; k < 200 && hi - lo > 1e-17 * tMax; k++) {
+  // Bracket the first crossing on a grid of SCAN steps: over a long interval (pulse skipping at a low rate)
+  // the linear off-interval system rings (L with the output bank), so iL can cross zero and come back.
+  const step = expm(augmented3(sys), 3, tMax / SCAN);
+  let y: Float64Array = Float64Array.from([x[0], x[1], 1]);
+  let k = 0;
+  while (k < SCAN && y[0] > 0) {
+    y = applyTo(step, y, 3);
+    k += 1;
+  }
+  if (y[0] > 0) return -1;
+  let lo = ((k - 1) / SCAN) * tMax;
+  let hi = (k / SCAN) * tMax;
+  let t = 0.5 * (lo + hi);
+  for (let n = 0; n < 200 && hi - lo > 1e-17 * tMax; n++) {
     const y = propagate(sys, x, t);
     if (y[0] > 0) lo = t;
     else hi = t;
@@ -79,7 +91,10 @@ export function dcmPieces(s: Setup, vin1: number, vGuess: number): Piece[] | nul
   for (let k = 0; k < 60; k++) {
     const r1 = run(v1);
     if (!r1) return null;
-    if (Math.abs(r1.residual) <= 1e-14 * Math.abs(v1) || r1.residual === r0.residual) {
+    // 1e-14 of the voltage is the usual stop; a long idle interval (pulse skipping at a low rate) leaves a
+    // rounding floor of its own, so a secant step that no longer moves v (1e-13 of it) also stops.
+    const stalled = k > 0 && Math.abs(v1 - v0) <= 1e-13 * Math.abs(v1) && Math.abs(r1.residual) <= 1e-10 * Math.abs(v1);
+    if (Math.abs(r1.residual) <= 1e-14 * Math.abs(v1) || r1.residual === r0.residual || stalled) {
       return [
         { kind: 'on', duration: s.tOn, sys: on, x0: [0, v1] },
         { kind: 'off', duration: r1.t2, sys: off, x0: r1.x1 },

@@ -86,8 +86,8 @@ describe('iGSE on piecewise-linear flux', () => {
     ];
     const fluxPerAmp = 10e-6 / (10 * 20e-6); // L/(N·Ae) (docs/methods.md §7: ΔB = L·ΔI/(N·Ae))
     closeTo(fluxSwingT(fluxPerAmp, segs), fluxPerAmp * 1, 1e-15);
-    const w = coreLoss.watts({ kiWPerM3: ki, alpha: ALPHA, beta: BETA, veM3: 2e-6, fluxPerAmpT: fluxPerAmp, segments: segs });
+    const w = coreLoss.watts({ kiWPerM3: ki, alpha: ALPHA, beta: BETA, veM3: 2e-6, fluxPerAmpT: fluxPerAmp, segments: segs, temperatureFactor: 1, temperatureC: 25 });
     closeTo(w, 2e-6 * igseLossDensity(ki, ALPHA, BETA, fluxPerAmp, segs), 1e-12); // P = Pv·Ve (docs/methods.md §7)
-    expect(coreLoss.describe({ kiWPerM3: ki, alpha: ALPHA, beta: BETA, veM3: 2e-6, fluxPerAmpT: fluxPerAmp, segments: segs }).map((x) => x.name)).toContain('ΔB (peak to peak)');
+    expect(coreLoss.describe({ kiWPerM3: ki, alpha: ALPHA, beta: BETA, veM3: 2e-6, fluxPerAmpT: fluxPerAmp, segments: segs, temperatureFactor: 1, temperatureC: 25 }).map((x) => x.name)).toContain('ΔB (peak to peak)');
   });
 });

@@ -7,8 +7,8 @@ import { closeTo } from '../../helpers/close-to.ts';
 
 describe('capacitor ESR', () => {
   it('is ESR·Irms²/n for n equal capacitors sharing the bank current', () => {
-    closeTo(capacitorEsr.watts({ irmsA: 1.483009, esrOhm: 0.01, count: 1, temperatureC: 25 }), 1.483009 ** 2 * 0.01, 1e-12); // docs/methods.md §9 with ICin,rms 1.483009 A (§1)
-    closeTo(capacitorEsr.watts({ irmsA: 1.483009, esrOhm: 0.01, count: 2, temperatureC: 25 }), 2 * 0.01 * (1.483009 / 2) ** 2, 1e-12); // two parts, each (I/2)²·ESR
+    closeTo(capacitorEsr.watts({ irmsA: 1.483009, esrOhm: 0.01, esr25Ohm: 0.01, count: 1, temperatureC: 25 }), 1.483009 ** 2 * 0.01, 1e-12); // docs/methods.md §9 with ICin,rms 1.483009 A (§1)
+    closeTo(capacitorEsr.watts({ irmsA: 1.483009, esrOhm: 0.01, esr25Ohm: 0.01, count: 2, temperatureC: 25 }), 2 * 0.01 * (1.483009 / 2) ** 2, 1e-12); // two parts, each (I/2)²·ESR
   });
 });
 
@@ -39,6 +39,6 @@ describe('the loss-model shape', () => {
     expect(nonNegativeFinite(Number.POSITIVE_INFINITY)).toBe(0);
     expect(nonNegativeFinite(-1)).toBe(0);
     expect(safeRatio(1, 0)).toBe(0);
-    expect(capacitorEsr.watts({ irmsA: 1, esrOhm: 0.01, count: 0, temperatureC: 25 })).toBe(0);
+    expect(capacitorEsr.watts({ irmsA: 1, esrOhm: 0.01, esr25Ohm: 0.01, count: 0, temperatureC: 25 })).toBe(0);
   });
 });

@@ -137,6 +137,19 @@ describe('the parts of the lean path', () => {
     }
   });
 
+  it('slotWatts(path only) leaves exactly the source-paid slots for the completion pass', () => {
+    for (const d of [...DEMO_DESIGNS.map((x) => demo(x.id)), ...edgeDesigns().map((e) => e.design)]) {
+      const s = ledgerContext(d).slots;
+      for (const slot of s.all) slot.watts = NaN;
+      slotWatts(s, true, false);
+      const pathSet = s.all.filter((slot) => slot !== s.driver && !Number.isNaN(slot.watts));
+      expect(pathSet.every((slot) => !slot.source)).toBe(true); // the duty balance must see every path loss (slots.ts): a source slot here would be computed twice
+      expect(s.all.filter((slot) => !slot.source).every((slot) => pathSet.includes(slot))).toBe(true); // a path slot left out would give the duty balance a stale loss
+      slotWatts(s, false, true);
+      expect(s.all.filter((slot) => slot !== s.driver && Number.isNaN(slot.watts))).toEqual([]); // the two passes together cover the ledger (NaN: a slot skipped by both)
+    }
+  });
+
   it('dutyLimitOf gives the limit of solveVoltSecond without solving for the duty', () => {
     fc.assert(
       fc.property(arbitraryDesign, fc.double({ min: 0.002, max: 3, noNaN: true }), fc.double({ min: 0.3, max: 1.6, noNaN: true }), (d0, lf, vf) => {

@@ -85,3 +85,16 @@ describe('plotSeries', () => {
     ]);
   });
 });
+
+describe('plotSeries on log-log axes (an ESR(f) table spans decades)', () => {
+  it('spaces decades evenly on both axes and leaves out points at or below zero', () => {
+    const rows = [
+      { frequencyHz: 1e3, esrOhm: 0.1 },
+      { frequencyHz: 1e4, esrOhm: 0.01 },
+      { frequencyHz: 1e5, esrOhm: 0.01 },
+      { frequencyHz: 0, esrOhm: 0.05 },
+    ];
+    // log10 x 3…5 over 100, log10 y −2…−1 over 50 (top = highest ESR): one decade = 50 across, 50 down (hand).
+    expect(plotSeries(rows, 'frequencyHz', 'esrOhm', undefined, 100, 50, true, true)).toEqual([{ name: undefined, points: '0.0,0.0 50.0,50.0 100.0,50.0' }]);
+  });
+});
