@@ -1,9 +1,11 @@
 /**
  * Browser mode (no Electron runtime): open through a file input, save and export as downloads,
- * recovery snapshots in localStorage, the unsaved marker in the tab title.
+ * recovery snapshots in localStorage, the unsaved marker in the tab title, and the names of the files
+ * opened or downloaded (recent-names.ts; what browser mode can and cannot do: shell/BrowserModeNote).
  */
 import type { ExportRequest, OpenedFile, SaveOutcome } from '../../shared-model/index.ts';
 import type { FileAccess, RecoverySnapshot } from './file-access.ts';
+import { recordRecentName, type RecentName } from './recent-names.ts';
 
 export const RECOVERY_KEY = 'wattledger.recovery.v1';
 
@@ -49,11 +51,17 @@ function storage(): Storage | null {
   }
 }
 
+/** Notes a file's name in browser mode's recent list (shell/BrowserModeNote.svelte). */
+function remember(name: string, action: RecentName['action'], kind: RecentName['kind']): void {
+  recordRecentName(storage(), { name, action, kind, at: new Date().toISOString() });
+}
+
 export function createBrowserFileAccess(): FileAccess {
   return {
     kind: 'browser',
     async open() {
       const file = await pickFile();
+      if (file) remember(file.name, 'opened', 'design');
       return file ? readFile(file) : null;
     },
     async openSpreadsheet() {
@@ -61,10 +69,12 @@ export function createBrowserFileAccess(): FileAccess {
       return file ? readFile(file) : null;
     },
     async save(request) {
+      remember(request.suggestedName, 'downloaded', 'design');
       return download(request.suggestedName, new Blob([request.text], { type: 'application/json' }));
     },
     async openLibrary() {
       const file = await pickFile();
+      if (file) remember(file.name, 'opened', 'library');
       return file ? readFile(file) : null;
     },
     async openRecentLibrary(path) {
@@ -74,6 +84,7 @@ export function createBrowserFileAccess(): FileAccess {
       return [];
     },
     async saveLibrary(request) {
+      remember(request.suggestedName, 'downloaded', 'library');
       return download(request.suggestedName, new Blob([request.text], { type: 'application/json' }));
     },
     async exportFile(request) {

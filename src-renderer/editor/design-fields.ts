@@ -34,7 +34,7 @@ export const SPEC_FIELDS: FieldSpec[] = [
   num('ratedLoadA', SPEC_LABELS.ratedLoadA, 'A'),
   num('switchingFrequencyHz', SPEC_LABELS.switchingFrequencyHz, 'Hz'),
   num('ambientC', SPEC_LABELS.ambientC, '°C'),
-  num('maxDuty', SPEC_LABELS.maxDuty, '', { help: 'A fraction below 1 ("0.9" or "90 %").' }),
+  num('maxDuty', SPEC_LABELS.maxDuty, '%', { help: 'In percent: "90" or "90 %".' }),
 ];
 
 export const LOAD_KIND_CHOICE: ChoiceSpec = {
@@ -53,13 +53,13 @@ export const LOAD_KIND_HELP =
   'Sets how the output ripple current divides between the output capacitors and the load: a resistor takes a share, a constant-power load pushes more into the capacitors.';
 
 export const TARGET_FIELDS: FieldSpec[] = [
-  num('efficiencyAtRated', TARGET_LABELS.efficiencyAtRated, '', { optional: true, help: 'Checked at nominal input and rated load (Results → Sizing and checks); the Monte Carlo counts the samples that meet it.' }),
-  num('efficiencyAtLightLoad', TARGET_LABELS.efficiencyAtLightLoad, '', {
+  num('efficiencyAtRated', TARGET_LABELS.efficiencyAtRated, '%', { optional: true, help: 'Checked at nominal input and rated load (Results → Sizing and checks); the Monte Carlo counts the samples that meet it.' }),
+  num('efficiencyAtLightLoad', TARGET_LABELS.efficiencyAtLightLoad, '%', {
     optional: true,
     help: 'Checked at the lightest loaded row of the mission profile, else at 10 % of rated load and nominal input (Results → Sizing and checks).',
   }),
   num('outputRippleV', TARGET_LABELS.outputRippleV, 'V', { optional: true, help: 'Sizes the output capacitors and is checked at every input-voltage corner (Results → Sizing and checks).' }),
-  num('inductorRippleRatio', TARGET_LABELS.inductorRippleRatio, '', { optional: true, help: 'Sizes the inductor and is checked at every input-voltage corner (empty: 0.3, common practice; Results → Sizing and checks).' }),
+  num('inductorRippleRatio', TARGET_LABELS.inductorRippleRatio, '%', { optional: true, help: 'Sizes the inductor and is checked at every input-voltage corner (empty: 30 %, common practice; Results → Sizing and checks).' }),
 ];
 
 export const KIND_CHOICE: ChoiceSpec = {
@@ -143,12 +143,12 @@ export const PHASE_FIELDS: FieldSpec[] = [
 
 export const MARGIN_FIELDS: FieldSpec[] = [
   num('temperatureMarginK', MARGIN_LABELS.temperatureMarginK, 'K'),
-  num('rippleCurrentDerating', MARGIN_LABELS.rippleCurrentDerating, ''),
-  num('resistorPowerDerating', MARGIN_LABELS.resistorPowerDerating, ''),
-  num('voltageDerating', MARGIN_LABELS.voltageDerating, ''),
-  num('currentDerating', MARGIN_LABELS.currentDerating, '', {
+  num('rippleCurrentDerating', MARGIN_LABELS.rippleCurrentDerating, '%'),
+  num('resistorPowerDerating', MARGIN_LABELS.resistorPowerDerating, '%'),
+  num('voltageDerating', MARGIN_LABELS.voltageDerating, '%'),
+  num('currentDerating', MARGIN_LABELS.currentDerating, '%', {
     optional: true,
-    help: 'Switch, rectifier and inductor RMS current ratings; empty: 0.8 (common practice). Isat is not derated.',
+    help: 'Switch, rectifier and inductor RMS current ratings; empty: 80 % (common practice). Isat is not derated.',
   }),
   num('requiredLifeHours', MARGIN_LABELS.requiredLifeHours, 'h', { optional: true }),
 ];

@@ -1,7 +1,8 @@
 /**
  * Declarative description of editable fields, so one set of components edits every part kind, the
  * specification, the thermal paths and the margins. `key` is relative to the object being edited.
- * `unit` is the SI symbol shown after the value and passed to parseEngineering.
+ * `unit` is the SI symbol shown after the value and passed to parseEngineering; "%" marks a fraction
+ * entered and shown in percent (editor/percent-entry.ts), stored as the fraction.
  */
 export interface NumberSpec {
   type: 'number';

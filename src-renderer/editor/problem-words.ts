@@ -58,7 +58,10 @@ export function partProblemWords(problem: Problem, kind: PartKind): string {
 function wordsWith(problem: Problem, name: FieldName | null, relabel: (path: string) => string, paths: RegExp | null): string {
   const key = String(pathSegments(problem.path).at(-1) ?? '');
   if (name) {
-    const range = rangeWords(problem.allowed, key, (text) => (paths ? text.replace(paths, relabel) : text));
+    const plain = (text: string) => (paths ? text.replace(paths, relabel) : text);
+    // A percent field's bounds are plain fractions in the validator's words: say them in percent too.
+    const bound = name.unit === '%' ? (text: string) => (/^[-+]?\d*\.?\d+(?:e[-+]?\d+)?$/i.test(text.trim()) ? formatEngineering(Number(text), '%', 4) : plain(text)) : plain;
+    const range = rangeWords(problem.allowed, key, bound);
     if (range !== null) return `${name.label}: ${shownValue(problem.value, name.unit)}; must be ${range}.`;
   }
   const message = pathMessage(problem);

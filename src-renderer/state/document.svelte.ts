@@ -43,6 +43,8 @@ export class DocumentStore {
   undoLabel: string | null = $state(null);
   redoLabel: string | null = $state(null);
 
+  /** False from loading an invalid draft (a blank design) until it first validates: no results to show yet. */
+  validSinceLoad = $state(true);
   dirty = $derived(this.revision !== this.savedRevision);
   valid = $derived(this.problems.length === 0);
   /** Validation problems by dotted field path, for showing them in place. */
@@ -132,6 +134,7 @@ export class DocumentStore {
     this.filePath = filePath;
     this.#sync();
     this.savedRevision = dirty ? -1 : this.revision;
+    this.validSinceLoad = this.valid;
     // A restored draft that fails validation keeps the previous results (or, at start, shows none valid).
     if (!this.valid && this.lastValid === undefined) this.lastValid = this.shown = design;
   }
@@ -159,7 +162,10 @@ export class DocumentStore {
     this.design = design;
     this.committed = design;
     this.problems = check.ok ? [] : check.problems;
-    if (check.ok) this.lastValid = check.design;
+    if (check.ok) {
+      this.lastValid = check.design;
+      this.validSinceLoad = true;
+    }
     if (this.shown !== this.lastValid) {
       this.shown = this.lastValid;
       this.shownRevision++;

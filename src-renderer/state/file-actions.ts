@@ -5,6 +5,7 @@
 import type { MenuCommand, OpenedFile } from '../../shared-model/index.ts';
 import { designText, readDesignText, readRecoveryText, recoveryText, suggestFileName } from './design-file.ts';
 import { UNTITLED } from './document.svelte.ts';
+import type { DesignTemplate } from './new-design.ts';
 import type { Workspace } from './workspace.svelte.ts';
 
 /** Tag of the messages that concern the draft's invalid fields: they leave when it is valid. */
@@ -24,13 +25,26 @@ export async function confirmDiscard(ws: Workspace, action: string): Promise<boo
   );
 }
 
+/** "New": asks first when there are unsaved changes, then offers the blanks and demos (NewDesignDialog). */
 export async function newDesign(ws: Workspace): Promise<void> {
   if (!(await confirmDiscard(ws, 'Starting a new design'))) return;
-  ws.doc.load({ ...structuredClone(ws.demoDesign), name: 'New design', revision: 'A', author: '', notes: '' }, UNTITLED, null);
+  ws.choosingNew = true;
+}
+
+/** Starts the chosen blank or demo copy as an unsaved, untitled document. */
+export async function startDesign(ws: Workspace, template: DesignTemplate): Promise<void> {
+  const design = structuredClone(template.design);
+  ws.doc.load(design, suggestFileName(UNTITLED, design.name), null);
+  ws.stash = {};
   ws.results.reset();
   ws.screen = 'design';
+  ws.resultsWide = false;
   await clearRecovery(ws);
-  ws.messages.info('New design started from the demo values.');
+  ws.messages.info(
+    template.id.startsWith('blank-')
+      ? `New blank design: fill in the ${ws.doc.problems.length} fields marked in the editor (or replace each part with one from the library).`
+      : `New design from the demo “${template.label}”.`,
+  );
 }
 
 export async function openDesign(ws: Workspace): Promise<void> {

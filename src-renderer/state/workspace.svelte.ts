@@ -42,6 +42,8 @@ export class Workspace {
   /** The results column takes the editor's room too ("Widen"); Escape or the same button returns. */
   resultsWide = $state(false);
   recoveryOffer: RecoveryOffer | null = $state(null);
+  /** "New" is offering its blanks and demos (shell/NewDesignDialog.svelte). */
+  choosingNew = $state(false);
   /** Set by the menu's report commands; the report screen prints or saves once its report is shown. */
   reportRequest: ReportRequest | null = $state(null);
   /** Parts set aside by rectifier or sense-resistor switches, restored when switching back. */

@@ -48,7 +48,7 @@ describe('sizing and checks on screen', () => {
   it('a 5 % ripple target fails the 4.7 µH inductor and the row names the inductance the target needs', () =>
     suite.run(async ({ page }) => {
       await showSizing(page);
-      await pasteInto(page, 'spec.targets.inductorRippleRatio', '0.05');
+      await pasteInto(page, 'spec.targets.inductorRippleRatio', '5 %'); // a percent field (issue 16 §4)
       await page.locator('#results-sizing').scrollIntoViewIfNeeded();
       await page.locator('[data-testid="design-checks"] tr[data-check-id="inductor-ripple-ratio"][data-status="fail"]').waitFor({ timeout: 60_000 });
       const d = demoDesign();
