@@ -8,7 +8,7 @@ export const RESULT_SECTIONS = [
   { id: 'phases', label: 'Phases' },
   { id: 'operating', label: 'Operating point' },
   { id: 'sizing', label: 'Sizing and checks' },
-  { id: 'mission', label: 'Mission profile' },
+  { id: 'mission', label: 'Over the mission' },
   { id: 'frequency', label: 'Frequency and grid' },
   { id: 'tolerance', label: 'Tolerance' },
   { id: 'compare', label: 'Compare parts' },

@@ -87,7 +87,8 @@ describe('a Coss(VDS) curve in the editor', () => {
       const curve = page.locator('.curve[data-path="parts.switch.outputCapacitance.points"]');
       const note = curve.locator('.note.invalid').first();
       await note.waitFor();
-      expect(await note.textContent()).toContain('Point 3'); // the sentence of shared-model/design/rules-parts.ts names the point
-      expect(await note.textContent()).toContain('must not rise with VDS');
+      // The table rule's sentence names the table by its on-screen label, the point, the value and the bound (Coss falls with VDS: common practice).
+      expect(await note.textContent()).toContain('Control switch — Coss(VDS) points, point 3');
+      expect(await note.textContent()).toContain('Coss: 2 nF; must be at most 600 pF');
     }));
 });

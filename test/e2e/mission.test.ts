@@ -1,6 +1,6 @@
 /**
  * Issue 11 §4 on screen: the mission-profile editor starts from a published weighting set, takes a
- * battery capacity, and Results → Mission profile shows the weighted efficiency, energy lost per day and
+ * battery capacity, and Results → Over the mission shows the weighted efficiency, energy lost per day and
  * battery share the engine computes (the engine run here in Node on the same design); the four-point
  * set's weighted efficiency is the plain mean of the efficiencies at 25, 50, 75 and 100 % load (US 10 CFR
  * 430 Subpart B, Appendix Z). Shares that do not add up to 1 get a message naming the column by its

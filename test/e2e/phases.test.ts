@@ -115,8 +115,11 @@ describe('the Phases section of the results', () => {
           await settled(page);
           await page.locator('#results-phases').scrollIntoViewIfNeeded();
           const phased = evaluateDesign(demoDesign('multiphase-buck')).phased!; // the engine in Node, an independent run
-          const heads = await page.getByTestId('phase-losses').locator('thead th').allInnerTexts();
-          expect(heads.map((h) => h.split('\n')[0])).toEqual(['Part', 'Phase 1 (worst, +5 %)', 'Phase 2', 'Phase 3', 'Phase 4', 'Shared', 'Total']);
+          const heads = page.getByTestId('phase-losses').locator('thead th');
+          // The section fills in once it is on screen (results render lazily): wait for the headings.
+          await expect
+            .poll(async () => (await heads.allInnerTexts()).map((h) => h.split('\n')[0]), { timeout: 30_000 })
+            .toEqual(['Part', 'Phase 1 (worst, +5 %)', 'Phase 2', 'Phase 3', 'Phase 4', 'Shared', 'Total']);
           const total = Number(await page.getByTestId('phase-losses').locator('tfoot td').last().getAttribute('data-value'));
           closeTo(total, phased.totalLoss, 1e-9, 0); // engine evaluatePhases in Node
           const hot = page.getByTestId('phase-temperatures').locator('tr[data-part="switch"]');

@@ -41,6 +41,7 @@ async function inViewport(locator: Locator): Promise<boolean> {
 
 async function noViolations(app: AppSession, screen: string, tag: string): Promise<void> {
   const violations = await axeViolations(app.page);
+  if (violations.length > 0) console.log(JSON.stringify(violations));
   expect(violations, `axe on ${screen} at ${tag}`).toEqual([]); // issue 16: axe-core 0 violations of any impact
   await app.screenshot(`walk-${screen}-${tag}`, { fullPage: false });
 }
